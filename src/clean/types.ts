@@ -60,8 +60,12 @@ export interface Catalogue {
   files: string[]; // input file names, as given
 }
 
+/** Why a row was set aside: unreadable, breaking a validity rule, or a superseded duplicate. */
+export type RejectKind = 'parse' | 'invalid' | 'duplicate';
+
 /** One input row set aside: why, where, and the raw text. */
 export interface Reject {
+  kind: RejectKind;
   file: string;
   line: number; // 1-based
   reason: string;

@@ -1,0 +1,188 @@
+/**
+ * Builds a columnar Catalogue row by row: validates, completes the element set, computes
+ * quality flags, and settles duplicate designations (newest epoch kept, the others
+ * rejected with a reason that names the row kept). Columns grow by doubling; no object
+ * is kept per row. Every row offered is either accepted or rejected: read = accepted +
+ * rejected holds at every moment.
+ */
+import { RAD_PER_DEG } from '../core/constants.js';
+import type { OrbitRow } from '../io/types.js';
+import { completeElements, type CompleteElements } from './derivedElements.js';
+import { qualityWord } from './qualityFlags.js';
+import { DEFAULT_QUALITY, DEFAULT_VALIDITY, type QualityThresholds, type ValidityLimits } from './thresholds.js';
+import { KIND_ASTEROID, KIND_COMET, qualityBit, type Catalogue, type Reject } from './types.js';
+import { invalidReason } from './validate.js';
+
+const DUPLICATE_KEPT = qualityBit('duplicate-kept');
+const FLOAT_COLUMNS = [
+  'epochJdTT', 'a', 'q', 'e', 'i', 'node', 'peri', 'meanAnomaly', 'tpJdTT', 'H',
+  'uncertainty', 'nObs', 'arcDays',
+] as const;
+type FloatColumn = (typeof FLOAT_COLUMNS)[number];
+
+/** Key under which two rows are the same body: the number if any, else the readable designation. */
+export function designationKey(row: OrbitRow): string {
+  if (Number.isFinite(row.number)) return `#${row.number}`;
+  return row.designation.trim().replace(/\s+/g, ' ').toUpperCase();
+}
+
+export interface BuilderOptions {
+  validity?: Partial<ValidityLimits>;
+  quality?: Partial<QualityThresholds>;
+}
+
+export class CatalogueBuilder {
+  private readonly validity: ValidityLimits;
+  private readonly thresholds: QualityThresholds;
+  private readonly elements: CompleteElements = { aAu: NaN, qAu: NaN, meanAnomalyRad: NaN, tpJdTT: NaN };
+  private readonly slotByKey = new Map<string, number>();
+  private capacity = 0;
+  private cols!: Record<FloatColumn, Float64Array>;
+  private kind: Uint8Array = new Uint8Array(0);
+  private quality: Uint32Array = new Uint32Array(0);
+  private fileIndex: Uint16Array = new Uint16Array(0);
+  private source: Uint32Array = new Uint32Array(0);
+  private readonly designation: string[] = [];
+  private readonly files: string[] = [];
+  private readonly fileSlot = new Map<string, number>();
+  size = 0;
+  read = 0;
+  readonly rejects: Reject[] = [];
+
+  constructor(options: BuilderOptions = {}) {
+    this.validity = { ...DEFAULT_VALIDITY, ...options.validity };
+    this.thresholds = { ...DEFAULT_QUALITY, ...options.quality };
+    this.grow(1 << 12);
+  }
+
+  get accepted(): number {
+    return this.size;
+  }
+
+  /** Record a row the io layer could not parse (it counts as read and rejected). */
+  rejectUnparsed(file: string, line: number, reason: string, text: string): void {
+    this.read++;
+    this.rejects.push({ kind: 'parse', file, line, reason, text });
+  }
+
+  /** Offer a parsed row. Returns true if it is now in the catalogue. */
+  add(row: OrbitRow, file: string, line: number, text: string): boolean {
+    this.read++;
+    const reason = invalidReason(row, this.validity);
+    if (reason !== null) {
+      this.rejects.push({ kind: 'invalid', file, line, reason, text });
+      return false;
+    }
+    const key = designationKey(row);
+    const existing = this.slotByKey.get(key);
+    if (existing !== undefined) return this.settleDuplicate(existing, row, file, line, text);
+    if (this.size === this.capacity) this.grow(this.capacity * 2);
+    const slot = this.size++;
+    this.slotByKey.set(key, slot);
+    this.designation.push(row.designation);
+    this.write(slot, row, file, line);
+    return true;
+  }
+
+  private settleDuplicate(slot: number, row: OrbitRow, file: string, line: number, text: string): boolean {
+    const keptFile = this.files[this.fileIndex[slot]];
+    const keptLine = this.source[slot];
+    let kept = false;
+    if (row.epochJdTT > this.cols.epochJdTT[slot]) {
+      // The new row is newer: it takes the slot; the row it replaces is reported. Its raw
+      // text is no longer held (rows are not kept as text), so the reject names it instead.
+      this.rejects.push({
+        kind: 'duplicate',
+        file: keptFile,
+        line: keptLine,
+        reason: `duplicate designation ${row.designation}: older epoch than ${file}:${line}, which is kept`,
+        text: `${this.designation[slot]} (epoch JD ${this.cols.epochJdTT[slot]})`,
+      });
+      this.designation[slot] = row.designation;
+      this.write(slot, row, file, line);
+      kept = true;
+    } else {
+      this.rejects.push({
+        kind: 'duplicate', file, line, text,
+        reason: `duplicate designation ${row.designation}: epoch not newer than ${keptFile}:${keptLine}, which is kept`,
+      });
+    }
+    this.quality[slot] |= DUPLICATE_KEPT;
+    return kept;
+  }
+
+  private write(slot: number, row: OrbitRow, file: string, line: number): void {
+    const el = this.elements;
+    completeElements(row, el);
+    const c = this.cols;
+    c.epochJdTT[slot] = row.epochJdTT;
+    c.a[slot] = el.aAu;
+    c.q[slot] = el.qAu;
+    c.e[slot] = row.e;
+    c.i[slot] = row.iDeg * RAD_PER_DEG;
+    c.node[slot] = row.nodeDeg * RAD_PER_DEG;
+    c.peri[slot] = row.periDeg * RAD_PER_DEG;
+    c.meanAnomaly[slot] = el.meanAnomalyRad;
+    c.tpJdTT[slot] = el.tpJdTT;
+    c.H[slot] = row.H;
+    c.uncertainty[slot] = row.uncertainty;
+    c.nObs[slot] = row.nObs;
+    c.arcDays[slot] = row.arcDays;
+    this.kind[slot] = row.kind === 'comet' ? KIND_COMET : KIND_ASTEROID;
+    this.quality[slot] = qualityWord(row, this.thresholds);
+    this.fileIndex[slot] = this.fileNumber(file);
+    this.source[slot] = line;
+  }
+
+  private fileNumber(file: string): number {
+    let k = this.fileSlot.get(file);
+    if (k === undefined) {
+      k = this.files.length;
+      if (k > 0xffff) throw new RangeError('more than 65 535 input files');
+      this.files.push(file);
+      this.fileSlot.set(file, k);
+    }
+    return k;
+  }
+
+  private grow(capacity: number): void {
+    const next = {} as Record<FloatColumn, Float64Array>;
+    for (const name of FLOAT_COLUMNS) {
+      next[name] = new Float64Array(capacity);
+      if (this.cols) next[name].set(this.cols[name].subarray(0, this.size));
+    }
+    this.cols = next;
+    this.kind = resized(this.kind, capacity, this.size) as Uint8Array;
+    this.quality = resized(this.quality, capacity, this.size) as Uint32Array;
+    this.fileIndex = resized(this.fileIndex, capacity, this.size) as Uint16Array;
+    this.source = resized(this.source, capacity, this.size) as Uint32Array;
+    this.capacity = capacity;
+  }
+
+  /** The finished catalogue (columns trimmed to size; the builder must not be used after). */
+  finish(): Catalogue {
+    const n = this.size;
+    const c = this.cols;
+    return {
+      size: n,
+      designation: this.designation,
+      kind: this.kind.slice(0, n),
+      epochJdTT: c.epochJdTT.slice(0, n),
+      a: c.a.slice(0, n), q: c.q.slice(0, n), e: c.e.slice(0, n), i: c.i.slice(0, n),
+      node: c.node.slice(0, n), peri: c.peri.slice(0, n), meanAnomaly: c.meanAnomaly.slice(0, n),
+      tpJdTT: c.tpJdTT.slice(0, n), H: c.H.slice(0, n), uncertainty: c.uncertainty.slice(0, n),
+      nObs: c.nObs.slice(0, n), arcDays: c.arcDays.slice(0, n),
+      quality: this.quality.slice(0, n), fileIndex: this.fileIndex.slice(0, n),
+      source: this.source.slice(0, n), files: this.files.slice(),
+    };
+  }
+}
+
+type TypedColumn = Uint8Array | Uint16Array | Uint32Array;
+
+function resized(old: TypedColumn, capacity: number, used: number): TypedColumn {
+  const Ctor = old.constructor as new (n: number) => TypedColumn;
+  const next = new Ctor(capacity);
+  next.set(old.subarray(0, used));
+  return next;
+}

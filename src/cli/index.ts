@@ -1,0 +1,4 @@
+export * from './scan.js';
+export * from './loadCatalogue.js';
+export * from './optionParsers.js';
+export * from './program.js';

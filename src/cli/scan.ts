@@ -1,0 +1,156 @@
+/**
+ * `wayward scan`: read orbit dumps, clean them, run the detectors, write the outputs.
+ * The command converts options and prints; the work is in runScan, which tests call.
+ */
+import { mkdir } from 'node:fs/promises';
+import { join, relative } from 'node:path';
+import { Command, Option } from 'commander';
+import type { PlanetName } from '../core/constants.js';
+import type { Progress } from '../core/progress.js';
+import { DETECTORS, detectorById } from '../detect/registry.js';
+import { TISSERAND_DEFAULTS } from '../detect/tisserand.js';
+import type { Candidate, DetectorOptions } from '../detect/types.js';
+import type { InputFormat } from '../io/types.js';
+import { writeCandidatesCsv, writeCandidatesJsonl } from '../report/candidateFiles.js';
+import { rankInPlace } from '../report/rank.js';
+import { reportMarkdown } from '../report/reportMarkdown.js';
+import { sortRejectsInPlace, writeRejectsCsv } from '../report/rejectsFile.js';
+import { buildSummary } from '../report/summary.js';
+import { writeFileAtomic } from '../report/atomicWrite.js';
+import type { ScanSummary } from '../report/types.js';
+import { loadCatalogue } from './loadCatalogue.js';
+import {
+  parseColumnMapping, parseDetectorList, parseFiniteNumber, parseInputFormat, parseOutputFormat,
+  parsePlanet, parsePositiveInteger,
+} from './optionParsers.js';
+import { demoFiles, packageVersion } from './packageInfo.js';
+import { scanStdoutTable } from './scanTable.js';
+import { terminalProgress } from './terminalProgress.js';
+
+export interface ScanOptions {
+  files: string[]; // empty: the bundled demo catalogue
+  out: string;
+  detectors: string[];
+  planet: PlanetName;
+  tisserandBoundary: number;
+  tisserandMargin: number;
+  includeExterior: boolean;
+  inputFormat?: InputFormat;
+  columns?: Record<string, string>;
+  reproducible: boolean; // leave timings and memory out of summary.json
+}
+
+export interface ScanResult {
+  summary: ScanSummary;
+  ranked: Candidate[];
+  errors: string[]; // one line per unreadable input
+  outDir: string;
+}
+
+function seconds(t0: bigint): number {
+  return Number((Number(process.hrtime.bigint() - t0) / 1e9).toFixed(3));
+}
+
+/** Run a whole scan and write its outputs. Throws only on output failures. */
+export async function runScan(opts: ScanOptions, progress?: Progress): Promise<ScanResult> {
+  const tStart = process.hrtime.bigint();
+  const files = opts.files.length > 0 ? opts.files : demoFiles().map((f) => relative(process.cwd(), f) || f);
+  const timing: Record<string, number> = {};
+  let t0 = process.hrtime.bigint();
+  progress?.start('reading');
+  const loaded = await loadCatalogue(files, { format: opts.inputFormat, columns: opts.columns });
+  progress?.end();
+  timing.readSeconds = seconds(t0);
+  const detOpts: DetectorOptions = {
+    tisserand: {
+      ...TISSERAND_DEFAULTS,
+      planet: opts.planet,
+      boundary: opts.tisserandBoundary,
+      margin: opts.tisserandMargin,
+      includeExterior: opts.includeExterior,
+    },
+  };
+  const detectors = opts.detectors.map((id) => {
+    const d = detectorById(id);
+    if (!d) throw new RangeError(`unknown detector ${id}`);
+    return d;
+  });
+  const candidates: Candidate[] = [];
+  for (const d of detectors) {
+    t0 = process.hrtime.bigint();
+    candidates.push(...d.run(loaded.catalogue, detOpts, progress));
+    timing[`${d.id}Seconds`] = seconds(t0);
+  }
+  const ranked = rankInPlace(candidates, opts.detectors);
+  sortRejectsInPlace(loaded.rejects, files);
+  t0 = process.hrtime.bigint();
+  await mkdir(opts.out, { recursive: true });
+  await writeCandidatesJsonl(join(opts.out, 'candidates.jsonl'), ranked, loaded.catalogue);
+  await writeCandidatesCsv(join(opts.out, 'candidates.csv'), ranked, loaded.catalogue);
+  await writeRejectsCsv(join(opts.out, 'rejects.csv'), loaded.rejects);
+  const options = {
+    detectors: opts.detectors, planet: opts.planet,
+    tisserand: detOpts.tisserand, inputFormat: opts.inputFormat ?? 'auto', columns: opts.columns ?? {},
+  };
+  const base = {
+    version: packageVersion(), files: loaded.files, catalogue: loaded.catalogue, rejects: loaded.rejects,
+    candidates: ranked, detectors: opts.detectors, options,
+  };
+  const forReport = buildSummary(base);
+  await writeFileAtomic(join(opts.out, 'report.md'), reportMarkdown(forReport, ranked, detectors, loaded.catalogue));
+  timing.writeSeconds = seconds(t0);
+  timing.totalSeconds = seconds(tStart);
+  const summary = opts.reproducible
+    ? forReport
+    : buildSummary({ ...base, timing, peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024) });
+  await writeFileAtomic(join(opts.out, 'summary.json'), JSON.stringify(summary, null, 2) + '\n');
+  return { summary, ranked, errors: loaded.errors.map((e) => e.message), outDir: opts.out };
+}
+
+interface RawScanFlags {
+  out: string;
+  detectors: string[];
+  planet: PlanetName;
+  tisserandBoundary: number;
+  tisserandMargin: number;
+  includeExterior: boolean;
+  inputFormat?: InputFormat;
+  columns?: Record<string, string>;
+  format: 'text' | 'json';
+  quiet: boolean;
+  reproducible: boolean;
+  top: number;
+  progress: boolean;
+}
+
+export function registerScan(program: Command): void {
+  program
+    .command('scan')
+    .description('screen orbit dumps for bodies whose orbits do not behave (default: the bundled demo catalogue)')
+    .argument('[files...]', "orbit dumps: one-line orbit or comet export format, CSV/TSV; '-' reads standard input; gzip read transparently")
+    .option('-o, --out <dir>', 'output directory', 'wayward-out')
+    .option('-d, --detectors <list>', `comma-separated detectors (${DETECTORS.map((d) => d.id).join(', ')})`, parseDetectorList, DETECTORS.map((d) => d.id))
+    .option('--planet <name>', 'planet the Tisserand parameter is taken with respect to', parsePlanet, TISSERAND_DEFAULTS.planet)
+    .option('--tisserand-boundary <T>', 'asteroid/comet dividing value of T (Levison 1996)', parseFiniteNumber, TISSERAND_DEFAULTS.boundary)
+    .option('--tisserand-margin <dT>', 'half-width of the boundary band flagged rather than ranked', parseFiniteNumber, TISSERAND_DEFAULTS.margin)
+    .option('--include-exterior', 'also screen bodies whose perihelion lies beyond the planet', false)
+    .addOption(new Option('--input-format <format>', 'force the input format instead of detecting it').argParser(parseInputFormat))
+    .option('--columns <map>', 'CSV column mapping, e.g. designation=objname,a=semimajor', parseColumnMapping)
+    .option('--format <format>', "stdout: 'text' table or the summary as 'json'", parseOutputFormat, 'text')
+    .option('-q, --quiet', 'print nothing on stdout but errors', false)
+    .option('--top <n>', 'candidates per detector in the stdout table', parsePositiveInteger, 5)
+    .option('--reproducible', 'leave timings and memory out of summary.json (byte-identical reruns)', false)
+    .option('--no-progress', 'no progress line on stderr (shown only on a terminal anyway)')
+    .action(async (files: string[], flags: RawScanFlags) => {
+      const result = await runScan({ files, ...flags }, terminalProgress(flags.progress && !flags.quiet));
+      for (const line of result.errors) process.stderr.write(`wayward: ${line}\n`);
+      if (flags.format === 'json') process.stdout.write(JSON.stringify(result.summary, null, 2) + '\n');
+      else if (!flags.quiet) process.stdout.write(scanStdoutTable(result, flags.top, useColour()));
+      if (result.errors.length > 0) process.exitCode = 1;
+    });
+}
+
+/** Colour only on a terminal and never when NO_COLOR is set (no-color.org convention). */
+function useColour(): boolean {
+  return Boolean(process.stdout.isTTY) && !('NO_COLOR' in process.env && process.env.NO_COLOR !== '');
+}

@@ -1,0 +1,21 @@
+/**
+ * Ranking of candidates: by detector (in the order they ran), then score descending, then
+ * designation and catalogue row, so the order is total and the output deterministic.
+ */
+import type { Candidate } from '../detect/types.js';
+
+/** Sort candidates in place into report order. */
+export function rankInPlace(candidates: Candidate[], detectorOrder: readonly string[]): Candidate[] {
+  const pos = new Map(detectorOrder.map((id, k) => [id, k]));
+  return candidates.sort((x, y) =>
+    (pos.get(x.detector) ?? 1e9) - (pos.get(y.detector) ?? 1e9) ||
+    y.score - x.score ||
+    (x.designation < y.designation ? -1 : x.designation > y.designation ? 1 : 0) ||
+    x.index - y.index,
+  );
+}
+
+/** The best `n` candidates of one detector, boundary cases excluded unless nothing else. */
+export function topOf(candidates: readonly Candidate[], detector: string, n: number): Candidate[] {
+  return candidates.filter((c) => c.detector === detector && c.score > 0).slice(0, n);
+}

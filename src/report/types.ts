@@ -1,0 +1,30 @@
+/** Types of the report layer: the run summary written to summary.json. */
+
+export interface RowCounts {
+  read: number; // data rows offered (header and blank lines excluded)
+  accepted: number; // rows in the catalogue
+  rejected: number; // rows set aside (see rejects.csv); read = accepted + rejected
+}
+
+export interface FileAccount {
+  file: string; // as given on the command line ('-' for standard input)
+  format: string; // detected or forced input format; 'unreadable' when it could not be read
+  sha256: string; // of the bytes read ('' when unreadable)
+  rows: RowCounts;
+  skippedLines: number; // header, separator and blank lines
+  error?: string; // why the file could not be read
+}
+
+export interface ScanSummary {
+  tool: 'wayward';
+  version: string;
+  rows: RowCounts;
+  files: FileAccount[];
+  rejects: { byKind: Record<string, number>; byReason: Record<string, number> };
+  qualityFlags: Record<string, number>; // accepted rows carrying each flag
+  candidates: Record<string, Record<string, number>>; // detector → class → count
+  detectors: string[];
+  options: Record<string, unknown>;
+  timing?: Record<string, number>; // seconds per stage (omitted with --reproducible)
+  resources?: { peakRssMb: number }; // omitted with --reproducible
+}
