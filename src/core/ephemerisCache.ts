@@ -1,0 +1,165 @@
+/**
+ * Chebyshev cache over any Ephemeris: each body's heliocentric position is fitted on
+ * fixed-length segments (length and degree per body) at the Chebyshev nodes (chebyshev.ts);
+ * a query finds its segment by index in O(1) and sums one short polynomial. Segments are
+ * fitted lazily, at first touch, so short uses of a long span pay only for what they read;
+ * `fillAll()` builds every segment up front.
+ *
+ * Velocities: by default the derivative of the position polynomial ('derivative'); the
+ * alternative 'fitted' keeps a second polynomial fitted to the source's velocities at the
+ * same nodes (twice the memory, slower to evaluate). Measured over 1900–2100: 'fitted'
+ * agrees with the series' analytic velocities to ~1e-12 au/day, 'derivative' to ~1e-10
+ * au/day (0.2 mm/s). The default is 'derivative': accurate far beyond the theory itself,
+ * half the memory, and exactly the rate of the cached positions (self-consistent for
+ * integrators). The test suite measures both modes.
+ */
+import type { Ephemeris, EphemerisBody } from './types.js';
+import { assertInSpan, ephemerisBodyIndex, EPHEMERIS_BODIES } from './ephemerisBody.js';
+import { chebyshevFit, chebyshevNode, chebyshevValue3 } from './chebyshev.js';
+
+/** Segment layout of one body: nominal segment length (days) and coefficients per axis. */
+export interface ChebyshevLayout {
+  segmentDays: number;
+  coefficients: number;
+}
+
+/**
+ * Default layouts, indexed like EPHEMERIS_BODIES, chosen by measurement against the direct
+ * VSOP87 series (1900–2100, 480 random dates per body): worst position difference 1e-11 au
+ * (≈ 1.5 m) for every body, worst velocity difference ≤ 1e-10 au/day with 'derivative'.
+ * The outer planets cannot use long segments: their heliocentric series carry indirect
+ * terms of the Sun's reflex motion with periods of 15–90 days at 3e-8–8e-8 au (e.g. Neptune
+ * R, a 14.7-day term of 3e-8 au), so a 128-day segment of degree 11 misses by ~1e-7 au.
+ * Earth (the geocentre, not the EMB) carries the monthly lunar wobble like 'emb'.
+ */
+export const DEFAULT_CHEBYSHEV_LAYOUTS: readonly ChebyshevLayout[] = [
+  { segmentDays: 16, coefficients: 16 }, // mercury
+  { segmentDays: 32, coefficients: 14 }, // venus
+  { segmentDays: 16, coefficients: 16 }, // earth
+  { segmentDays: 32, coefficients: 12 }, // mars
+  { segmentDays: 48, coefficients: 14 }, // jupiter
+  { segmentDays: 48, coefficients: 14 }, // saturn
+  { segmentDays: 48, coefficients: 14 }, // uranus
+  { segmentDays: 32, coefficients: 14 }, // neptune
+  { segmentDays: 16, coefficients: 16 }, // emb
+];
+
+export type CacheVelocityMode = 'derivative' | 'fitted';
+
+export interface EphemerisCacheOptions {
+  startJdTDB: number;
+  endJdTDB: number;
+  velocity?: CacheVelocityMode;
+  /** Per-body layouts indexed like EPHEMERIS_BODIES; defaults to DEFAULT_CHEBYSHEV_LAYOUTS. */
+  layouts?: readonly ChebyshevLayout[];
+}
+
+/** One body's segments: coefficients of segment s at s*stride; built[s] = 1 once fitted. */
+interface BodyTable {
+  segmentCount: number;
+  segmentDays: number; // actual length: span / segmentCount ≤ the nominal length
+  n: number;
+  stride: number;
+  coeffs: Float64Array;
+  built: Uint8Array;
+}
+
+export class EphemerisCache implements Ephemeris {
+  readonly name: string;
+  readonly startJdTDB: number;
+  readonly endJdTDB: number;
+  readonly velocity: CacheVelocityMode;
+  private readonly tables: BodyTable[];
+  private readonly nodeStates: Float64Array;
+  private segmentsFitted = 0;
+
+  constructor(readonly source: Ephemeris, opts: EphemerisCacheOptions) {
+    const { startJdTDB, endJdTDB } = opts;
+    if (!(Number.isFinite(startJdTDB) && Number.isFinite(endJdTDB) && startJdTDB < endJdTDB)) {
+      throw new RangeError(`EphemerisCache: bad span [${startJdTDB}, ${endJdTDB}]`);
+    }
+    if (startJdTDB < source.startJdTDB || endJdTDB > source.endJdTDB) {
+      throw new RangeError(
+        `EphemerisCache: span [${startJdTDB}, ${endJdTDB}] exceeds the source '${source.name}' ` +
+          `span [${source.startJdTDB}, ${source.endJdTDB}]`,
+      );
+    }
+    this.startJdTDB = startJdTDB;
+    this.endJdTDB = endJdTDB;
+    this.velocity = opts.velocity ?? 'derivative';
+    this.name = `Chebyshev cache over ${source.name}`;
+    const layouts = opts.layouts ?? DEFAULT_CHEBYSHEV_LAYOUTS;
+    if (layouts.length !== EPHEMERIS_BODIES.length) {
+      throw new RangeError(`EphemerisCache: need ${EPHEMERIS_BODIES.length} layouts, got ${layouts.length}`);
+    }
+    this.tables = layouts.map((l) => this.makeTable(l));
+    const nMax = Math.max(...layouts.map((l) => l.coefficients));
+    this.nodeStates = new Float64Array(6 * nMax);
+  }
+
+  private makeTable(layout: ChebyshevLayout): BodyTable {
+    const { segmentDays, coefficients: n } = layout;
+    if (!(segmentDays > 0) || !Number.isInteger(n) || n < 2) {
+      throw new RangeError(`EphemerisCache: bad layout segmentDays=${segmentDays}, coefficients=${n}`);
+    }
+    const span = this.endJdTDB - this.startJdTDB;
+    const segmentCount = Math.max(1, Math.ceil(span / segmentDays));
+    const stride = (this.velocity === 'fitted' ? 6 : 3) * n;
+    return {
+      segmentCount,
+      segmentDays: span / segmentCount,
+      n,
+      stride,
+      coeffs: new Float64Array(segmentCount * stride),
+      built: new Uint8Array(segmentCount),
+    };
+  }
+
+  /** Number of segments fitted so far (all bodies). */
+  get fittedSegmentCount(): number {
+    return this.segmentsFitted;
+  }
+
+  /** Fit every segment of every body now (instead of at first touch). */
+  fillAll(): void {
+    for (let b = 0; b < this.tables.length; b++) {
+      const t = this.tables[b];
+      for (let s = 0; s < t.segmentCount; s++) if (t.built[s] === 0) this.fitSegment(b, s);
+    }
+  }
+
+  helioState(body: EphemerisBody, jdTDB: number, out: Float64Array, offset = 0): void {
+    const b = ephemerisBodyIndex(body);
+    assertInSpan(this.name, jdTDB, this.startJdTDB, this.endJdTDB);
+    const t = this.tables[b];
+    const u = (jdTDB - this.startJdTDB) / t.segmentDays;
+    let s = Math.floor(u);
+    if (s >= t.segmentCount) s = t.segmentCount - 1; // jdTDB === endJdTDB
+    if (t.built[s] === 0) this.fitSegment(b, s);
+    const x = 2 * (u - s) - 1;
+    const base = s * t.stride;
+    if (this.velocity === 'fitted') {
+      chebyshevValue3(t.coeffs, base, t.n, x, 0, out, offset);
+      chebyshevValue3(t.coeffs, base + 3 * t.n, t.n, x, 0, out, offset + 3);
+    } else {
+      chebyshevValue3(t.coeffs, base, t.n, x, 2 / t.segmentDays, out, offset);
+    }
+  }
+
+  /** Sample the source at the n Chebyshev nodes of segment s and fit each axis. */
+  private fitSegment(b: number, s: number): void {
+    const t = this.tables[b];
+    const body = EPHEMERIS_BODIES[b];
+    const half = 0.5 * t.segmentDays;
+    const mid = this.startJdTDB + (s + 0.5) * t.segmentDays;
+    const states = this.nodeStates;
+    for (let k = 0; k < t.n; k++) {
+      this.source.helioState(body, mid + half * chebyshevNode(k, t.n), states, 6 * k);
+    }
+    const base = s * t.stride;
+    const axes = this.velocity === 'fitted' ? 6 : 3;
+    for (let a = 0; a < axes; a++) chebyshevFit(states, a, 6, t.n, t.coeffs, base + a * t.n);
+    t.built[s] = 1;
+    this.segmentsFitted++;
+  }
+}
