@@ -1,0 +1,122 @@
+/**
+ * Parser of one line of the one-line comet orbit export format (published column layout of
+ * the one-line comet orbit export format; columns in ./cometExportLayout.ts). The row gets
+ * kind 'comet', the perihelion time and distance; mean anomaly and mean motion are NaN;
+ * a = q / (1 − e) when e < 1 (NaN otherwise). The designation is the canonical readable
+ * form of the packed columns 1–12 ('1P', 'C/1995 O1'); the name is taken from columns
+ * 103–158 ('Halley' from '1P/Halley', 'Hale-Bopp' from 'C/1995 O1 (Hale-Bopp)').
+ */
+import { calendarToJd } from '../core/julian.js';
+import { COMET_COLUMNS as C, COMET_ORBIT_TYPES } from './cometExportLayout.js';
+import { fieldText, isBlankField, parseFixedNumber } from './fixedField.js';
+import { isSeparatorLine } from './orbitExportLine.js';
+import { unpackComet } from './packedComet.js';
+import { InputError, type LineOutcome, type OrbitRow } from './types.js';
+
+type Field = readonly [number, number];
+
+function fail(file: string, lineNo: number, line: string, field: Field, reason: string): never {
+  throw new InputError(file, lineNo, field[0] + 1, reason, line);
+}
+
+const columnsOf = (f: Field): string => (f[1] - f[0] === 1 ? `column ${f[1]}` : `columns ${f[0] + 1}–${f[1]}`);
+
+function optionalNumber(line: string, f: Field, what: string, file: string, lineNo: number): number {
+  const v = parseFixedNumber(line, f[0], f[1]);
+  if (Number.isNaN(v) && !isBlankField(line, f[0], f[1])) {
+    fail(file, lineNo, line, f, `${what} is not a number: '${fieldText(line, f[0], f[1])}' (${columnsOf(f)})`);
+  }
+  return v;
+}
+
+function requiredNumber(line: string, f: Field, what: string, file: string, lineNo: number): number {
+  if (line.length <= f[0]) fail(file, lineNo, line, f, `line ends at column ${line.length}, before ${what} (${columnsOf(f)})`);
+  const v = optionalNumber(line, f, what, file, lineNo);
+  if (Number.isNaN(v)) fail(file, lineNo, line, f, `missing ${what} (${columnsOf(f)})`);
+  return v;
+}
+
+/** Columns 1–12 and 103–158: packed and readable designation, name. */
+function readDesignation(line: string, row: OrbitRow, file: string, lineNo: number): void {
+  const type = line[C.type[0]] ?? ' ';
+  if (!COMET_ORBIT_TYPES.includes(type) || type === ' ') {
+    fail(file, lineNo, line, C.type, `orbit type '${type}' is not one of ${COMET_ORBIT_TYPES.split('').join(', ')} (${columnsOf(C.type)})`);
+  }
+  const num = fieldText(line, C.number[0], C.number[1]);
+  const prov = fieldText(line, C.provisional[0], C.provisional[1]);
+  const packed = num !== '' ? num.padStart(4, '0') + type : type + prov;
+  const unpacked = unpackComet(packed);
+  if (unpacked === '') {
+    const f: Field = num !== '' ? C.number : C.provisional;
+    fail(file, lineNo, line, f, `unknown packed comet designation form: '${line.slice(0, C.provisional[1]).trim()}' (columns 1–12)`);
+  }
+  row.packedDesignation = packed;
+  row.designation = unpacked;
+  const readable = fieldText(line, C.readable[0], C.readable[1]);
+  const named = num !== '' ? /^\d+[PDI]\/(.+)$/.exec(readable) : /^\S+ \S+ \((.+)\)$/.exec(readable);
+  row.name = named ? named[1] : '';
+}
+
+/** Columns 15–29: perihelion date in TT, day with fraction. */
+function readPerihelion(line: string, row: OrbitRow, file: string, lineNo: number): void {
+  const year = requiredNumber(line, C.tpYear, 'perihelion year', file, lineNo);
+  const month = requiredNumber(line, C.tpMonth, 'perihelion month', file, lineNo);
+  const day = requiredNumber(line, C.tpDay, 'perihelion day', file, lineNo);
+  if (!Number.isInteger(year) || !Number.isInteger(month) || month < 1 || month > 12 || day < 1 || day >= 32) {
+    fail(file, lineNo, line, C.tpYear, `perihelion date is not a calendar date: '${fieldText(line, C.tpYear[0], C.tpDay[1])}' (columns 15–29)`);
+  }
+  row.tpJdTT = calendarToJd(year, month, day);
+}
+
+/** Columns 82–89: epoch YYYYMMDD (0h TT); blank → NaN. */
+function readEpoch(line: string, row: OrbitRow, file: string, lineNo: number): void {
+  const f: Field = [C.epochYear[0], C.epochDay[1]];
+  const text = fieldText(line, f[0], f[1]);
+  row.epochJdTT = NaN;
+  if (text === '') return;
+  const m = /^(\d{4})(\d{2})(\d{2})$/.exec(text);
+  const month = m ? Number(m[2]) : 0;
+  const day = m ? Number(m[3]) : 0;
+  if (!m || month < 1 || month > 12 || day < 1 || day > 31) {
+    fail(file, lineNo, line, f, `epoch is not YYYYMMDD: '${text}' (columns 82–89)`);
+  }
+  row.epochJdTT = calendarToJd(Number(m[1]), month, day);
+}
+
+function clearAsteroidFields(row: OrbitRow): void {
+  row.number = NaN;
+  row.meanAnomalyDeg = NaN;
+  row.meanMotionDegPerDay = NaN;
+  row.uncertainty = NaN;
+  row.uncertaintyCode = '';
+  row.nObs = NaN;
+  row.nOpp = NaN;
+  row.arcDays = NaN;
+  row.firstObsYear = NaN;
+  row.lastObsYear = NaN;
+  row.lastObsJdTT = NaN;
+  row.rmsArcsec = NaN;
+}
+
+/**
+ * Fill `row` from one comet line. 'skip' for blank and dashed separator lines; InputError
+ * for a data line it cannot read.
+ */
+export function parseCometExportLine(line: string, row: OrbitRow, file: string, lineNo: number): LineOutcome {
+  if (isSeparatorLine(line)) return 'skip';
+  row.kind = 'comet';
+  readDesignation(line, row, file, lineNo);
+  readPerihelion(line, row, file, lineNo);
+  row.qAu = requiredNumber(line, C.q, 'perihelion distance', file, lineNo);
+  row.e = requiredNumber(line, C.e, 'eccentricity', file, lineNo);
+  row.periDeg = requiredNumber(line, C.peri, 'argument of perihelion', file, lineNo);
+  row.nodeDeg = requiredNumber(line, C.node, 'longitude of the ascending node', file, lineNo);
+  row.iDeg = requiredNumber(line, C.incl, 'inclination', file, lineNo);
+  row.aAu = row.e < 1 ? row.qAu / (1 - row.e) : NaN;
+  readEpoch(line, row, file, lineNo);
+  row.H = optionalNumber(line, C.H, 'absolute magnitude', file, lineNo);
+  row.G = optionalNumber(line, C.G, 'slope parameter', file, lineNo);
+  row.reference = fieldText(line, C.reference[0], line.length); // real references run past 168
+  clearAsteroidFields(row);
+  return 'row';
+}

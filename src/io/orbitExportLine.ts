@@ -1,0 +1,188 @@
+/**
+ * Parser of one line of the one-line minor-planet orbit export format (published column
+ * layout of the one-line minor-planet orbit export format; columns in ./orbitExportLayout.ts).
+ * Real lines are 165–202 characters: fields past the end of a line are absent (NaN / '').
+ * Blank lines and lines of dashes → 'skip'; header text before the dashed line is the file
+ * reader's business (./headerGate.ts). Every field of the scratch row is assigned, so the
+ * row needs no reset between lines. A bad data line throws InputError (file, line, column).
+ *
+ * Missing semimajor axis: computed from the mean daily motion n by Kepler's third law in
+ * the Gaussian system, n = k a^(-3/2) (k = GAUSS_K in rad/day, massless body; Gauss 1809,
+ * Theoria Motus, art. 6–7), i.e. a = (k / n)^(2/3) with n in rad/day.
+ * Arc as first–last years: arcDays = (last − first) × 365.25, good to about a year.
+ */
+import { GAUSS_K, RAD_PER_DEG } from '../core/constants.js';
+import { calendarToJd } from '../core/julian.js';
+import { PackedFormError } from './errors.js';
+import { fieldText, isBlankField, parseFixedNumber } from './fixedField.js';
+import { ORBIT_COLUMNS as C } from './orbitExportLayout.js';
+import { unpackDesignation } from './packedDesignation.js';
+import { unpackEpochJd } from './packedEpoch.js';
+import { unpackNumber } from './packedNumber.js';
+import { InputError, type LineOutcome, type OrbitRow } from './types.js';
+
+type Field = readonly [number, number];
+
+/** True for a blank line or a separator line made of dashes (and spaces). */
+export function isSeparatorLine(line: string): boolean {
+  let dashes = 0;
+  for (let k = 0; k < line.length; k++) {
+    const c = line.charCodeAt(k);
+    if (c === 45) dashes++;
+    else if (c !== 32 && c !== 9) return false;
+  }
+  return dashes === 0 || dashes >= 5;
+}
+
+function fail(file: string, lineNo: number, line: string, field: Field, reason: string): never {
+  throw new InputError(file, lineNo, field[0] + 1, reason, line);
+}
+
+function columnsOf(field: Field): string {
+  return `columns ${field[0] + 1}–${field[1]}`;
+}
+
+/** Number from `field`, NaN when blank; InputError when present but not a number. */
+function optionalNumber(line: string, field: Field, what: string, file: string, lineNo: number): number {
+  const v = parseFixedNumber(line, field[0], field[1]);
+  if (Number.isNaN(v) && !isBlankField(line, field[0], field[1])) {
+    fail(file, lineNo, line, field, `${what} is not a number: '${fieldText(line, field[0], field[1])}' (${columnsOf(field)})`);
+  }
+  return v;
+}
+
+/** Number from `field`; InputError naming the field when blank, cut off, or not a number. */
+function requiredNumber(line: string, field: Field, what: string, file: string, lineNo: number): number {
+  if (line.length <= field[0]) {
+    fail(file, lineNo, line, field, `line ends at column ${line.length}, before ${what} (${columnsOf(field)})`);
+  }
+  const v = optionalNumber(line, field, what, file, lineNo);
+  if (Number.isNaN(v)) fail(file, lineNo, line, field, `missing ${what} (${columnsOf(field)})`);
+  return v;
+}
+
+/**
+ * End of the readable designation: column 194, or the end of the line when the text runs
+ * across the 194|195 boundary without a space (real lines do this for long names after a
+ * six-digit number, e.g. '(541132) Leleakuhonua'); there is then no last-observation date.
+ */
+function readableEnd(line: string): number {
+  const b = C.readable[1];
+  return line.length > b && line.charCodeAt(b - 1) !== 32 && line.charCodeAt(b) !== 32 ? line.length : b;
+}
+
+/** Designation fields: packed (1–7) and readable (167–194). */
+function readDesignation(line: string, row: OrbitRow, file: string, lineNo: number): void {
+  const packed = fieldText(line, C.packed[0], C.packed[1]);
+  if (packed === '') fail(file, lineNo, line, C.packed, `blank packed designation (${columnsOf(C.packed)})`);
+  let unpacked: string;
+  try {
+    unpacked = unpackDesignation(packed);
+  } catch (err) {
+    if (err instanceof PackedFormError) fail(file, lineNo, line, C.packed, err.message);
+    throw err;
+  }
+  row.packedDesignation = packed;
+  row.number = unpackNumber(packed);
+  const readable = fieldText(line, C.readable[0], readableEnd(line));
+  row.designation = readable === '' ? unpacked : readable;
+  row.name = '';
+  if (Number.isFinite(row.number) && readable !== '') {
+    const m = /^\((\d+)\)\s*(.*)$/.exec(readable);
+    if (!m || Number(m[1]) !== row.number) {
+      fail(file, lineNo, line, C.readable, `readable designation '${readable}' disagrees with packed ${packed} = ${unpacked}`);
+    }
+    row.name = m[2];
+  }
+}
+
+/** Arc field: 'YYYY-YYYY' or 'NNNN days'; blank → NaN. */
+function readArc(line: string, row: OrbitRow, file: string, lineNo: number): void {
+  row.firstObsYear = NaN;
+  row.lastObsYear = NaN;
+  row.arcDays = NaN;
+  const text = fieldText(line, C.arc[0], C.arc[1]);
+  if (text === '') return;
+  const years = /^(\d{4})-(\d{4})$/.exec(text);
+  if (years) {
+    row.firstObsYear = Number(years[1]);
+    row.lastObsYear = Number(years[2]);
+    row.arcDays = (row.lastObsYear - row.firstObsYear) * 365.25;
+    return;
+  }
+  const days = /^(\d+) days$/.exec(text);
+  if (!days) fail(file, lineNo, line, C.arc, `arc is neither 'YYYY-YYYY' nor 'N days': '${text}' (${columnsOf(C.arc)})`);
+  row.arcDays = Number(days[1]);
+}
+
+function readLastObs(line: string, row: OrbitRow, file: string, lineNo: number): void {
+  row.lastObsJdTT = NaN;
+  if (readableEnd(line) !== C.readable[1]) return;
+  const text = fieldText(line, C.lastObs[0], C.lastObs[1]);
+  if (text === '') return;
+  const m = /^(\d{4})(\d{2})(\d{2})$/.exec(text);
+  const month = m ? Number(m[2]) : 0;
+  const day = m ? Number(m[3]) : 0;
+  if (!m || month < 1 || month > 12 || day < 1 || day > 31) {
+    fail(file, lineNo, line, C.lastObs, `date of last observation is not YYYYMMDD: '${text}' (${columnsOf(C.lastObs)})`);
+  }
+  row.lastObsJdTT = calendarToJd(Number(m[1]), month, day);
+}
+
+function readUncertainty(line: string, row: OrbitRow): void {
+  const c = C.U[0] < line.length ? line.charCodeAt(C.U[0]) : 32;
+  row.uncertainty = c >= 48 && c <= 57 ? c - 48 : NaN;
+  row.uncertaintyCode = c === 32 || (c >= 48 && c <= 57) ? '' : line[C.U[0]];
+}
+
+/** Elements block (epoch .. a); a from n when blank. */
+function readElements(line: string, row: OrbitRow, file: string, lineNo: number): void {
+  if (line.length <= C.epoch[0]) {
+    fail(file, lineNo, line, C.epoch, `line ends at column ${line.length}, before the epoch (${columnsOf(C.epoch)})`);
+  }
+  const epoch = fieldText(line, C.epoch[0], C.epoch[1]);
+  if (epoch === '') fail(file, lineNo, line, C.epoch, `missing epoch (${columnsOf(C.epoch)})`);
+  try {
+    row.epochJdTT = unpackEpochJd(epoch);
+  } catch (err) {
+    if (err instanceof PackedFormError) fail(file, lineNo, line, C.epoch, err.message);
+    throw err;
+  }
+  row.meanAnomalyDeg = requiredNumber(line, C.M, 'mean anomaly', file, lineNo);
+  row.periDeg = requiredNumber(line, C.peri, 'argument of perihelion', file, lineNo);
+  row.nodeDeg = requiredNumber(line, C.node, 'longitude of the ascending node', file, lineNo);
+  row.iDeg = requiredNumber(line, C.incl, 'inclination', file, lineNo);
+  row.e = requiredNumber(line, C.e, 'eccentricity', file, lineNo);
+  row.meanMotionDegPerDay = optionalNumber(line, C.n, 'mean daily motion', file, lineNo);
+  row.aAu = optionalNumber(line, C.a, 'semimajor axis', file, lineNo);
+  if (Number.isNaN(row.aAu)) {
+    const n = row.meanMotionDegPerDay;
+    if (!(n > 0)) {
+      fail(file, lineNo, line, C.a, `missing semimajor axis and no positive mean daily motion to derive it (${columnsOf(C.n)}, ${columnsOf(C.a)})`);
+    }
+    row.aAu = Math.cbrt((GAUSS_K / (n * RAD_PER_DEG)) ** 2); // a = (k/n)^(2/3)
+  }
+}
+
+/**
+ * Fill `row` from one line. Returns 'row' or 'skip' (blank / dashed separator line);
+ * throws InputError for a data line it cannot read.
+ */
+export function parseOrbitExportLine(line: string, row: OrbitRow, file: string, lineNo: number): LineOutcome {
+  if (isSeparatorLine(line)) return 'skip';
+  row.kind = 'asteroid';
+  readDesignation(line, row, file, lineNo);
+  row.H = optionalNumber(line, C.H, 'absolute magnitude H', file, lineNo);
+  row.G = optionalNumber(line, C.G, 'slope parameter G', file, lineNo);
+  readElements(line, row, file, lineNo);
+  row.qAu = NaN;
+  row.tpJdTT = NaN;
+  readUncertainty(line, row);
+  row.reference = fieldText(line, C.reference[0], C.reference[1]);
+  row.nObs = optionalNumber(line, C.nObs, 'number of observations', file, lineNo);
+  row.nOpp = optionalNumber(line, C.nOpp, 'number of oppositions', file, lineNo);
+  readArc(line, row, file, lineNo);
+  row.rmsArcsec = optionalNumber(line, C.rms, 'rms residual', file, lineNo);
+  readLastObs(line, row, file, lineNo);
+  return 'row';
+}
