@@ -111,14 +111,15 @@ function candidateFor(
   const sym = `T_${opts.planet[0].toUpperCase()}`;
   const side = comet ? 'above' : 'below';
   const catalogueWord = comet ? 'comet-catalogue' : 'asteroid-catalogue';
+  const article = comet ? 'a' : 'an';
   const pct = (100 * falseAlarm).toPrecision(2);
   const iDeg = cat.i[k] * DEG_PER_RAD;
   const orbit = Number.isFinite(cat.a[k]) && cat.a[k] > 0
     ? `a = ${cat.a[k].toFixed(3)} au, e = ${cat.e[k].toFixed(3)}, i = ${iDeg.toFixed(1)}°`
     : `q = ${cat.q[k].toFixed(3)} au, e = ${cat.e[k].toFixed(3)}, i = ${iDeg.toFixed(1)}°`;
   const why = boundaryCase
-    ? `${sym} = ${tValue.toFixed(3)} on a ${catalogueWord} orbit (${orbit}) is ${side} ${opts.boundary} but within the ±${opts.margin} boundary band.`
-    : `${sym} = ${tValue.toFixed(3)} on a ${catalogueWord} orbit (${orbit}) is ${beyond.toFixed(3)} ${side} the ${opts.boundary} boundary; ${pct}% of ${refSize} screened ${catalogueWord} bodies are as far.`;
+    ? `${sym} = ${tValue.toFixed(3)} on ${article} ${catalogueWord} orbit (${orbit}) is ${side} ${opts.boundary} but within the ±${opts.margin} boundary band.`
+    : `${sym} = ${tValue.toFixed(3)} on ${article} ${catalogueWord} orbit (${orbit}) is ${beyond.toFixed(3)} ${side} the ${opts.boundary} boundary; ${pct}% of ${refSize} screened ${catalogueWord} bodies are as far.`;
   return {
     designation: cat.designation[k],
     index: k,

@@ -1,0 +1,83 @@
+import { describe, expect, it } from 'vitest';
+import { CatalogueBuilder } from '../../src/clean/catalogueBuilder.js';
+import { coorbitalHalfWidth, tisserandDetector, tisserandZone, TISSERAND_DEFAULTS } from '../../src/detect/tisserand.js';
+import { RAD_PER_DEG } from '../../src/core/constants.js';
+import { asteroidRow, cometRow } from '../clean/rowFactory.js';
+import type { OrbitRow } from '../../src/io/types.js';
+
+function run(rows: OrbitRow[], overrides: Partial<typeof TISSERAND_DEFAULTS> = {}) {
+  const b = new CatalogueBuilder();
+  rows.forEach((r, k) => b.add(r, 'synthetic', k + 1, ''));
+  const cat = b.finish();
+  return tisserandDetector.run(cat, { tisserand: { ...TISSERAND_DEFAULTS, ...overrides } });
+}
+
+describe('Tisserand screen (synthetic catalogue of invented bodies)', () => {
+  // A background of main-belt asteroids (T_J ≈ 3.2–3.6) and Jupiter-family comets (T_J < 3).
+  const background: OrbitRow[] = [];
+  for (let k = 0; k < 200; k++) {
+    background.push(asteroidRow({ designation: `bg${k}`, aAu: 2.2 + (k % 50) * 0.02, e: 0.05 + (k % 7) * 0.02 }));
+  }
+  for (let k = 0; k < 40; k++) {
+    background.push(cometRow({ designation: `jfc${k}`, qAu: 1.2 + (k % 10) * 0.1, e: 0.65 + (k % 5) * 0.03 }));
+  }
+
+  it('raises a comet-like asteroid and an asteroid-like comet, nothing from the background', () => {
+    const aco = asteroidRow({ designation: 'ACO', aAu: 3.4, e: 0.65, iDeg: 12 });
+    const mbc = cometRow({ designation: 'MBC', qAu: 2.7, e: 0.12, iDeg: 3 });
+    const out = run([...background, aco, mbc]);
+    expect(out.map((c) => [c.designation, c.class])).toEqual([
+      ['ACO', 'comet-like-T'],
+      ['MBC', 'asteroid-like-T'],
+    ]);
+    const [a, m] = out;
+    expect(a.details.T).toBeLessThan(2.95);
+    expect(m.details.T).toBeGreaterThan(3.05);
+    expect(a.score).toBeGreaterThan(0);
+    // The only asteroid this low in 201 screened asteroids: tail fraction (1+1)/(201+1).
+    expect(a.falseAlarm).toBeCloseTo(2 / 202, 8);
+    expect(a.why).toMatch(/^T_J = 2\.\d{3} on an asteroid-catalogue orbit \(a = 3\.400 au/);
+  });
+
+  it('flags bodies inside the ±margin band as boundary cases, ranked below anomalies', () => {
+    // a = 3.9, e = 0.33, i = 5° gives T_J just below 3 (outside the Hilda window: e ≥ 0.3).
+    const near = asteroidRow({ designation: 'NEAR', aAu: 3.9, e: 0.33, iDeg: 5 });
+    const out = run([...background, near]);
+    expect(out).toHaveLength(1);
+    expect(out[0].class).toBe('boundary');
+    expect(out[0].flags).toContain('tisserand-boundary');
+    expect(out[0].score).toBeLessThan(0);
+  });
+
+  it('does not screen Jupiter Trojans, Hildas or bodies beyond Jupiter (unless asked)', () => {
+    const trojan = asteroidRow({ designation: 'TROJAN', aAu: 5.2, e: 0.08, iDeg: 25 });
+    const hilda = asteroidRow({ designation: 'HILDA', aAu: 3.97, e: 0.2, iDeg: 8 });
+    const centaur = asteroidRow({ designation: 'CENTAUR', aAu: 12, e: 0.55, iDeg: 25, meanAnomalyDeg: 10 });
+    expect(run([...background, trojan, hilda, centaur])).toEqual([]);
+    const withExterior = run([...background, centaur], { includeExterior: true });
+    expect(withExterior.map((c) => c.designation)).toEqual(['CENTAUR']);
+  });
+
+  it('carries quality flags of poor orbits on every candidate', () => {
+    const poor = asteroidRow({ designation: 'POOR', aAu: 3.0, e: 0.7, iDeg: 30, nOpp: 1, arcDays: 4, nObs: 6, uncertainty: 9 });
+    const [c] = run([...background, poor]);
+    expect(c.flags).toEqual(['single-opposition', 'short-arc', 'few-observations', 'poor-uncertainty']);
+  });
+
+  it('takes T with respect to another planet on request', () => {
+    // An Earth-crossing body with T_E well below 3 (a = 1.8, e = 0.6, i = 40°).
+    const neo = asteroidRow({ designation: 'NEO', aAu: 1.8, e: 0.6, iDeg: 40 });
+    const out = run([neo], { planet: 'earth' });
+    expect(out[0].details.planet).toBe('earth');
+    expect(out[0].why.startsWith('T_E = ')).toBe(true);
+  });
+
+  it('zones: the co-orbital half-width is sqrt(8μ/3) (Murray & Dermott §3.9)', () => {
+    // μ_J ≈ 9.54e-4 → ≈ 0.0504 (from memory of Jupiter's mass ratio 1/1047.35).
+    expect(coorbitalHalfWidth('jupiter')).toBeCloseTo(Math.sqrt((8 * 9.538e-4) / 3), 4);
+    expect(tisserandZone('jupiter', 5.1, 5.1 * 0.5, 0.5, 0)).toBe('crossing');
+    expect(tisserandZone('jupiter', 5.1, 5.0, 0.02, 0)).toBe('coorbital');
+    expect(tisserandZone('jupiter', 3.97, 3.2, 0.2, 10 * RAD_PER_DEG)).toBe('hilda');
+    expect(tisserandZone('jupiter', -3, 1.2, 1.4, 0)).toBe('unbound');
+  });
+});
