@@ -22,6 +22,9 @@ function fail(file: string, lineNo: number, line: string, field: Field, reason: 
 const columnsOf = (f: Field): string => (f[1] - f[0] === 1 ? `column ${f[1]}` : `columns ${f[0] + 1}–${f[1]}`);
 
 function optionalNumber(line: string, f: Field, what: string, file: string, lineNo: number): number {
+  if (line.length > f[0] && line.length < f[1]) {
+    fail(file, lineNo, line, f, `line ends at column ${line.length}, inside ${what} (${columnsOf(f)})`);
+  }
   const v = parseFixedNumber(line, f[0], f[1]);
   if (Number.isNaN(v) && !isBlankField(line, f[0], f[1])) {
     fail(file, lineNo, line, f, `${what} is not a number: '${fieldText(line, f[0], f[1])}' (${columnsOf(f)})`);

@@ -44,6 +44,9 @@ function columnsOf(field: Field): string {
 
 /** Number from `field`, NaN when blank; InputError when present but not a number. */
 function optionalNumber(line: string, field: Field, what: string, file: string, lineNo: number): number {
+  if (line.length > field[0] && line.length < field[1]) {
+    fail(file, lineNo, line, field, `line ends at column ${line.length}, inside ${what} (${columnsOf(field)})`);
+  }
   const v = parseFixedNumber(line, field[0], field[1]);
   if (Number.isNaN(v) && !isBlankField(line, field[0], field[1])) {
     fail(file, lineNo, line, field, `${what} is not a number: '${fieldText(line, field[0], field[1])}' (${columnsOf(field)})`);
