@@ -40,6 +40,8 @@ declare module 'astronomia/data/vsop87Bsaturn' { const d: AstronomiaVsop87Data; 
 declare module 'astronomia/data/vsop87Buranus' { const d: AstronomiaVsop87Data; export default d; }
 declare module 'astronomia/data/vsop87Bneptune' { const d: AstronomiaVsop87Data; export default d; }
 declare module 'astronomia/data/elpMppDe' { const d: AstronomiaElpData; export default d; }
+/** The complete ELP/MPP02 (DE405) series; tests only, to measure the truncation above. */
+declare module 'astronomia/data/elpMppDeFull' { const d: AstronomiaElpData; export default d; }
 
 declare module 'astronomia/planetposition' {
   export class Planet {

@@ -1,0 +1,168 @@
+import { describe, expect, it } from 'vitest';
+import { KM_PER_AU } from '../../src/core/constants.js';
+import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
+import { EphemerisCache } from '../../src/core/ephemerisCache.js';
+import type { CacheVelocityMode } from '../../src/core/ephemerisCache.js';
+import { createEphemeris, sunBarycentricState } from '../../src/core/ephemeris.js';
+import { EPHEMERIS_BODIES } from '../../src/core/ephemerisBody.js';
+import type { EphemerisBody } from '../../src/core/types.js';
+import { JD_1900, JD_2100, randomDates } from './ephemerisTestDates.js';
+
+const source = new Vsop87Ephemeris();
+const MM_PER_S_PER_AU_PER_DAY = (KM_PER_AU * 1e6) / 86_400;
+
+/** Worst position (au) and velocity (au/day) difference, cache vs direct, per body. */
+function compare(mode: CacheVelocityMode, datesPerBody: number, seed: number) {
+  const cache = new EphemerisCache(source, { startJdTDB: JD_1900, endJdTDB: JD_2100, velocity: mode });
+  const a = new Float64Array(6);
+  const d = new Float64Array(6);
+  const rows: Array<{ body: EphemerisBody; pos: number; vel: number }> = [];
+  for (const body of EPHEMERIS_BODIES) {
+    let pos = 0;
+    let vel = 0;
+    for (const jd of randomDates(seed, datesPerBody)) {
+      cache.helioState(body, jd, a);
+      source.helioState(body, jd, d);
+      pos = Math.max(pos, Math.hypot(a[0] - d[0], a[1] - d[1], a[2] - d[2]));
+      vel = Math.max(vel, Math.hypot(a[3] - d[3], a[4] - d[4], a[5] - d[5]));
+    }
+    rows.push({ body, pos, vel });
+  }
+  const text = rows.map((r) => `${r.body} ${(r.pos * KM_PER_AU * 1000).toFixed(2)} m / ${(r.vel * MM_PER_S_PER_AU_PER_DAY).toFixed(3)} mm/s`);
+  console.log(`cache ('${mode}' velocities) vs direct VSOP87, 1900–2100, worst position / velocity: ${text.join(', ')}`);
+  return rows;
+}
+
+describe('Chebyshev cache over the direct series, 200-year span', () => {
+  it("agrees with the direct series to ≤ 1e-9 au and ≤ 1e-9 au/day ('derivative' velocities, default)", () => {
+    // Reference: the direct VSOP87B/ELP series (this project), itself checked against the
+    // published VSOP87 check values and astronomia in ephemerisVsop87.test.ts.
+    for (const r of compare('derivative', 60, 31)) {
+      expect(r.pos).toBeLessThan(1e-9);
+      expect(r.vel).toBeLessThan(1e-9);
+    }
+  });
+
+  it("agrees to ≤ 1e-9 au and ≤ 1e-11 au/day with separately fitted velocities ('fitted')", () => {
+    for (const r of compare('fitted', 30, 32)) {
+      expect(r.pos).toBeLessThan(1e-9);
+      expect(r.vel).toBeLessThan(1e-11);
+    }
+  });
+
+  it('is continuous across segment boundaries to the fit accuracy', () => {
+    const cache = new EphemerisCache(source, { startJdTDB: JD_1900, endJdTDB: JD_2100 });
+    const before = new Float64Array(6);
+    const after = new Float64Array(6);
+    let worst = 0;
+    // 16-day segments for Mercury: the span is cut into equal segments of ≤ 16 days.
+    const segmentDays = (JD_2100 - JD_1900) / Math.ceil((JD_2100 - JD_1900) / 16);
+    for (let s = 1; s < 40; s++) {
+      const edge = JD_1900 + 37 * s * segmentDays;
+      const eps = 1e-6; // day; both sides of the edge, in different segments
+      cache.helioState('mercury', edge - eps, before);
+      cache.helioState('mercury', edge + eps, after);
+      // Remove the motion over 2·eps (≈ 1e-7 au at Mercury's speed); the curvature term
+      // a·(2 eps)²/2 ≈ 1e-15 au is negligible.
+      let jump = 0;
+      for (let a = 0; a < 3; a++) jump = Math.hypot(jump, after[a] - before[a] - 2 * eps * before[3 + a]);
+      worst = Math.max(worst, jump);
+    }
+    console.log(`Mercury position jump across segment edges: ${(worst * KM_PER_AU * 1000).toFixed(2)} m`);
+    // Fit error on each side (≤ 1.3e-11 au measured) plus Julian-date quantization near
+    // 2.4e6 (≈ 5e-10 day × 0.03 au/day per side).
+    expect(worst).toBeLessThan(1e-10);
+  });
+
+  it('fits lazily: one query fits one segment; fillAll fits the rest', () => {
+    const cache = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_451_400 });
+    const out = new Float64Array(6);
+    expect(cache.fittedSegmentCount).toBe(0);
+    cache.helioState('jupiter', 2_451_100, out);
+    cache.helioState('jupiter', 2_451_101, out);
+    expect(cache.fittedSegmentCount).toBe(1);
+    cache.fillAll();
+    // 400 days: Mercury, Earth, EMB 25 segments each of 16 days; Venus, Mars, Neptune 13 of
+    // 32; Jupiter, Saturn, Uranus 9 of 48.
+    expect(cache.fittedSegmentCount).toBe(3 * 25 + 3 * 13 + 3 * 9);
+  });
+});
+
+describe('Earth–Moon barycentre', () => {
+  it('lies ≈ 4 670 km from the geocentre', () => {
+    // Common practice: the barycentre of the Earth–Moon system is ~4 671 km from the Earth's
+    // centre (from memory); with the Moon between 356 400 and 406 700 km (perigee/apogee
+    // extremes, common practice) divided by 1 + 81.3006 the offset stays in 4 330–4 945 km.
+    const eph = createEphemeris({ startJdTDB: JD_1900, endJdTDB: JD_2100 });
+    const e = new Float64Array(6);
+    const m = new Float64Array(6);
+    let sum = 0;
+    let min = Infinity;
+    let max = 0;
+    const dates = randomDates(33, 300);
+    for (const jd of dates) {
+      eph.helioState('earth', jd, e);
+      eph.helioState('emb', jd, m);
+      const km = Math.hypot(m[0] - e[0], m[1] - e[1], m[2] - e[2]) * KM_PER_AU;
+      sum += km;
+      min = Math.min(min, km);
+      max = Math.max(max, km);
+    }
+    console.log(`EMB − Earth: mean ${(sum / dates.length).toFixed(0)} km, range ${min.toFixed(0)}–${max.toFixed(0)} km`);
+    expect(Math.abs(sum / dates.length - 4671)).toBeLessThan(40);
+    expect(min).toBeGreaterThan(4330);
+    expect(max).toBeLessThan(4945);
+  });
+});
+
+describe('Sun about the barycentre', () => {
+  it('has a velocity that is the rate of its position (5-point stencil, h = 1 day)', () => {
+    // 4th-order central differences (common practice); the Sun's motion has periods of
+    // ≥ 88 days at 1e-8 au, so the stencil error is ≲ 1e-13 au/day.
+    const eph = createEphemeris({ startJdTDB: JD_1900, endJdTDB: JD_2100 });
+    const s = new Float64Array(30);
+    let worst = 0;
+    for (const jd of randomDates(34, 20, JD_1900 + 10, JD_2100 - 10)) {
+      for (let j = -2; j <= 2; j++) sunBarycentricState(eph, jd + j, s, 6 * (j + 2));
+      for (let a = 0; a < 3; a++) {
+        const d = (8 * (s[18 + a] - s[6 + a]) - (s[24 + a] - s[a])) / 12;
+        worst = Math.max(worst, Math.abs(d - s[15 + a]));
+      }
+    }
+    console.log(`Sun barycentric velocity vs position rate: ${(worst * MM_PER_S_PER_AU_PER_DAY).toFixed(4)} mm/s`);
+    expect(worst).toBeLessThan(1e-12);
+  });
+});
+
+describe('misuse', () => {
+  it('throws RangeError, naming the date and the span, outside the cached span', () => {
+    const eph = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_452_000 });
+    const out = new Float64Array(6);
+    expect(() => eph.helioState('earth', 2_450_999.9, out)).toThrow(RangeError);
+    expect(() => eph.helioState('earth', 2_452_000.1, out)).toThrow(/2452000\.1.*\[2451000, 2452000\]/);
+    expect(() => eph.helioState('earth', Number.NaN, out)).toThrow(RangeError);
+    // Both ends are inside.
+    eph.helioState('neptune', 2_451_000, out);
+    eph.helioState('neptune', 2_452_000, out);
+    expect(Number.isFinite(out[5])).toBe(true);
+  });
+
+  it('rejects spans beyond the source, empty spans, bad layouts and unknown bodies', () => {
+    const small = new Vsop87Ephemeris({ startJdTDB: 2_451_000, endJdTDB: 2_452_000 });
+    expect(() => createEphemeris({ startJdTDB: 2_450_000, endJdTDB: 2_451_500, source: small })).toThrow(RangeError);
+    expect(() => createEphemeris({ startJdTDB: 2_451_500, endJdTDB: 2_451_500 })).toThrow(RangeError);
+    expect(() => createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_452_000, layouts: [] })).toThrow(RangeError);
+    const eph = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_452_000 });
+    expect(() => eph.helioState('moon' as EphemerisBody, 2_451_500, new Float64Array(6))).toThrow(TypeError);
+  });
+
+  it('writes at the given offset and nowhere else', () => {
+    const eph = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_452_000 });
+    const out = new Float64Array(10).fill(-1);
+    eph.helioState('mars', 2_451_500, out, 2);
+    expect([out[0], out[1], out[8], out[9]]).toEqual([-1, -1, -1, -1]);
+    const direct = new Float64Array(6);
+    source.helioState('mars', 2_451_500, direct);
+    expect(Math.abs(out[2] - direct[0])).toBeLessThan(1e-9);
+  });
+});
