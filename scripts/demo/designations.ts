@@ -1,0 +1,81 @@
+/**
+ * Invented designations for the demo scenario, in the readable forms; the packed forms are
+ * made by the project's own packer (src/io). Numbered bodies get permanent numbers far above
+ * any real one (tilde-packed range); provisional designations use the years 2030–2032 only;
+ * comets get provisional comet designations in the same years.
+ *
+ * Provisional designation: year, half-month letter (A–Y without I, 24 letters, one per half
+ * month), second letter (A–Z without I, 25 letters) and cycle count (omitted when 0): the
+ * published scheme of provisional minor-planet designations (common practice).
+ */
+import { FIRST_INVENTED_NUMBER, LAST_TILDE_NUMBER, PROVISIONAL_YEARS } from './scenario.js';
+
+export const HALF_MONTH_LETTERS = 'ABCDEFGHJKLMNOPQRSTUVWXY';
+export const SECOND_LETTERS = 'ABCDEFGHJKLMNOPQRSTUVWXYZ';
+/** Cycle counts past 619 need the extended packed form; the demo stays below. */
+const MAX_CYCLE = 619;
+const PER_HALF_MONTH = (MAX_CYCLE + 1) * SECOND_LETTERS.length;
+
+/** Half-month index 0..23 of a calendar date (day 1–15 → first half). */
+export function halfMonthIndex(month: number, day: number): number {
+  return (month - 1) * 2 + (day >= 16 ? 1 : 0);
+}
+
+/**
+ * Hands out designations in order, never the same twice. One allocator per generated
+ * catalogue: its counters are its own (re-entrant, no module state).
+ */
+export class DesignationAllocator {
+  private nextNumber = FIRST_INVENTED_NUMBER;
+  private readonly provisionalCount = new Uint32Array(PROVISIONAL_YEARS.length * 24);
+  private readonly cometCount = new Uint32Array(PROVISIONAL_YEARS.length * 24);
+
+  /** Next invented permanent number. */
+  number(): number {
+    if (this.nextNumber > LAST_TILDE_NUMBER) {
+      throw new RangeError(`DesignationAllocator: invented numbers exhausted at ${this.nextNumber}`);
+    }
+    return this.nextNumber++;
+  }
+
+  /**
+   * Next provisional designation of a half month, e.g. '2031 AB123'. When a half month is
+   * full (cycle count past 619) the following half months are tried in turn.
+   */
+  provisional(year: number, halfMonth: number): string {
+    const slot = this.slot(year, halfMonth);
+    const total = this.provisionalCount.length;
+    for (let k = 0; k < total; k++) {
+      const s = (slot + k) % total;
+      const n = this.provisionalCount[s];
+      if (n < PER_HALF_MONTH) {
+        this.provisionalCount[s] = n + 1;
+        const y = PROVISIONAL_YEARS[Math.floor(s / 24)];
+        return provisionalText(y, s % 24, n);
+      }
+    }
+    throw new RangeError('DesignationAllocator: provisional designations exhausted');
+  }
+
+  /** Next comet designation of a half month, e.g. 'P/2031 C2'. */
+  comet(orbitType: 'C' | 'P', year: number, halfMonth: number): string {
+    const slot = this.slot(year, halfMonth);
+    const n = ++this.cometCount[slot];
+    return `${orbitType}/${year} ${HALF_MONTH_LETTERS[halfMonth]}${n}`;
+  }
+
+  private slot(year: number, halfMonth: number): number {
+    const y = PROVISIONAL_YEARS.indexOf(year as (typeof PROVISIONAL_YEARS)[number]);
+    if (y < 0 || !(halfMonth >= 0 && halfMonth < 24)) {
+      throw new RangeError(`DesignationAllocator: no invented designations for ${year}, half month ${halfMonth}`);
+    }
+    return y * 24 + halfMonth;
+  }
+}
+
+/** Readable provisional designation of the n-th body (0-based) of a half month. */
+export function provisionalText(year: number, halfMonth: number, n: number): string {
+  const cycle = Math.floor(n / SECOND_LETTERS.length);
+  const letter = SECOND_LETTERS[n % SECOND_LETTERS.length];
+  return `${year} ${HALF_MONTH_LETTERS[halfMonth]}${letter}${cycle > 0 ? cycle : ''}`;
+}

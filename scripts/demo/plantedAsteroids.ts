@@ -1,0 +1,91 @@
+/**
+ * The list of bodies planted in the asteroid file, drawn up front (a few dozen): which class,
+ * which detector should raise it, which section it sits in, its elements and quality, and a
+ * note for truth.csv. Good-quality plants sit among numbered or multi-opposition orbits;
+ * poor ones among one-opposition orbits.
+ */
+import type { CoorbitalKind, PlanetLongitudes } from './plantedCoorbitals.js';
+import { sampleEarthCoorbital, samplePlanetTrojan } from './plantedCoorbitals.js';
+import type { OutlierVariant } from './plantedOutliers.js';
+import { sampleFamilyOutlier } from './plantedOutliers.js';
+import type { CometLikeVariant } from './plantedTisserand.js';
+import { sampleBoundaryAsteroid, sampleCometLikeAsteroid } from './plantedTisserand.js';
+import { samplePoorQuality, sampleQuality } from './quality.js';
+import type { Random } from './random.js';
+import type { Section } from './scenario.js';
+import type { DemoElements, DemoQuality } from './types.js';
+import { emptyElements, emptyQuality } from './types.js';
+import { roundAsteroidElements } from './orbitRows.js';
+
+export interface PlantedAsteroid {
+  plantedClass: string;
+  detector: string;
+  section: Section;
+  el: DemoElements; // rounded as written
+  q: DemoQuality;
+  note: string;
+}
+
+const COMET_LIKE_PLAN: readonly (readonly [CometLikeVariant, boolean])[] = [
+  ...Array.from({ length: 13 }, () => ['ordinary', false] as const),
+  ...Array.from({ length: 5 }, () => ['ordinary', true] as const),
+  ...Array.from({ length: 5 }, () => ['high-inclination', false] as const),
+  ['retrograde', false], ['retrograde', false],
+];
+const COORBITAL_PLAN: readonly CoorbitalKind[] = [
+  'quasi-satellite', 'quasi-satellite', 'quasi-satellite', 'horseshoe', 'horseshoe', 'tadpole-L4', 'tadpole-L5',
+];
+const OUTLIER_PLAN: readonly OutlierVariant[] = [
+  'isolated-high-inclination', 'isolated-high-inclination', 'unusual-eccentricity',
+  'kirkwood-gap', 'family-halo', 'family-halo',
+];
+
+function goodSection(random: Random): Section {
+  return random() < 0.5 ? 'numbered' : 'multiOpposition';
+}
+
+function finish(
+  random: Random, plantedClass: string, detector: string, poor: boolean, el: DemoElements, note: string,
+): PlantedAsteroid {
+  roundAsteroidElements(el);
+  const q = emptyQuality();
+  const section: Section = poor ? 'oneOpposition' : goodSection(random);
+  if (poor) samplePoorQuality(random, q);
+  else sampleQuality(random, section, el.H, q);
+  const caveat = poor ? `; poor orbit (one opposition, ${q.arcDays} d, ${q.nObs} obs, U ${q.uncertainty}): caveats must show` : '';
+  return { plantedClass, detector, section, el, q, note: note + caveat };
+}
+
+const fmt = (x: number): string => (Math.round(x * 10) / 10).toFixed(1);
+
+/** Every planted asteroid-file body, in a fixed order (deterministic for a seed). */
+export function planAsteroidPlants(random: Random, lon: PlanetLongitudes): PlantedAsteroid[] {
+  const out: PlantedAsteroid[] = [];
+  for (const [variant, poor] of COMET_LIKE_PLAN) {
+    const el = emptyElements();
+    sampleCometLikeAsteroid(random, variant, el);
+    out.push(finish(random, 'comet-like-T', 'tisserand', poor, el, `asteroid on a cometary orbit (${variant})`));
+  }
+  for (let k = 0; k < 3; k++) {
+    const el = emptyElements();
+    sampleBoundaryAsteroid(random, el);
+    out.push(finish(random, 'boundary', 'tisserand', false, el, 'T_J within 0.05 of 3: boundary band, not an anomaly'));
+  }
+  for (const kind of COORBITAL_PLAN) {
+    const el = emptyElements();
+    const d = sampleEarthCoorbital(random, kind, lon, el);
+    out.push(finish(random, kind, 'coorbital', false, el, `Earth co-orbital, lambda - lambda_Earth = ${fmt(d)} deg at epoch`));
+  }
+  for (const [planet, l4] of [['mars', false], ['mars', false], ['mars', true], ['neptune', true], ['neptune', true], ['neptune', false]] as const) {
+    const el = emptyElements();
+    const d = samplePlanetTrojan(random, planet, l4, lon, el);
+    out.push(finish(random, l4 ? 'tadpole-L4' : 'tadpole-L5', 'coorbital', false, el,
+      `${planet === 'mars' ? 'Mars' : 'Neptune'} Trojan, lambda - lambda_planet = ${fmt(d)} deg at epoch`));
+  }
+  OUTLIER_PLAN.forEach((variant, k) => {
+    const el = emptyElements();
+    sampleFamilyOutlier(random, variant, k, el);
+    out.push(finish(random, 'family-outlier', 'families', false, el, `main-belt body away from every family (${variant})`));
+  });
+  return out;
+}
