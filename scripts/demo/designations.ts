@@ -12,9 +12,13 @@ import { FIRST_INVENTED_NUMBER, LAST_TILDE_NUMBER, PROVISIONAL_YEARS } from './s
 
 export const HALF_MONTH_LETTERS = 'ABCDEFGHJKLMNOPQRSTUVWXY';
 export const SECOND_LETTERS = 'ABCDEFGHJKLMNOPQRSTUVWXYZ';
-/** Cycle counts past 619 need the extended packed form; the demo stays below. */
-const MAX_CYCLE = 619;
-const PER_HALF_MONTH = (MAX_CYCLE + 1) * SECOND_LETTERS.length;
+/**
+ * Designations per half month: cycle counts past 619 are written in the extended packed
+ * form (underscore-prefixed; the count of designations past cycle 619 in four base-62
+ * digits), so a half month holds 620·25 + 62^4 of them. Only the 1.5 M-row benchmark dumps
+ * get past cycle 619.
+ */
+const PER_HALF_MONTH = 620 * SECOND_LETTERS.length + 62 ** 4;
 
 /** Half-month index 0..23 of a calendar date (day 1–15 → first half). */
 export function halfMonthIndex(month: number, day: number): number {
@@ -38,23 +42,15 @@ export class DesignationAllocator {
     return this.nextNumber++;
   }
 
-  /**
-   * Next provisional designation of a half month, e.g. '2031 AB123'. When a half month is
-   * full (cycle count past 619) the following half months are tried in turn.
-   */
+  /** Next provisional designation of a half month, e.g. '2031 AB123'. */
   provisional(year: number, halfMonth: number): string {
     const slot = this.slot(year, halfMonth);
-    const total = this.provisionalCount.length;
-    for (let k = 0; k < total; k++) {
-      const s = (slot + k) % total;
-      const n = this.provisionalCount[s];
-      if (n < PER_HALF_MONTH) {
-        this.provisionalCount[s] = n + 1;
-        const y = PROVISIONAL_YEARS[Math.floor(s / 24)];
-        return provisionalText(y, s % 24, n);
-      }
+    const n = this.provisionalCount[slot];
+    if (n >= PER_HALF_MONTH) {
+      throw new RangeError(`DesignationAllocator: provisional designations of ${year} half month ${halfMonth} exhausted`);
     }
-    throw new RangeError('DesignationAllocator: provisional designations exhausted');
+    this.provisionalCount[slot] = n + 1;
+    return provisionalText(year, halfMonth, n);
   }
 
   /** Next comet designation of a half month, e.g. 'P/2031 C2'. */
