@@ -1,0 +1,116 @@
+import { mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import { describe, expect, it } from 'vitest';
+import { runCli, tempDir } from './cliHarness.js';
+
+// Two real lines of the one-line orbit export format (first lines of
+// /work/shared/data/orbits-export-sample.txt; provenance in test/fixtures/orbit-export/).
+const CERES = '00001    3.34  0.15 K2669 274.41935   73.29420   80.24863   10.58803  0.0796923  0.21430445   2.7655526  0 MPO980521  7297 126 1801-2026 0.83 M-v 30k Veres      4000      (1) Ceres              20260103';
+const PALLAS = '00002    4.12  0.15 K2669 254.24964  310.96993  172.88662   34.93279  0.2307001  0.21383960   2.7695590  0 MPO980521  9062 123 1804-2025 0.77 M-v 28k MPCORBFIT  4000      (2) Pallas             20251214';
+
+function summaryOf(out: string) {
+  return JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
+}
+
+describe('scan: bad input never stops a run, and every row is accounted for', () => {
+  it('missing file: one line naming it, exit 1, other files still scanned', () => {
+    const dir = tempDir();
+    const good = join(dir, 'good.txt');
+    writeFileSync(good, `${CERES}\n${PALLAS}\n`);
+    const out = join(dir, 'out');
+    const r = runCli(['scan', join(dir, 'nope.txt'), good, '--out', out, '--quiet']);
+    expect(r.status).toBe(1);
+    const lines = r.stderr.trim().split('\n');
+    expect(lines).toHaveLength(1);
+    expect(lines[0]).toMatch(/^wayward: .*nope\.txt: /);
+    const s = summaryOf(out);
+    expect(s.rows).toEqual({ read: 2, accepted: 2, rejected: 0 });
+    expect(s.files[0].format).toBe('unreadable');
+  });
+
+  it('a directory and a binary file are unreadable inputs (exit 1)', () => {
+    const dir = tempDir();
+    mkdirSync(join(dir, 'sub'));
+    writeFileSync(join(dir, 'bin.dat'), Buffer.from([0x7f, 0x45, 0x4c, 0x46, 0, 0, 1, 2, 0, 255]));
+    const r = runCli(['scan', join(dir, 'sub'), join(dir, 'bin.dat'), '--out', join(dir, 'o'), '--quiet']);
+    expect(r.status).toBe(1);
+    expect(r.stderr.trim().split('\n')).toHaveLength(2);
+  });
+
+  it('empty file: zero rows, exit 0', () => {
+    const dir = tempDir();
+    writeFileSync(join(dir, 'empty.txt'), '');
+    const r = runCli(['scan', join(dir, 'empty.txt'), '--out', join(dir, 'o'), '--quiet']);
+    expect(r.status).toBe(0);
+    expect(summaryOf(join(dir, 'o')).rows).toEqual({ read: 0, accepted: 0, rejected: 0 });
+  });
+
+  it('truncated lines, CRLF endings and gzip: bad rows rejected with file and line, good rows kept', () => {
+    const dir = tempDir();
+    const text = `${CERES}\r\n${PALLAS.slice(0, 60)}\r\n${PALLAS}\r\n`;
+    writeFileSync(join(dir, 'mixed.txt.gz'), gzipSync(Buffer.from(text)));
+    const out = join(dir, 'o');
+    const r = runCli(['scan', join(dir, 'mixed.txt.gz'), '--out', out, '--quiet']);
+    expect(r.status).toBe(0);
+    expect(summaryOf(out).rows).toEqual({ read: 3, accepted: 2, rejected: 1 });
+    const rejects = readFileSync(join(out, 'rejects.csv'), 'utf8').trim().split('\n');
+    expect(rejects[0]).toBe('file,line,kind,reason,text');
+    expect(rejects[1]).toContain('mixed.txt.gz,2,parse,');
+  });
+
+  it('reads standard input with -', () => {
+    const dir = tempDir();
+    const r = runCli(['scan', '-', '--out', join(dir, 'o'), '--format', 'json'], { input: `${CERES}\n` });
+    expect(r.status).toBe(0);
+    const s = JSON.parse(r.stdout);
+    expect(s.rows).toEqual({ read: 1, accepted: 1, rejected: 0 });
+    expect(s.files[0].file).toBe('-');
+  });
+
+  it('CSV with a wrong column count on one row: that row rejected, the rest kept', () => {
+    const dir = tempDir();
+    const csv = [
+      'designation,epoch,a,e,i,om,w,ma,H',
+      '2031 AA1,2463000.5,2.5,0.1,5,10,20,30,15',
+      '2031 AA2,2463000.5,2.6,0.1,5,10,20',
+      '2031 AA3,2463000.5,3.3,0.7,5,10,20,30,15',
+    ].join('\n');
+    writeFileSync(join(dir, 'x.csv'), csv);
+    const out = join(dir, 'o');
+    const r = runCli(['scan', join(dir, 'x.csv'), '--out', out, '--quiet']);
+    expect(r.status).toBe(0);
+    expect(summaryOf(out).rows).toEqual({ read: 3, accepted: 2, rejected: 1 });
+    const rejects = readFileSync(join(out, 'rejects.csv'), 'utf8');
+    expect(rejects).toContain('x.csv,3,parse,');
+    // 2031 AA3 has T_J ≈ 2.6: a comet-like orbit in an asteroid table.
+    const cands = readFileSync(join(out, 'candidates.csv'), 'utf8');
+    expect(cands).toContain('2031 AA3,tisserand,comet-like-T');
+  });
+
+  it('a CSV header the mapping does not know: one line naming the file, exit 1', () => {
+    const dir = tempDir();
+    writeFileSync(join(dir, 'odd.csv'), 'foo,bar,baz\n1,2,3\n');
+    const r = runCli(['scan', join(dir, 'odd.csv'), '--out', join(dir, 'o'), '--quiet']);
+    expect(r.status).toBe(1);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+    expect(r.stderr).toContain('odd.csv');
+  });
+
+  it('usage errors exit 2 with a message', () => {
+    expect(runCli(['scan', '--detectors', 'nonsense']).status).toBe(2);
+    expect(runCli(['scan', '--planet', 'pluto']).status).toBe(2);
+    expect(runCli(['scan', '--top', '0']).status).toBe(2);
+    expect(runCli(['frobnicate']).status).toBe(2);
+    const r = runCli(['scan', '--planet', 'pluto']);
+    expect(r.stderr).toContain("unknown planet 'pluto'");
+  });
+
+  it('leaves no temporary files in the output directory', () => {
+    const dir = tempDir();
+    writeFileSync(join(dir, 'a.txt'), `${CERES}\n`);
+    const out = join(dir, 'o');
+    runCli(['scan', join(dir, 'a.txt'), '--out', out, '--quiet']);
+    expect(readdirSync(out).sort()).toEqual(['candidates.csv', 'candidates.jsonl', 'rejects.csv', 'report.md', 'summary.json']);
+  });
+});
