@@ -17,14 +17,15 @@ export function placeLongitudes(out: DemoElements, lambdaDeg: number, varpiDeg: 
 }
 
 /**
- * Hildas: a N(3.97, 0.02) au, e 0.05–0.28, i Rayleigh 8°. Resonant angle
+ * Hildas: a N(3.97, 0.02) au, e 0.05–0.28, i Rayleigh 8° below 19° (the Hilda zone a
+ * screen exempts is commonly bounded at i < 20°). Resonant angle
  * σ = 3λ_J − 2λ − ϖ placed within ±30° of 0 (Hildas librate about σ = 0, so conjunctions
  * with Jupiter happen near the body's perihelion; Murray & Dermott 1999 ch. 8, from memory).
  */
 export function sampleHilda(random: Random, jupiterLambdaDeg: number, out: DemoElements): void {
   out.aAu = Math.min(Math.max(normal(random, 3.97, 0.02), 3.9), 4.04);
   out.e = uniform(random, 0.05, 0.28);
-  out.iDeg = Math.min(rayleigh(random, 8), 25);
+  out.iDeg = Math.min(rayleigh(random, 8), 19);
   out.nodeDeg = uniformAngleDeg(random);
   const lambda = uniformAngleDeg(random);
   const sigma = uniform(random, -30, 30);

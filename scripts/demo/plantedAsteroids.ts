@@ -69,7 +69,7 @@ export function planAsteroidPlants(random: Random, lon: PlanetLongitudes): Plant
   for (let k = 0; k < 3; k++) {
     const el = emptyElements();
     sampleBoundaryAsteroid(random, el);
-    out.push(finish(random, 'boundary', 'tisserand', false, el, 'T_J within 0.05 of 3: boundary band, not an anomaly'));
+    out.push(finish(random, 'boundary', 'tisserand', false, el, 'T_J just below 3 (within 0.05): boundary band, not an anomaly'));
   }
   for (const kind of COORBITAL_PLAN) {
     const el = emptyElements();

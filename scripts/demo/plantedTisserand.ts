@@ -1,7 +1,8 @@
 /**
  * Planted Tisserand cases in the asteroid file: asteroids on cometary orbits (T_J ≤ 2.90,
- * a < 4.8 au, outside the Trojan and Hilda zones) and boundary cases (|T_J − 3| ≤ 0.05,
- * listed as 'boundary', not as anomalies). Margins inside the thresholds (2.88, ±0.04) keep
+ * a < 4.8 au, outside the Trojan and Hilda zones) and boundary cases (within 0.05 of 3 on
+ * the comet-like side, 2.95 < T_J < 3, listed as 'boundary', not as anomalies: a screen
+ * flags the wrong side of 3 only). Margins inside the thresholds (2.88; 2.955–2.995) keep
  * the rounding of the written elements from moving a body across.
  */
 import type { Random } from './random.js';
@@ -11,7 +12,8 @@ import { asteroidRuleApplies, tisserandJupiter } from './tisserand.js';
 import type { DemoElements } from './types.js';
 
 export const PLANTED_COMET_LIKE_MAX_TJ = 2.88;
-export const BOUNDARY_HALF_WIDTH_GENERATED = 0.04;
+/** Boundary cases are generated with T_J in this range (comet-like side of 3). */
+export const ASTEROID_BOUNDARY_TJ: readonly [number, number] = [2.955, 2.995];
 
 export type CometLikeVariant = 'ordinary' | 'high-inclination' | 'retrograde';
 
@@ -44,7 +46,7 @@ export function sampleCometLikeAsteroid(random: Random, variant: CometLikeVarian
   out.H = uniform(random, 14, 19);
 }
 
-/** A boundary case in the asteroid file: a 2.2–4.5 au, |T_J − 3| ≤ 0.04. */
+/** A boundary case in the asteroid file: a 2.2–4.5 au, 2.955 ≤ T_J ≤ 2.995. */
 export function sampleBoundaryAsteroid(random: Random, out: DemoElements): void {
   sampleUntil(
     'boundary asteroid',
@@ -54,8 +56,10 @@ export function sampleBoundaryAsteroid(random: Random, out: DemoElements): void 
       out.iDeg = Math.min(rayleigh(random, 12), 40);
       angles(random, out);
     },
-    () => asteroidRuleApplies(out.aAu, out.e) &&
-      Math.abs(tisserandJupiter(out.aAu, out.e, out.iDeg) - 3) <= BOUNDARY_HALF_WIDTH_GENERATED,
+    () => {
+      const t = tisserandJupiter(out.aAu, out.e, out.iDeg);
+      return asteroidRuleApplies(out.aAu, out.e) && t >= ASTEROID_BOUNDARY_TJ[0] && t <= ASTEROID_BOUNDARY_TJ[1];
+    },
     out,
   );
   out.H = uniform(random, 13, 18);

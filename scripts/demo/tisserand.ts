@@ -4,7 +4,7 @@
  *
  * T_J = a_J/a + 2 cos i · sqrt((a/a_J)(1 − e²))
  * Murray & Dermott, Solar System Dynamics (1999), §3.4, Tisserand's relation written with the
- * perturber's semimajor axis a_J as unit of length (the equation number, 3.45, is from memory).
+ * perturber's semimajor axis a_J as unit of length (circular orbit of the perturber).
  */
 import { PLANET_MEAN_A_AU, RAD_PER_DEG } from '../../src/core/constants.js';
 
@@ -22,7 +22,7 @@ export function inJupiterTrojanZone(aAu: number): boolean {
   return aAu >= 5.05 && aAu <= 5.35;
 }
 
-/** Hilda zone (3:2 resonance with Jupiter): a 3.7–4.2 au with e < 0.3. */
+/** Hilda zone (3:2 resonance with Jupiter): a 3.7–4.2 au with e < 0.3 (natural Hildas also keep i < 19°). */
 export function inHildaZone(aAu: number, e: number): boolean {
   return aAu >= 3.7 && aAu <= 4.2 && e < 0.3;
 }
