@@ -89,3 +89,15 @@ export function fixedText(text: string, width: number, what: string): string {
   if (text.length > width) throw new RangeError(`${what} '${text}' is longer than ${width} columns`);
   return text.padEnd(width);
 }
+
+/** Unsigned integer written with exactly the digits in [start, end) of `text`; -1 otherwise. */
+export function parseDigits(text: string, start: number, end: number): number {
+  if (end > text.length || start >= end) return -1;
+  let v = 0;
+  for (let k = start; k < end; k++) {
+    const c = text.charCodeAt(k);
+    if (c < 48 || c > 57) return -1;
+    v = v * 10 + (c - 48);
+  }
+  return v;
+}

@@ -14,7 +14,7 @@
 import { GAUSS_K, RAD_PER_DEG } from '../core/constants.js';
 import { calendarToJd } from '../core/julian.js';
 import { PackedFormError } from './errors.js';
-import { fieldText, isBlankField, parseFixedNumber } from './fixedField.js';
+import { fieldText, isBlankField, parseDigits, parseFixedNumber } from './fixedField.js';
 import { ORBIT_COLUMNS as C } from './orbitExportLayout.js';
 import { unpackDesignation } from './packedDesignation.js';
 import { unpackEpochJd } from './packedEpoch.js';
@@ -91,45 +91,49 @@ function readDesignation(line: string, row: OrbitRow, file: string, lineNo: numb
   row.designation = readable === '' ? unpacked : readable;
   row.name = '';
   if (Number.isFinite(row.number) && readable !== '') {
-    const m = /^\((\d+)\)\s*(.*)$/.exec(readable);
-    if (!m || Number(m[1]) !== row.number) {
+    // '(N)' or '(N) Name'
+    const close = readable.indexOf(')');
+    const n = readable.charCodeAt(0) === 40 && close > 1 ? parseDigits(readable, 1, close) : -1;
+    if (n !== row.number) {
       fail(file, lineNo, line, C.readable, `readable designation '${readable}' disagrees with packed ${packed} = ${unpacked}`);
     }
-    row.name = m[2];
+    row.name = readable.slice(close + 1).trim();
   }
 }
 
-/** Arc field: 'YYYY-YYYY' or 'NNNN days'; blank → NaN. */
+/** Arc field: 'YYYY-YYYY' or 'NNNN days'; blank → NaN. Char-code checks (hot path). */
 function readArc(line: string, row: OrbitRow, file: string, lineNo: number): void {
   row.firstObsYear = NaN;
   row.lastObsYear = NaN;
   row.arcDays = NaN;
-  const text = fieldText(line, C.arc[0], C.arc[1]);
-  if (text === '') return;
-  const years = /^(\d{4})-(\d{4})$/.exec(text);
-  if (years) {
-    row.firstObsYear = Number(years[1]);
-    row.lastObsYear = Number(years[2]);
-    row.arcDays = (row.lastObsYear - row.firstObsYear) * 365.25;
+  const [a, b] = C.arc;
+  if (isBlankField(line, a, b)) return;
+  const first = parseDigits(line, a, a + 4);
+  const last = line.charCodeAt(a + 4) === 45 ? parseDigits(line, a + 5, b) : -1; // '-'
+  if (first >= 0 && last >= 0) {
+    row.firstObsYear = first;
+    row.lastObsYear = last;
+    row.arcDays = (last - first) * 365.25;
     return;
   }
+  const text = fieldText(line, a, b);
   const days = /^(\d+) days$/.exec(text);
   if (!days) fail(file, lineNo, line, C.arc, `arc is neither 'YYYY-YYYY' nor 'N days': '${text}' (${columnsOf(C.arc)})`);
   row.arcDays = Number(days[1]);
 }
 
+/** Date of last observation, YYYYMMDD; blank → NaN. */
 function readLastObs(line: string, row: OrbitRow, file: string, lineNo: number): void {
   row.lastObsJdTT = NaN;
-  if (readableEnd(line) !== C.readable[1]) return;
-  const text = fieldText(line, C.lastObs[0], C.lastObs[1]);
-  if (text === '') return;
-  const m = /^(\d{4})(\d{2})(\d{2})$/.exec(text);
-  const month = m ? Number(m[2]) : 0;
-  const day = m ? Number(m[3]) : 0;
-  if (!m || month < 1 || month > 12 || day < 1 || day > 31) {
-    fail(file, lineNo, line, C.lastObs, `date of last observation is not YYYYMMDD: '${text}' (${columnsOf(C.lastObs)})`);
+  const [a, b] = C.lastObs;
+  if (readableEnd(line) !== C.readable[1] || isBlankField(line, a, b)) return;
+  const year = parseDigits(line, a, a + 4);
+  const month = parseDigits(line, a + 4, a + 6);
+  const day = parseDigits(line, a + 6, a + 8);
+  if (year < 0 || month < 1 || month > 12 || day < 1 || day > 31 || !isBlankField(line, b, line.length)) {
+    fail(file, lineNo, line, C.lastObs, `date of last observation is not YYYYMMDD: '${fieldText(line, a, line.length)}' (${columnsOf(C.lastObs)})`);
   }
-  row.lastObsJdTT = calendarToJd(Number(m[1]), month, day);
+  row.lastObsJdTT = calendarToJd(year, month, day);
 }
 
 function readUncertainty(line: string, row: OrbitRow): void {

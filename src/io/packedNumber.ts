@@ -8,15 +8,12 @@
  *                                                           ('~0000' = 620 000, '~zzzz')
  */
 import { base62Decode, base62Encode, base62Value } from './base62.js';
+import { parseDigits } from './fixedField.js';
 
 /** First number written in the tilde form. */
 export const TILDE_NUMBER_BASE = 620_000;
 /** Largest number the packed forms can carry: 620 000 + 62^4 − 1 = 15 396 335. */
 export const MAX_PACKED_NUMBER = TILDE_NUMBER_BASE + 62 ** 4 - 1;
-
-function isDigitCode(c: number): boolean {
-  return c >= 48 && c <= 57;
-}
 
 /**
  * Number carried by a 5-character packed number, or NaN when `packed` is not in one of the
@@ -30,10 +27,10 @@ export function unpackNumber(packed: string): number {
     const v = base62Decode(packed, 1, 4);
     return v < 0 ? NaN : TILDE_NUMBER_BASE + v;
   }
-  for (let k = 1; k < 5; k++) if (!isDigitCode(packed.charCodeAt(k))) return NaN;
+  const low = parseDigits(packed, 1, 5);
   const lead = base62Value(c0);
-  if (lead < 0) return NaN;
-  const n = lead * 10_000 + Number(packed.slice(1));
+  if (lead < 0 || low < 0) return NaN;
+  const n = lead * 10_000 + low;
   return n > 0 ? n : NaN;
 }
 

@@ -1,0 +1,189 @@
+/**
+ * CSV/TSV tables with a header row, streamed through csv-parse. Lines come from the line
+ * source (so gzip, stdin and hashing work as for every format) and are written to the
+ * parser in one batch per chunk. The delimiter is sniffed from the header line: the most
+ * frequent of comma, tab and semicolon outside double quotes (comma on a tie).
+ *
+ * Accounting: every non-blank line after the header ends up in exactly one accepted record
+ * or one rejection. csv-parse runs with relax_column_count (a row with the wrong number of
+ * fields is rejected here, by line, rather than stopping the file) and
+ * skip_records_with_error (a quoting error rejects the record and parsing goes on). Records
+ * and errors arrive in order (on_record and 'skip' are synchronous), each with the line it
+ * ends on; the non-blank lines since the previous record belong to it. Lines a quoting error
+ * swallowed are rejected one by one, naming the error.
+ *
+ * A header that lacks the required columns (./columnMap.ts missingRequired) or a mapping
+ * naming a header the file lacks → UnreadableInputError for the whole file.
+ */
+import { parse, type Options, type Parser } from 'csv-parse';
+import { mapColumns, missingRequired, type ColumnIndex, type ColumnMapping } from './columnMap.js';
+import { parseCsvRecord } from './csvRecord.js';
+import { UnreadableInputError } from './errors.js';
+import { InputError, type OrbitRow } from './types.js';
+
+/** Delimiter of a header line: the most frequent of , \t ; outside quotes (',' on ties). */
+export function sniffDelimiter(headerLine: string): string {
+  const counts: Record<string, number> = { ',': 0, '\t': 0, ';': 0 };
+  let quoted = false;
+  for (const ch of headerLine) {
+    if (ch === '"') quoted = !quoted;
+    else if (!quoted && ch in counts) counts[ch]++;
+  }
+  let best = ',';
+  for (const d of ['\t', ';']) if (counts[d] > counts[best]) best = d;
+  return best;
+}
+
+export interface CsvCounts {
+  rows: number;
+  rejected: number;
+  skipped: number; // header and blank lines
+}
+
+interface CsvError extends Error {
+  lines?: number;
+  raw?: string;
+}
+
+/** Streaming reader of one CSV/TSV input; feed it lines, then finish(). */
+export class CsvTableReader {
+  readonly counts: CsvCounts = { rows: 0, rejected: 0, skipped: 0 };
+  private parser: Parser | null = null;
+  private batch: string[] = [];
+  private headers: string[] | null = null;
+  private index: ColumnIndex | null = null;
+  private fatal: Error | null = null;
+  private pendingNos: number[] = []; // non-blank lines not yet given to a record
+  private pendingTexts: string[] = [];
+  private pendingHead = 0;
+
+  constructor(
+    private readonly file: string,
+    private readonly mapping: ColumnMapping,
+    private readonly row: OrbitRow,
+    private readonly onRow: (row: OrbitRow, lineNo: number) => void,
+    private readonly onReject: (err: InputError) => void,
+  ) {}
+
+  /** One input line (from forEachLine), 1-based line numbers in order. */
+  pushLine(text: string, lineNo: number): void {
+    if (text.trim() === '') this.counts.skipped++;
+    else {
+      this.pendingNos.push(lineNo);
+      this.pendingTexts.push(text);
+      if (this.parser === null) this.parser = this.makeParser(sniffDelimiter(text));
+    }
+    this.batch.push(text);
+  }
+
+  /** Writes the batched lines to the parser; waits while it is full. */
+  async flush(): Promise<void> {
+    if (this.batch.length > 0 && this.parser !== null) {
+      const text = this.batch.join('\n') + '\n';
+      this.batch = [];
+      if (!this.parser.write(text)) await new Promise((resolve) => this.parser!.once('drain', resolve));
+    }
+    if (this.fatal) throw this.fatal;
+  }
+
+  /** Ends the input; rejects lines no record claimed; throws the file's fatal error if any. */
+  async finish(): Promise<CsvCounts> {
+    await this.flush();
+    if (this.parser !== null) {
+      const done = new Promise<void>((resolve, reject) => {
+        this.parser!.on('end', resolve);
+        this.parser!.on('error', reject);
+      });
+      this.parser.end();
+      this.parser.resume();
+      await done;
+    }
+    if (this.fatal) throw this.fatal;
+    this.claim(Infinity, 'not part of any record: an unterminated quoted field runs to the end of the file');
+    return this.counts;
+  }
+
+  private makeParser(delimiter: string): Parser {
+    const options: Options = {
+      delimiter, relax_column_count: true, skip_empty_lines: true, skip_records_with_error: true,
+      raw: true, trim: true,
+      on_record: (rec, ctx) => {
+        this.onRecord((rec as unknown as { record: string[] }).record, ctx.lines); // raw: true wraps it
+        return null; // handled here, nothing is buffered in the stream
+      },
+    };
+    const parser = parse(options);
+    parser.on('skip', (err: CsvError) => this.claim(err.lines ?? Infinity, `malformed CSV: ${err.message}`));
+    parser.on('error', (err) => {
+      this.fatal ??= new UnreadableInputError(this.file, `CSV parser failed: ${err.message}`);
+    });
+    return parser;
+  }
+
+  /** Takes the pending lines up to `endLine`: rejected, each naming `reason`. */
+  private claim(endLine: number, reason: string): void {
+    while (this.pendingHead < this.pendingNos.length && this.pendingNos[this.pendingHead] <= endLine) {
+      const k = this.pendingHead++;
+      this.counts.rejected++;
+      this.onReject(new InputError(this.file, this.pendingNos[k], 0, reason, this.pendingTexts[k]));
+    }
+    this.compact();
+  }
+
+  /** Takes the pending lines of one record: returns its first line and raw text. */
+  private take(endLine: number): { line: number; raw: string } {
+    const first = this.pendingHead;
+    while (this.pendingHead < this.pendingNos.length && this.pendingNos[this.pendingHead] <= endLine) this.pendingHead++;
+    const line = first < this.pendingHead ? this.pendingNos[first] : endLine;
+    const raw = this.pendingTexts.slice(first, this.pendingHead).join('\n');
+    this.compact();
+    return { line, raw };
+  }
+
+  private compact(): void {
+    if (this.pendingHead > 4096 && this.pendingHead * 2 > this.pendingNos.length) {
+      this.pendingNos = this.pendingNos.slice(this.pendingHead);
+      this.pendingTexts = this.pendingTexts.slice(this.pendingHead);
+      this.pendingHead = 0;
+    }
+  }
+
+  private onRecord(record: string[], endLine: number): void {
+    if (this.fatal) return;
+    const { line, raw } = this.take(endLine);
+    if (this.headers === null) {
+      this.counts.skipped++;
+      this.setHeader(record);
+      return;
+    }
+    try {
+      if (record.length !== this.headers.length) {
+        throw new InputError(this.file, line, 0, `${record.length} fields where the header has ${this.headers.length}`, raw);
+      }
+      parseCsvRecord(record, this.index!, { file: this.file, line, headers: this.headers, raw }, this.row);
+    } catch (err) {
+      if (!(err instanceof InputError)) throw err;
+      this.counts.rejected++;
+      this.onReject(err);
+      return;
+    }
+    this.counts.rows++;
+    this.onRow(this.row, line);
+  }
+
+  private setHeader(record: string[]): void {
+    this.headers = record.map((h) => h.trim());
+    const { index, missingMapped } = mapColumns(this.headers, this.mapping);
+    const found = `headers found: ${this.headers.join(', ')}`;
+    if (missingMapped.length > 0) {
+      this.fatal = new UnreadableInputError(this.file, `column mapping names headers the file lacks (${missingMapped.join(', ')}); ${found}`);
+      return;
+    }
+    const missing = missingRequired(index);
+    if (missing.length > 0) {
+      this.fatal = new UnreadableInputError(this.file, `header lacks required orbit columns (${missing.join('; ')}); ${found}`);
+      return;
+    }
+    this.index = index;
+  }
+}

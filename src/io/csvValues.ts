@@ -1,0 +1,83 @@
+/**
+ * Values of CSV/TSV cells: numbers, Julian dates written as JD, MJD or calendar dates, and
+ * designations. Empty cell → NaN / ''. A cell that is not what its column needs → a
+ * PackedFormError-style reason (the table reader turns it into an InputError naming the
+ * line and the column header).
+ *
+ * Dates accepted: a Julian date (a number from 1e6 to 1e7); an MJD where the column says so
+ * (MJD = JD − 2 400 000.5, IAU 1997 Resolution B1); ISO 8601 calendar dates `2026-06-09`,
+ * `2026-06-09T00:00:00[.sss][Z]`, `2026-06-09.25` (fractional day); compact `20260609`;
+ * the 5-character packed date `K2669`. Calendar dates are taken in the file's time scale.
+ */
+import { MJD_OFFSET } from '../core/constants.js';
+import { calendarToJd } from '../core/julian.js';
+import { PackedFormError } from './errors.js';
+import { unpackEpochJd } from './packedEpoch.js';
+import { unpackNumber } from './packedNumber.js';
+import type { OrbitRow } from './types.js';
+
+const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
+
+/** A decimal number, NaN for an empty cell; throws PackedFormError when not a number. */
+export function cellNumber(text: string): number {
+  if (text === '') return NaN;
+  if (!NUMBER.test(text)) throw new PackedFormError('not a number', text);
+  return Number(text);
+}
+
+function calendar(y: string, mo: string, d: string, h = '0', mi = '0', s = '0', text = ''): number {
+  const month = Number(mo);
+  const day = Number(d);
+  if (month < 1 || month > 12 || day < 1 || day >= 32 || Number(h) > 24 || Number(mi) > 59 || Number(s) >= 61) {
+    throw new PackedFormError('not a calendar date', text);
+  }
+  return calendarToJd(Number(y), month, day + (Number(h) + Number(mi) / 60 + Number(s) / 3600) / 24);
+}
+
+/** Julian date of a date cell (see the file comment); NaN when empty. */
+export function cellJd(text: string, isMjd = false): number {
+  if (text === '') return NaN;
+  let m = /^(\d{4})-(\d{2})-(\d{2}(?:\.\d*)?)$/.exec(text);
+  if (m) return calendar(m[1], m[2], m[3], '0', '0', '0', text);
+  m = /^(\d{4})-(\d{2})-(\d{2})[T ](\d{2}):(\d{2})(?::(\d{2}(?:\.\d*)?))?Z?$/.exec(text);
+  if (m) return calendar(m[1], m[2], m[3], m[4], m[5], m[6] ?? '0', text);
+  m = /^(\d{4})(\d{2})(\d{2})$/.exec(text);
+  if (m && !isMjd) return calendar(m[1], m[2], m[3], '0', '0', '0', text);
+  if (/^[I-L]\d\d[1-9A-C][1-9A-V]$/.test(text)) return unpackEpochJd(text);
+  const v = cellNumber(text);
+  if (isMjd) return v + MJD_OFFSET;
+  if (v < 1e6 || v > 1e7) throw new PackedFormError('not a Julian date (a number 1e6..1e7; MJD needs an *_mjd column)', text);
+  return v;
+}
+
+/** Calendar year of a date cell (first_obs, last_obs), NaN when empty. */
+export function cellYear(text: string): number {
+  if (text === '') return NaN;
+  const m = /^(\d{4})/.exec(text);
+  if (!m) throw new PackedFormError('not a date', text);
+  return Number(m[1]);
+}
+
+/**
+ * Designation, number and name from a designation cell: '(1) Ceres', '1 Ceres (A801 AA)'
+ * (number, name, provisional), '1', '(2019 EU5)', '2019 EU5', 'C/1995 O1', a packed
+ * 5-character number '00001' / 'A0000' / '~0000'. Fills row.designation, row.number and,
+ * when the cell has one, row.name.
+ */
+export function cellDesignation(text: string, row: OrbitRow): void {
+  let t = text.trim();
+  const paren = /^\(([^()]*)\)$/.exec(t);
+  if (paren && !/^\d+$/.test(paren[1])) t = paren[1].trim();
+  const numbered = /^\((\d+)\)\s*(.*)$/.exec(t) ?? /^(\d+)(?:\s+([^(]*?))?\s*(?:\(.*\))?$/.exec(t);
+  let n = numbered ? Number(numbered[1]) : NaN;
+  const name = numbered ? (numbered[2] ?? '').trim() : '';
+  if (!numbered && t.length === 5) n = unpackNumber(t);
+  if (Number.isFinite(n) && n > 0) {
+    row.number = n;
+    row.name = name || row.name;
+    row.designation = `(${n})${row.name ? ` ${row.name}` : ''}`;
+    return;
+  }
+  row.number = NaN;
+  row.designation = t;
+}

@@ -1,0 +1,112 @@
+/**
+ * Reads one orbit input of any known format: streams its lines (./lineSource.ts), finds a
+ * header block, detects the format (./detectFormat.ts) unless told, and hands every data row
+ * to `onRow` in one reused scratch OrbitRow (copy what you keep) or every bad one to
+ * `onReject`. Invariant the pipeline builds on: linesRead = rows + rejected, where linesRead
+ * counts data lines (records for CSV); header, blank and separator lines are `skipped`.
+ * Fatal problems with the whole file → UnreadableInputError (`FILE: reason`).
+ *
+ * The first PROBE_LINES lines are held back to decide the header block and the format, then
+ * replayed; after that every line goes straight to its parser.
+ */
+import type { ColumnMapping } from './columnMap.js';
+import { parseCometExportLine } from './cometExportLine.js';
+import { CsvTableReader } from './csvTable.js';
+import { detectFormat, headerBlockLength } from './detectFormat.js';
+import { forEachLine, type LineEncoding } from './lineSource.js';
+import { parseOrbitExportLine } from './orbitExportLine.js';
+import { emptyOrbitRow, InputError, type InputFormat, type OrbitRow } from './types.js';
+
+/** Lines held back to find a header block and the format (a real header is ~45 lines). */
+export const PROBE_LINES = 200;
+
+export interface ReadOrbitOptions {
+  format?: InputFormat; // skip detection
+  columns?: ColumnMapping; // CSV: explicit field → header mapping
+  encoding?: LineEncoding; // default 'utf8'
+}
+
+export interface ReadOrbitSummary {
+  file: string;
+  format: InputFormat;
+  linesRead: number; // data rows = rows + rejected
+  rows: number;
+  rejected: number;
+  skipped: number; // header, blank and separator lines
+  lines: number; // physical lines in the input
+  bytes: number; // raw bytes read (compressed size for gzip)
+  gzip: boolean;
+  sha256: string; // of the raw bytes as read, hex
+}
+
+type Sink = (text: string, lineNo: number) => void;
+
+/** Reads `path` ('-' = stdin); see the file comment. */
+export async function readOrbitFile(
+  path: string,
+  options: ReadOrbitOptions,
+  onRow: (row: OrbitRow, lineNo: number) => void,
+  onReject: (err: InputError) => void,
+): Promise<ReadOrbitSummary> {
+  const row = emptyOrbitRow();
+  const counts = { rows: 0, rejected: 0, skipped: 0 };
+  let format: InputFormat | undefined = options.format;
+  let sink: Sink | null = null;
+  let csv: CsvTableReader | null = null;
+  const heldTexts: string[] = [];
+  const heldNos: number[] = [];
+
+  const fixedSink = (parse: typeof parseOrbitExportLine): Sink => (text, lineNo) => {
+    let outcome;
+    try {
+      outcome = parse(text, row, path, lineNo);
+    } catch (err) {
+      if (!(err instanceof InputError)) throw err;
+      counts.rejected++;
+      onReject(err);
+      return;
+    }
+    if (outcome === 'skip') counts.skipped++;
+    else {
+      counts.rows++;
+      onRow(row, lineNo);
+    }
+  };
+
+  const decide = (): void => {
+    const header = format === 'csv' ? 0 : headerBlockLength(heldTexts);
+    format ??= detectFormat(heldTexts.slice(header), path);
+    if (format === 'csv') {
+      csv = new CsvTableReader(path, options.columns ?? {}, row, onRow, onReject);
+      const reader = csv;
+      sink = (text, lineNo) => reader.pushLine(text, lineNo);
+    } else {
+      sink = fixedSink(format === 'orbit-export' ? parseOrbitExportLine : parseCometExportLine);
+    }
+    counts.skipped += header;
+    for (let k = header; k < heldTexts.length; k++) sink(heldTexts[k], heldNos[k]);
+    heldTexts.length = 0;
+    heldNos.length = 0;
+  };
+
+  const stats = await forEachLine(path, (text, lineNo) => {
+    if (sink !== null) return sink(text, lineNo);
+    heldTexts.push(text);
+    heldNos.push(lineNo);
+    if (heldTexts.length >= PROBE_LINES) decide();
+  }, {
+    encoding: options.encoding,
+    onChunkEnd: () => (csv !== null ? (csv as CsvTableReader).flush() : undefined),
+  });
+  if (sink === null) decide();
+  if (csv !== null) {
+    const c = await (csv as CsvTableReader).finish();
+    counts.rows = c.rows;
+    counts.rejected = c.rejected;
+    counts.skipped = c.skipped;
+  }
+  return {
+    file: path, format: format!, linesRead: counts.rows + counts.rejected, ...counts,
+    lines: stats.lines, bytes: stats.rawBytes, gzip: stats.gzip, sha256: stats.sha256,
+  };
+}
