@@ -7,10 +7,11 @@
  *
  * Velocities: by default the derivative of the position polynomial ('derivative'); the
  * alternative 'fitted' keeps a second polynomial fitted to the source's velocities at the
- * same nodes (twice the memory, slower to evaluate). Measured over 1900–2100: 'fitted'
- * agrees with the series' analytic velocities to ~1e-12 au/day, 'derivative' to ~1e-10
- * au/day (0.2 mm/s). The default is 'derivative': accurate far beyond the theory itself,
- * half the memory, and exactly the rate of the cached positions (self-consistent for
+ * same nodes (twice the memory, slower to evaluate). Measured over 1900–2100 against the
+ * series' analytic velocities: 'fitted' worst 7e-12 au/day (0.013 mm/s), 'derivative'
+ * worst 2e-11 au/day (0.04 mm/s). The default is 'derivative': both are far beyond the
+ * accuracy of the theory itself, and it takes half the memory, evaluates faster, and is
+ * exactly the rate of the cached positions (self-consistent for
  * integrators). The test suite measures both modes.
  */
 import type { Ephemeris, EphemerisBody } from './types.js';
@@ -25,18 +26,22 @@ export interface ChebyshevLayout {
 
 /**
  * Default layouts, indexed like EPHEMERIS_BODIES, chosen by measurement against the direct
- * VSOP87 series (1900–2100, 480 random dates per body): worst position difference 1e-11 au
- * (≈ 1.5 m) for every body, worst velocity difference ≤ 1e-10 au/day with 'derivative'.
+ * VSOP87 series (1900–2100, 320 random dates per body): worst position difference ≤ 1.3e-11
+ * au (≈ 2 m) for every body, worst velocity difference ≤ 1e-10 au/day with 'derivative'.
  * The outer planets cannot use long segments: their heliocentric series carry indirect
  * terms of the Sun's reflex motion with periods of 15–90 days at 3e-8–8e-8 au (e.g. Neptune
  * R, a 14.7-day term of 3e-8 au), so a 128-day segment of degree 11 misses by ~1e-7 au.
- * Earth (the geocentre, not the EMB) carries the monthly lunar wobble like 'emb'.
+ * Earth (the geocentre, not the EMB) carries the monthly lunar wobble (3e-5 au). The EMB
+ * is not smooth either: VSOP87's lunar terms in the Earth and the ELP/MPP02 Moon disagree
+ * at ~2e-9 au with monthly and shorter periods, so 'emb' keeps 16-day segments.
+ * Cost of fitting (nodes per day of span, summed over the nine bodies): ≈ 4.3 evaluations
+ * of the direct series, dominated by 'emb' (ELP Moon) and Mercury (7 000 terms).
  */
 export const DEFAULT_CHEBYSHEV_LAYOUTS: readonly ChebyshevLayout[] = [
-  { segmentDays: 16, coefficients: 16 }, // mercury
-  { segmentDays: 32, coefficients: 14 }, // venus
-  { segmentDays: 16, coefficients: 16 }, // earth
-  { segmentDays: 32, coefficients: 12 }, // mars
+  { segmentDays: 32, coefficients: 24 }, // mercury
+  { segmentDays: 64, coefficients: 18 }, // venus
+  { segmentDays: 24, coefficients: 18 }, // earth
+  { segmentDays: 64, coefficients: 16 }, // mars
   { segmentDays: 48, coefficients: 14 }, // jupiter
   { segmentDays: 48, coefficients: 14 }, // saturn
   { segmentDays: 48, coefficients: 14 }, // uranus
