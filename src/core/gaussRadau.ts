@@ -174,6 +174,9 @@ export class GaussRadauIntegrator {
       if (++count > this.maxSteps) {
         throw new IntegrationError(`integration exceeded ${this.maxSteps} steps`, this.timeJd, dir * this.dtNext);
       }
+      if (this.dtNext < this.minStep) {
+        throw new IntegrationError('integration could not meet tolerance', this.timeJd, dir * this.dtNext);
+      }
       const remaining = tEndJd - this.timeJd;
       let dt = dir * Math.min(this.dtNext, this.maxStep);
       const last = Math.abs(dt) >= Math.abs(remaining);
