@@ -7,7 +7,7 @@
  * gets (text, lineNo). Speed: scripts/bench/parse.ts.
  *
  * Line endings: LF, CRLF (the CR is dropped) and CR alone (old Mac files). The kind is
- * decided on the first chunk: if it holds an LF the file is split on LF, else on CR.
+ * decided by the first terminator in the file: LF or CRLF → split on LF, a lone CR → on CR.
  * A UTF-8 byte-order mark at the start is dropped. The last line needs no terminator.
  * An empty input gives zero lines. A line longer than MAX_LINE_BYTES is fatal (the input is
  * not line-oriented text).
@@ -31,6 +31,23 @@ export interface LineSourceStats extends ByteSourceInfo {
   lines: number; // lines delivered, header and blank lines included
 }
 
+function checkLineLength(carry: Buffer, lineNo: number, path: string): void {
+  if (carry.length > MAX_LINE_BYTES) {
+    throw new UnreadableInputError(path, `line ${lineNo + 1} is longer than ${MAX_LINE_BYTES} bytes; not a line-oriented text file`);
+  }
+}
+
+/**
+ * LF (10) when the first terminator in `buf` is an LF or a CR followed by LF; CR (13) when it
+ * is a CR followed by anything else; -1 when undecided (none yet, or a CR as the last byte).
+ */
+function lineTerminator(buf: Buffer): number {
+  const lf = buf.indexOf(10);
+  const cr = buf.indexOf(13);
+  if (cr < 0 || (lf >= 0 && lf <= cr + 1)) return lf < 0 ? -1 : 10;
+  return cr + 1 < buf.length ? 13 : -1;
+}
+
 /** Calls `onLine(text, lineNo)` for every line of `path` ('-' = stdin), lineNo from 1. */
 export async function forEachLine(
   path: string,
@@ -45,8 +62,13 @@ export async function forEachLine(
   for await (const chunk of openByteSource(path, stats)) {
     let buf: Buffer = carry === null ? chunk : Buffer.concat([carry, chunk]);
     if (terminator < 0) {
-      terminator = buf.indexOf(10) >= 0 || buf.indexOf(13) < 0 ? 10 : 13;
-      if (buf.length >= 3 && buf[0] === 0xef && buf[1] === 0xbb && buf[2] === 0xbf) buf = buf.subarray(3);
+      if (carry === null && buf.length >= 3 && buf[0] === 0xef && buf[1] === 0xbb && buf[2] === 0xbf) buf = buf.subarray(3);
+      terminator = lineTerminator(buf);
+      if (terminator < 0) {
+        carry = buf; // no terminator yet, or a CR as the very last byte: wait for more
+        checkLineLength(carry, lineNo, path);
+        continue;
+      }
     }
     // one decoder call per line over the bytes between terminators: after JIT warm-up this
     // runs at ~10 M lines/s, faster than decoding a whole 1 MiB chunk to one string
@@ -60,9 +82,7 @@ export async function forEachLine(
       end = buf.indexOf(terminator, start);
     }
     carry = start < buf.length ? buf.subarray(start) : null;
-    if (carry !== null && carry.length > MAX_LINE_BYTES) {
-      throw new UnreadableInputError(path, `line ${lineNo + 1} is longer than ${MAX_LINE_BYTES} bytes; not a line-oriented text file`);
-    }
+    if (carry !== null) checkLineLength(carry, lineNo, path);
     if (options.onChunkEnd) await options.onChunkEnd();
   }
   if (carry !== null && carry.length > 0) {
