@@ -18,3 +18,8 @@ export * from './frames.js';
 export * from './earthRotation.js';
 export * from './precession.js';
 export * from './observer.js';
+export * from './stumpff.js';
+export * from './kepler.js';
+export * from './anomaly.js';
+export * from './universal.js';
+export * from './twoBody.js';

@@ -1,0 +1,54 @@
+/**
+ * Stumpff functions c0..c3 of the universal-variable formulation of two-body motion.
+ * Danby, Fundamentals of Celestial Mechanics, 2nd ed. (1988), §6.9, eq. 6.9.9–6.9.11:
+ *   c_k(x) = Σ_{j≥0} (−x)^j / (2j + k)!
+ *   x > 0:  c0 = cos √x,  c1 = sin √x / √x;   x < 0: cosh and sinh of √−x;
+ *   c2 = (1 − c0)/x,  c3 = (1 − c1)/x   (recurrence x c_{k+2} = 1/k! − c_k).
+ * For |x| ≤ 1 the series for c2 and c3 are summed (the closed forms cancel there) and c0, c1
+ * follow from the recurrence; elsewhere the closed forms lose at most one digit.
+ */
+
+/** Series terms kept for |x| ≤ 1: the first term left out is below 1/21! ≈ 2e-20. */
+const TERMS = 9;
+/** INV_FACT_C2[j] = 1/(2j+2)!, INV_FACT_C3[j] = 1/(2j+3)!. */
+const INV_FACT_C2 = new Float64Array(TERMS);
+const INV_FACT_C3 = new Float64Array(TERMS);
+{
+  let f = 1; // running factorial
+  for (let n = 1; n <= 2 * TERMS + 1; n++) {
+    f *= n;
+    if (n >= 2 && n % 2 === 0) INV_FACT_C2[(n - 2) / 2] = 1 / f;
+    if (n >= 3 && n % 2 === 1) INV_FACT_C3[(n - 3) / 2] = 1 / f;
+  }
+}
+
+/** Write c0(x), c1(x), c2(x), c3(x) into out[offset..offset+3]. */
+export function stumpffInto(x: number, out: Float64Array, offset = 0): void {
+  let c0: number, c1: number, c2: number, c3: number;
+  if (Math.abs(x) <= 1) {
+    c2 = INV_FACT_C2[TERMS - 1];
+    c3 = INV_FACT_C3[TERMS - 1];
+    for (let j = TERMS - 2; j >= 0; j--) {
+      c2 = INV_FACT_C2[j] - x * c2;
+      c3 = INV_FACT_C3[j] - x * c3;
+    }
+    c0 = 1 - x * c2;
+    c1 = 1 - x * c3;
+  } else if (x > 0) {
+    const r = Math.sqrt(x);
+    c0 = Math.cos(r);
+    c1 = Math.sin(r) / r;
+    c2 = (1 - c0) / x;
+    c3 = (1 - c1) / x;
+  } else {
+    const r = Math.sqrt(-x);
+    c0 = Math.cosh(r);
+    c1 = Math.sinh(r) / r;
+    c2 = (1 - c0) / x;
+    c3 = (1 - c1) / x;
+  }
+  out[offset] = c0;
+  out[offset + 1] = c1;
+  out[offset + 2] = c2;
+  out[offset + 3] = c3;
+}
