@@ -11,7 +11,11 @@
  * J2000 with the rotation built from Laskar's precession quantities P and Q (elpmpp02.pdf,
  * section on the transformation to the J2000 ecliptic). Velocities are analytic: d/dT of
  * every term, with the rate of the P, Q rotation included.
- * Accuracy of this truncated series against the full one: see test/core (reported in km).
+ * Time argument: TDB (the theory's own time scale).
+ * Accuracy (test/core/ephemerisVsop87.test.ts, ephemerisAstronomyEngine.test.ts): this
+ * truncated series is within 0.1 km of the complete ELP/MPP02 series over 1900–2100, and
+ * within 16 km of astronomy-engine's independent (shorter) lunar series; the analytic
+ * velocities match numerical differences to 3e-3 km/day.
  */
 import elpData from 'astronomia/data/elpMppDe';
 import { J2000_JD, DAYS_PER_JULIAN_CENTURY, ARCSEC_PER_RAD } from './constants.js';

@@ -3,10 +3,12 @@
  * heliocentric positions and analytic velocities of the eight planets.
  *
  * Frame: VSOP87B is referred to the dynamical ecliptic and equinox J2000 (fitted to DE200).
- * The rest of the core treats it as the J2000 ecliptic of the core's frame. The dynamical
- * J2000 ecliptic differs from the ICRF-based ecliptic (IAU 2006 obliquity on the ICRF
- * equator) by rotations of a few tens of milliarcseconds (equinox offset ≈ 0.05″, obliquity
- * ≈ 0.04″; from memory), i.e. ≲ 1 000 km at Neptune's distance, ≲ 40 km at 1 au.
+ * The rest of the core treats it as the J2000 ecliptic of the core's frame. The difference
+ * to the ICRF-based ecliptic (ICRF equator tilted by the IAU 2006 obliquity) is a rotation
+ * of order 0.1″: the VSOP87-to-FK5 rotation has off-diagonal elements of 1.9e-7–4.8e-7 rad
+ * (0.04–0.10″; as used in astronomy-engine 2.1.19's ecliptic-to-equatorial matrix) and FK5
+ * differs from the ICRF by ≈ 0.02″ (frame bias; from memory). In position that is ≲ 70 km
+ * at 1 au and ≲ 2 000 km at Neptune; it is constant in time and common to all planets.
  *
  * Time argument: TDB Julian date; VSOP87 uses TDB (≈ TT to < 2 ms), τ = (JD − 2451545)/365250.
  */

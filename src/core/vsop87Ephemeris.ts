@@ -2,14 +2,19 @@
  * The direct analytical ephemeris: VSOP87B planets (vsop87.ts) and the Earth–Moon
  * barycentre from VSOP87B Earth plus the ELP/MPP02 Moon (elpMoon.ts). Every call sums the
  * full series; use the Chebyshev cache (ephemerisCache.ts) for repeated queries.
+ *
+ * EMB = Earth + geocentric Moon / (1 + M_earth/M_moon), both already on the J2000 ecliptic
+ * (elpMoon.ts applies the of-date → J2000 rotation). The Moon's errors enter divided by
+ * 82.3: 0.1 km of lunar-series truncation becomes ~1 m. VSOP87's own lunar terms in the
+ * Earth and the ELP Moon do not cancel exactly: the EMB keeps a ~2e-9 au (≈ 300 m) residual
+ * with monthly periods, far below VSOP87's accuracy against modern ephemerides.
  */
 import { EARTH_MOON_MASS_RATIO, J2000_JD, KM_PER_AU } from './constants.js';
 import type { PlanetName } from './constants.js';
 import type { Ephemeris, EphemerisBody } from './types.js';
 import { assertInSpan, ephemerisBodyIndex } from './ephemerisBody.js';
-import { vsop87HelioState } from './vsop87.js';
+import { DAYS_PER_JULIAN_MILLENNIUM, vsop87HelioState } from './vsop87.js';
 import { elpGeocentricMoonState } from './elpMoon.js';
-import { DAYS_PER_JULIAN_MILLENNIUM } from './vsop87.js';
 
 /**
  * Default span: J2000 ± 1 000 years. VSOP87 keeps about 1″ over ±4 000 years for Mercury–Mars

@@ -3,14 +3,15 @@
  * package (2.1.19), whose planets come from its own truncated VSOP87 series and whose Moon
  * from a truncated lunar theory. Its heliocentric vectors are on the J2000 mean equator
  * (EQJ); they are rotated here to the ecliptic with the core's obliquity (IAU 2006,
- * 84 381.406″). astronomy-engine itself uses 84 381.448″ (IAU 1976) for VSOP87 → EQJ, so a
- * rotation of 0.042″ about the x axis remains in the differences: 0.2 µrad × r, e.g. 30 km
- * at 1 au and 900 km at Neptune. That is small next to astronomy-engine's truncation: its
- * series are cut for about 1′ accuracy (its documentation; from memory), and the measured
- * worst differences over 1900–2100 are 2 200 km for the Earth (its Earth shows ~0 ecliptic
- * latitude where VSOP87B has −0.8″ at J2000), 5 700 km Mercury, 57 000 km Jupiter, 155 000 km Saturn, 420 000 km
- * Neptune, 3–25″ as seen from the Sun. So the check bounds the heliocentric angle
- * |Δr|/r (catching frame, unit, sign and time-argument errors), and the precise anchors
+ * 84 381.406″). astronomy-engine goes from VSOP87 to EQJ with the VSOP87-to-FK5 matrix
+ * (cos ε = 0.917482137087, i.e. ε = 84 381.409″, plus off-diagonal terms up to 4.8e-7 rad),
+ * so a rotation of ≈ 0.1″ remains in the differences: ≈ 70 km at 1 au, ≈ 2 200 km at
+ * Neptune. That is small next to astronomy-engine's truncation: its series are cut for
+ * about 1′ accuracy (its documentation; from memory), and the measured worst differences
+ * over 1900–2100 are 2 200 km for the Earth (its Earth shows ~0 ecliptic latitude where
+ * VSOP87B has −0.8″ at J2000), 5 700 km Mercury, 57 000 km Jupiter, 155 000 km Saturn,
+ * 420 000 km Neptune: 3–25″ as seen from the Sun. So the check bounds the heliocentric
+ * angle |Δr|/r (catching frame, unit, sign and time-argument errors); the precise anchors
  * are the VSOP87 check values and the astronomia cross-check in ephemerisVsop87.test.ts.
  */
 import { describe, expect, it } from 'vitest';
