@@ -14,6 +14,7 @@ import { calendarToJd } from '../core/julian.js';
 import { PackedFormError } from './errors.js';
 import { unpackEpochJd } from './packedEpoch.js';
 import { unpackNumber } from './packedNumber.js';
+import { packProvisional } from './packedProvisional.js';
 import type { OrbitRow } from './types.js';
 
 const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
@@ -68,7 +69,10 @@ export function cellDesignation(text: string, row: OrbitRow): void {
   let t = text.trim();
   const paren = /^\(([^()]*)\)$/.exec(t);
   if (paren && !/^\d+$/.test(paren[1])) t = paren[1].trim();
-  const numbered = /^\((\d+)\)\s*(.*)$/.exec(t) ?? /^(\d+)(?:\s+([^(]*?))?\s*(?:\(.*\))?$/.exec(t);
+  // '2019 EU5' and '2040 P-L' are provisional designations, not number + name
+  const provisional = packProvisional(t) !== '';
+  const numbered = provisional ? null
+    : /^\((\d+)\)\s*(.*)$/.exec(t) ?? /^(\d+)(?:\s+([^(]*?))?\s*(?:\(.*\))?$/.exec(t);
   let n = numbered ? Number(numbered[1]) : NaN;
   const name = numbered ? (numbered[2] ?? '').trim() : '';
   if (!numbered && t.length === 5) n = unpackNumber(t);

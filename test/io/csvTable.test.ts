@@ -1,0 +1,152 @@
+/**
+ * CSV/TSV tables: delimiter sniffing, header names (case-insensitive, Omega vs omega),
+ * explicit mappings, date forms (checked against astronomy-engine), and the accounting of
+ * bad rows: wrong field counts, quoting errors, a header that names no orbit.
+ * The elements of test/fixtures/csv/ceres-eu5.csv are the real sample lines' values, so
+ * the CSV reader must agree with the one-line export reader on them.
+ */
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import {
+  cellJd, emptyOrbitRow, mapColumns, parseOrbitExportLine, readOrbitFile, sniffDelimiter,
+  UnreadableInputError, type InputError, type OrbitRow, type ReadOrbitOptions,
+} from '../../src/io/index.js';
+import { isoToJd } from './fixtureCases.js';
+
+const FIX = new URL('../fixtures/', import.meta.url);
+const dir = mkdtempSync(join(tmpdir(), 'wayward-csv-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+async function read(path: string, options: ReadOrbitOptions = {}) {
+  const rows: OrbitRow[] = [];
+  const lines: number[] = [];
+  const rejects: InputError[] = [];
+  const summary = await readOrbitFile(path, options, (r, n) => {
+    rows.push({ ...r });
+    lines.push(n);
+  }, (e) => rejects.push(e));
+  return { rows, lines, rejects, summary };
+}
+
+function temp(name: string, text: string): string {
+  const p = join(dir, name);
+  writeFileSync(p, text);
+  return p;
+}
+
+describe('header and delimiter', () => {
+  it.each([['a,b;c,d', ','], ['a\tb\tc;d', '\t'], ['a;b;c,d', ';'], ['"x,y";b;c', ';']])('sniffs %j', (line, d) => {
+    expect(sniffDelimiter(line)).toBe(d);
+  });
+
+  it('tells Omega (node) from omega (peri) by the case of the first letter', () => {
+    const { index } = mapColumns(['desig', 'omega', 'Omega', 'E', 'INC']);
+    expect([index.peri, index.node, index.e, index.i]).toEqual([1, 2, 3, 4]);
+  });
+
+  it('prefers designation > desig > full_name > pdes > name; a spare name column is the name', () => {
+    expect(mapColumns(['name', 'pdes', 'full_name']).index.designation).toBe(2);
+    expect(mapColumns(['name', 'pdes', 'full_name']).index.name).toBe(0);
+    expect(mapColumns(['name', 'pdes']).index.designation).toBe(1);
+    expect(mapColumns(['name']).index.designation).toBe(0);
+    expect(mapColumns(['name']).index.name).toBe(-1);
+  });
+
+  it('an explicit mapping wins', () => {
+    const { index, missingMapped } = mapColumns(['objname', 'designation', 'ecc_x'], { designation: 'objname', e: 'ecc_x' });
+    expect([index.designation, index.e, missingMapped]).toEqual([0, 2, []]);
+    expect(mapColumns(['a'], { designation: 'zzz' }).missingMapped).toEqual(['designation=zzz']);
+  });
+});
+
+describe('values', () => {
+  it('reads the real Ceres and 2019 EU5 elements as the export reader does', async () => {
+    const { rows, rejects, summary } = await read(new URL('csv/ceres-eu5.csv', FIX).pathname);
+    expect(rejects).toEqual([]);
+    expect(summary).toMatchObject({ format: 'csv', rows: 2, rejected: 0, linesRead: 2, skipped: 1 });
+    const sample = readFileSync(new URL('orbit-export/orbits-export-sample.txt', FIX), 'latin1').split('\n');
+    const ref = emptyOrbitRow();
+    for (const [k, line] of [sample[0], sample.find((l) => l.startsWith('K19E05U'))!].entries()) {
+      parseOrbitExportLine(line, ref, 'sample', 1);
+      const got = rows[k];
+      for (const f of ['designation', 'number', 'name', 'epochJdTT', 'e', 'iDeg', 'nodeDeg', 'periDeg', 'meanAnomalyDeg', 'H', 'G', 'uncertainty', 'nObs', 'rmsArcsec', 'aAu', 'meanMotionDegPerDay'] as const) {
+        expect(got[f], `${ref.designation} ${f}`).toEqual(ref[f]);
+      }
+    }
+    expect(rows[0].aAu).toBe(2.7655526);
+    expect(rows[0].lastObsJdTT).toBe(isoToJd('2026-01-03'));
+    expect(rows[0].arcDays).toBe(isoToJd('2026-01-03') - isoToJd('1801-12-31'));
+    expect(rows[1].arcDays).toBe(1800);
+  });
+
+  it('TSV with Omega/omega, an MJD epoch and q instead of a', async () => {
+    const { rows, rejects } = await read(new URL('csv/tabs-omega.tsv', FIX).pathname);
+    expect(rejects).toEqual([]);
+    expect(rows[0]).toMatchObject({ designation: '2019 EU5', nodeDeg: 109.1411, periDeg: 108.84735, qAu: 47.14 });
+    // MJD = JD − 2 400 000.5 (IAU 1997 Resolution B1); 61200 = 2026-06-09 0h, by astronomy-engine
+    expect(rows[0].epochJdTT).toBe(isoToJd('2026-06-09'));
+    expect(rows[0].aAu).toBeCloseTo(47.14 / (1 - 0.9607143), 9); // a = q/(1−e)
+  });
+
+  it.each([
+    ['2461200.5', '2026-06-09'], ['2026-06-09', '2026-06-09'], ['2026-06-09T00:00:00', '2026-06-09'],
+    ['2026-06-09T06:00:00Z', '2026-06-09T06:00:00'], ['20260609', '2026-06-09'], ['K2669', '2026-06-09'],
+    ['2026-06-09.25', '2026-06-09T06:00:00'],
+  ])('date cell %j', (text, iso) => {
+    expect(Math.abs(cellJd(text) - isoToJd(iso)) * 86400).toBeLessThan(1e-3); // seconds
+  });
+
+  it.each(['2026-13-01', '61200', 'yesterday'])('rejects date cell %j', (text) => {
+    expect(() => cellJd(text)).toThrow();
+  });
+});
+
+describe('bad rows and bad headers', () => {
+  const header = 'designation,epoch,e,a,i,node,peri,M';
+  const good = (d: string) => `${d},2461200.5,0.1,2.5,3,40,50,60`;
+
+  it('a row with the wrong number of fields is one reject naming file and line', async () => {
+    const p = temp('count.csv', [header, good('A'), 'B,2461200.5,0.1', good('C')].join('\n') + '\n');
+    const { rows, rejects, summary } = await read(p);
+    expect(rows.map((r) => r.designation)).toEqual(['A', 'C']);
+    expect(rejects.map((e) => e.message)).toEqual([`${p}:3: 3 fields where the header has 8`]);
+    expect(summary).toMatchObject({ linesRead: 3, rows: 2, rejected: 1 });
+  });
+
+  it('a quoting error rejects every line it swallowed, and reading goes on', async () => {
+    const lines = [header, good('A'), good('"B"x'), good('C'), good('D')];
+    const p = temp('quote.csv', lines.join('\n') + '\n');
+    const { rows, rejects, summary } = await read(p);
+    expect(summary.rows + summary.rejected).toBe(4); // every data line accounted for
+    expect(rows[0].designation).toBe('A');
+    expect(rejects[0].line).toBe(3);
+    expect(rejects.every((e) => e.message.startsWith(`${p}:`) && e.reason.startsWith('malformed CSV'))).toBe(true);
+  });
+
+  it('an unterminated quote at the end: the rest is rejected line by line', async () => {
+    const p = temp('open.csv', [header, good('A'), good('"B'), good('C')].join('\n') + '\n');
+    const { summary, rejects } = await read(p);
+    expect(summary.rows + summary.rejected).toBe(3);
+    expect(rejects.map((e) => e.line)).toEqual([3, 4]);
+  });
+
+  it('a header naming no orbit: one fatal error naming the file and the headers found', async () => {
+    const p = temp('shop.csv', 'item,price,qty\napple,1,2\n');
+    await expect(read(p)).rejects.toThrow(new UnreadableInputError(p,
+      'header lacks required orbit columns (designation; e; i; node; peri; epoch or tp; a, q or n; M or tp); headers found: item, price, qty'));
+  });
+
+  it('a mapping naming a header the file lacks is fatal', async () => {
+    const p = temp('map.csv', [header, good('A')].join('\n') + '\n');
+    await expect(read(p, { columns: { designation: 'objname' } })).rejects.toThrow(
+      `${p}: column mapping names headers the file lacks (designation=objname); headers found: ${header.split(',').join(', ')}`);
+  });
+
+  it('a bad cell names the line, the column header and the text', async () => {
+    const p = temp('cell.csv', [header, 'X,2461200.5,0.1,2.5,three,40,50,60'].join('\n') + '\n');
+    const { rejects } = await read(p);
+    expect(rejects.map((e) => e.message)).toEqual([`${p}:2: column 'i' (field 5): not a number: 'three'`]);
+  });
+});

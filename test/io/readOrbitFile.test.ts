@@ -1,0 +1,114 @@
+/**
+ * readOrbitFile end to end: format detection on the real samples, the header block of the
+ * real export file (its notice text before the dashed line), gzip, truncated lines, and the
+ * accounting invariant read = accepted + rejected under random garbage (fast-check).
+ */
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import fc from 'fast-check';
+import { afterAll, describe, expect, it } from 'vitest';
+import {
+  detectFormat, readOrbitFile, UnreadableInputError, type InputError, type ReadOrbitOptions,
+} from '../../src/io/index.js';
+
+const FIX = new URL('../fixtures/', import.meta.url);
+const ORBITS = readFileSync(new URL('orbit-export/orbits-export-sample.txt', FIX), 'latin1');
+const NOTICE = readFileSync(new URL('orbit-export/orbits-export-sample.NOTICE.txt', FIX), 'latin1');
+const COMETS = readFileSync(new URL('comet-export/comets-export-sample.txt', FIX), 'latin1');
+const dir = mkdtempSync(join(tmpdir(), 'wayward-read-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+let serial = 0;
+function temp(content: string | Buffer, name = `in${serial++}.txt`): string {
+  const p = join(dir, name);
+  writeFileSync(p, content);
+  return p;
+}
+
+async function read(path: string, options: ReadOrbitOptions = {}) {
+  const designations: string[] = [];
+  const rejects: InputError[] = [];
+  const summary = await readOrbitFile(path, options, (r) => designations.push(r.designation), (e) => rejects.push(e));
+  return { designations, rejects, summary };
+}
+
+describe('real samples', () => {
+  it('orbit export with its original header block (notice text ending in a dashed line)', async () => {
+    const p = temp(NOTICE + ORBITS);
+    const { designations, rejects, summary } = await read(p);
+    const headerLines = NOTICE.split('\n').length - 1;
+    expect(summary).toMatchObject({ format: 'orbit-export', rows: 258, rejected: 1, linesRead: 259 });
+    expect(summary.skipped).toBe(headerLines + 1); // the header block and the blank separator
+    expect(summary.lines).toBe(summary.linesRead + summary.skipped);
+    expect(designations[0]).toBe('(1) Ceres');
+    expect(rejects[0].message).toBe(`${p}:${headerLines + 178}:1: blank packed designation (columns 1–7)`);
+  });
+
+  it('comet export, gzip-compressed under a misleading name', async () => {
+    const { designations, summary } = await read(temp(gzipSync(COMETS), 'comets.csv'));
+    expect(summary).toMatchObject({ format: 'comet-export', rows: 100, rejected: 0, gzip: true });
+    expect(designations).toContain('C/1995 O1');
+  });
+
+  it('detects formats from content', () => {
+    expect(detectFormat(ORBITS.split('\n').slice(0, 5), 'x.csv')).toBe('orbit-export');
+    expect(detectFormat(COMETS.split('\n').slice(0, 5), 'x.txt')).toBe('comet-export');
+    expect(detectFormat(['designation,epoch,e,a,i,om,w,ma'], 'x.txt')).toBe('csv');
+    expect(() => detectFormat(['hello world', 'nothing here'], 'notes.txt')).toThrow(new UnreadableInputError(
+      'notes.txt', 'cannot tell the format from the first lines (no CSV header, no fixed-width orbit or comet lines); name the format explicitly'));
+  });
+
+  it('empty file: zero rows, no error', async () => {
+    const { summary } = await read(temp(''));
+    expect(summary).toMatchObject({ linesRead: 0, rows: 0, rejected: 0, skipped: 0, lines: 0 });
+  });
+
+  it('truncated lines and CRLF endings: exact one-line messages naming file and line', async () => {
+    const lines = ORBITS.split('\n').slice(0, 4);
+    lines[1] = lines[1].slice(0, 100); // cut inside the semimajor axis (columns 93–103)
+    lines[2] = lines[2].slice(0, 50); // cut inside the node (columns 49–57)
+    const p = temp(lines.join('\r\n') + '\r\n');
+    const { designations, rejects, summary } = await read(p);
+    expect(designations).toEqual(['(1) Ceres', '(4) Vesta']);
+    expect(rejects.map((e) => e.message)).toEqual([
+      `${p}:2:93: line ends at column 100, inside semimajor axis (columns 93–103)`,
+      `${p}:3:49: line ends at column 50, inside longitude of the ascending node (columns 49–57)`,
+    ]);
+    expect(summary.linesRead).toBe(4);
+  });
+});
+
+describe('accounting under garbage (property-based)', () => {
+  const valid = ORBITS.split('\n').slice(0, 150);
+  // printable ASCII and some Latin-1 letters; no line terminators
+  const garbage = fc.string({ unit: fc.constantFrom(...' -~!#$%&*+,./0123456789:;<=>?@ABCDEFGHIJKLMNOPQRSTUVWXYZ_abcdefghijklmnopqrstuvwxyz|éü'), maxLength: 220 });
+
+  it('orbit export: every line is a row, a reject or a skipped blank/separator line', async () => {
+    await fc.assert(fc.asyncProperty(
+      fc.array(fc.tuple(fc.nat({ max: valid.length }), garbage), { maxLength: 30 }),
+      async (inserts) => {
+        const lines = valid.slice();
+        for (const [at, text] of inserts) lines.splice(Math.min(at, lines.length), 0, text);
+        const { summary } = await read(temp(lines.join('\n') + '\n'), { format: 'orbit-export' });
+        expect(summary.linesRead).toBe(summary.rows + summary.rejected);
+        expect(summary.rows + summary.rejected + summary.skipped).toBe(lines.length);
+        expect(summary.rows).toBeGreaterThanOrEqual(valid.length);
+      }), { numRuns: 60 });
+  });
+
+  it('CSV without quotes: every line is a row, a reject or a skipped blank/header line', async () => {
+    const header = 'designation,epoch,e,a,i,node,peri,M';
+    const good = (k: number) => `B${k},2461200.5,0.1,2.5,3,40,50,60`;
+    const noQuotes = garbage.map((s) => s.replace(/"/g, ''));
+    await fc.assert(fc.asyncProperty(fc.array(fc.tuple(fc.nat({ max: 40 }), noQuotes), { maxLength: 20 }),
+      async (inserts) => {
+        const lines = Array.from({ length: 40 }, (_, k) => good(k));
+        for (const [at, text] of inserts) lines.splice(at, 0, text);
+        const { summary } = await read(temp([header, ...lines].join('\n') + '\n'), { format: 'csv' });
+        expect(summary.rows + summary.rejected + summary.skipped).toBe(lines.length + 1);
+        expect(summary.rows).toBeGreaterThanOrEqual(40);
+      }), { numRuns: 40 });
+  });
+});
