@@ -92,6 +92,9 @@ export class EphemerisCache implements Ephemeris {
     this.startJdTDB = startJdTDB;
     this.endJdTDB = endJdTDB;
     this.velocity = opts.velocity ?? 'derivative';
+    if (this.velocity !== 'derivative' && this.velocity !== 'fitted') {
+      throw new TypeError(`EphemerisCache: velocity must be 'derivative' or 'fitted', got '${String(this.velocity)}'`);
+    }
     this.name = `Chebyshev cache over ${source.name}`;
     const layouts = opts.layouts ?? DEFAULT_CHEBYSHEV_LAYOUTS;
     if (layouts.length !== EPHEMERIS_BODIES.length) {
