@@ -78,24 +78,26 @@ function readableEnd(line: string): number {
 function readDesignation(line: string, row: OrbitRow, file: string, lineNo: number): void {
   const packed = fieldText(line, C.packed[0], C.packed[1]);
   if (packed === '') fail(file, lineNo, line, C.packed, `blank packed designation (${columnsOf(C.packed)})`);
-  let unpacked: string;
-  try {
-    unpacked = unpackDesignation(packed);
-  } catch (err) {
-    if (err instanceof PackedFormError) fail(file, lineNo, line, C.packed, err.message);
-    throw err;
-  }
   row.packedDesignation = packed;
-  row.number = unpackNumber(packed);
+  row.number = unpackNumber(packed); // the common case first: no readable string to build
+  let unpacked = '';
+  if (Number.isNaN(row.number)) {
+    try {
+      unpacked = unpackDesignation(packed);
+    } catch (err) {
+      if (err instanceof PackedFormError) fail(file, lineNo, line, C.packed, err.message);
+      throw err;
+    }
+  }
   const readable = fieldText(line, C.readable[0], readableEnd(line));
-  row.designation = readable === '' ? unpacked : readable;
+  row.designation = readable !== '' ? readable : unpacked !== '' ? unpacked : `(${row.number})`;
   row.name = '';
   if (Number.isFinite(row.number) && readable !== '') {
     // '(N)' or '(N) Name'
     const close = readable.indexOf(')');
     const n = readable.charCodeAt(0) === 40 && close > 1 ? parseDigits(readable, 1, close) : -1;
     if (n !== row.number) {
-      fail(file, lineNo, line, C.readable, `readable designation '${readable}' disagrees with packed ${packed} = ${unpacked}`);
+      fail(file, lineNo, line, C.readable, `readable designation '${readable}' disagrees with packed ${packed} = (${row.number})`);
     }
     row.name = readable.slice(close + 1).trim();
   }
