@@ -7,7 +7,7 @@
  *   f′ = r = r0 c0 + η0 s c1 + μ s² c2,   f″ = η0 c0 + ζ0 s c1,   f‴ = ζ0 c0 − β η0 s c1
  *   f = 1 − (μ/r0) s² c2,  g = r0 s c1 + η0 s² c2,  ḟ = −(μ/(r r0)) s c1,  ġ = 1 − (μ/r) s² c2
  * Solver: Danby's quartic Newton correction inside a bracket (f(s) increases with s since
- * f′ = r > 0), bisection when a step leaves it. Elliptic orbits first reduce t − t0 modulo
+ * f′ = r > 0), bisection when a step leaves it or stalls. Elliptic orbits first reduce t − t0 modulo
  * the period, which bounds s by ±2π/√β. Tolerance: a time residual at the rounding level
  * of the terms of f (8ε of them: for t − t0 = 1000 d about 2e-12 d, micrometres of
  * position), or |Δs| ≤ 4ε|s|, or a fourth-order step below 1e-7 |s| (which leaves an error
@@ -76,34 +76,53 @@ export function propagateTwoBody(
   out[outOffset + 5] = fd * z0 + gd * vz0;
 }
 
-/** Root s of the universal Kepler equation inside (lo, hi) (either may be infinite). */
+/** f, f′, f″, f‴ of the universal Kepler equation at s, and the size of f's terms, into F. */
+const F = new Float64Array(5);
+function kepler(s: number, dt: number, r0: number, eta0: number, zeta0: number, beta: number, mu: number): void {
+  stumpffInto(beta * s * s, C);
+  const t1 = r0 * s * C[1];
+  const t2 = eta0 * s * s * C[2];
+  const t3 = mu * s * s * s * C[3];
+  F[0] = t1 + t2 + t3 - dt;
+  F[1] = r0 * C[0] + eta0 * s * C[1] + mu * s * s * C[2];
+  F[2] = eta0 * C[0] + zeta0 * s * C[1];
+  F[3] = zeta0 * C[0] - beta * eta0 * s * C[1];
+  F[4] = Math.abs(t1) + Math.abs(t2) + Math.abs(t3) + Math.abs(dt);
+}
+
+/**
+ * Root s of the universal Kepler equation inside [lo, hi] (either may be infinite).
+ * Safeguards as in the "rtsafe" scheme (Press et al., Numerical Recipes, 3rd ed. §9.4):
+ * bisect when a step leaves the bracket or does not halve the step before last.
+ */
 function solveUniversal(
   dt: number, r0: number, eta0: number, zeta0: number, beta: number, mu: number, lo: number, hi: number, h2: number,
 ): number {
   if (dt === 0) return 0;
-  // Starter: s ≈ dt / r0 (first order in dt). On a hyperbola far from t0, f grows like
-  // e^{√−β |s|}: take s from f ≈ ±½ e^{√−β |s|} (r0 α ± η0 √α + μ)/α^{3/2}, α = −β, the
-  // logarithmic guess that Vallado 2013 (Algorithm 8) also uses.
+  // Starter: s ≈ dt / r0 (first order in dt). On a hyperbola f can grow like e^{√−β |s|}:
+  // then s from f ≈ ±½ e^{√−β |s|} (r0 α ± η0 √α + μ)/α^{3/2}, α = −β, the logarithmic
+  // guess Vallado 2013 (Algorithm 8) uses; whichever leaves the smaller |f| is kept.
   let s = dt / r0;
+  if (!(s >= lo && s <= hi)) s = 0.5 * (lo + hi);
   if (beta < 0) {
     const alpha = -beta;
     const sa = Math.sqrt(alpha);
     const k = (r0 * alpha + Math.sign(dt) * eta0 * sa + mu) / (alpha * sa);
     const y = Math.log((2 * Math.abs(dt)) / k);
-    if (k > 0 && y > 1 && y < Math.abs(s) * sa) s = (Math.sign(dt) * y) / sa;
+    if (k > 0 && y > 1) {
+      const sLog = (Math.sign(dt) * y) / sa;
+      kepler(s, dt, r0, eta0, zeta0, beta, mu);
+      const fLin = Math.abs(F[0]);
+      kepler(sLog, dt, r0, eta0, zeta0, beta, mu);
+      if (Math.abs(F[0]) < fLin || Number.isNaN(fLin)) s = sLog;
+    }
   }
-  if (!(s >= lo && s <= hi)) s = Number.isFinite(lo) && Number.isFinite(hi) ? 0.5 * (lo + hi) : s;
-  let step = Infinity;
+  let step = hi - lo;
+  let stepOld = step;
   for (let it = 1; it <= MAX_ITERATIONS; it++) {
-    stumpffInto(beta * s * s, C);
-    const t1 = r0 * s * C[1];
-    const t2 = eta0 * s * s * C[2];
-    const t3 = mu * s * s * s * C[3];
-    const f = t1 + t2 + t3 - dt;
-    const fp = r0 * C[0] + eta0 * s * C[1] + mu * s * s * C[2];
-    const fpp = eta0 * C[0] + zeta0 * s * C[1];
-    const fppp = zeta0 * C[0] - beta * eta0 * s * C[1];
-    if (f === 0 || Math.abs(f) <= 8 * EPS * (Math.abs(t1) + Math.abs(t2) + Math.abs(t3) + Math.abs(dt))) return s;
+    kepler(s, dt, r0, eta0, zeta0, beta, mu);
+    const f = F[0], fp = F[1], fpp = F[2], fppp = F[3];
+    if (f === 0 || Math.abs(f) <= 8 * EPS * F[4]) return s;
     if (Number.isNaN(f)) {
       // cosh/sinh overflowed: |s| is far too large on that side.
       if (s > 0) hi = s;
@@ -113,15 +132,22 @@ function solveUniversal(
     const d1 = -f / fp;
     const d2 = -f / (fp + 0.5 * d1 * fpp);
     const d3 = -f / (fp + 0.5 * d2 * fpp + (d2 * d2 * fppp) / 6);
-    let next = s + d3;
+    // Far from the root the quartic correction can shrink the step to a crawl (large f″, f‴
+    // across perihelion); then take the Newton step, which at worst overshoots and closes
+    // the bracket.
+    const d = Math.abs(d3) < 0.5 * Math.abs(d1) || d3 * d1 < 0 ? d1 : d3;
+    let next = s + d;
+    const inside = next >= lo && next <= hi;
     // An in-bracket fourth-order step this small leaves an error of order step⁴: done.
-    if (next >= lo && next <= hi && Math.abs(d3) <= 1e-7 * Math.abs(s)) return next;
-    if (!(next >= lo && next <= hi)) {
-      // Outside the bracket: bisect, or expand towards the open side.
-      if (Number.isFinite(lo) && Number.isFinite(hi)) next = 0.5 * (lo + hi);
+    if (inside && d === d3 && Math.abs(d3) <= 1e-7 * Math.abs(s)) return next;
+    const finite = Number.isFinite(lo) && Number.isFinite(hi);
+    if (!inside || (finite && Math.abs(d) > 0.5 * Math.abs(stepOld))) {
+      // Bisect, or expand towards the open side.
+      if (finite) next = 0.5 * (lo + hi);
       else if (Number.isFinite(lo)) next = lo > 0 ? 2 * lo : Math.abs(dt / r0);
       else next = hi < 0 ? 2 * hi : -Math.abs(dt / r0);
     }
+    stepOld = step;
     step = next - s;
     s = next;
     if (Math.abs(step) <= 4 * EPS * Math.abs(s) + 1e-300 || hi - lo <= 4 * EPS * Math.abs(s) + 1e-300) return s;
