@@ -130,11 +130,16 @@ export class CsvTableReader {
     this.compact();
   }
 
-  /** Takes the pending lines of one record: returns its first line and raw text. */
-  private take(endLine: number): { line: number; raw: string } {
+  /**
+   * Takes the pending lines of one record: its first line and raw text, or null when it
+   * has none (a line of blanks, already counted as skipped, that csv-parse turned into an
+   * empty record).
+   */
+  private take(endLine: number): { line: number; raw: string } | null {
     const first = this.pendingHead;
     while (this.pendingHead < this.pendingNos.length && this.pendingNos[this.pendingHead] <= endLine) this.pendingHead++;
-    const line = first < this.pendingHead ? this.pendingNos[first] : endLine;
+    if (first === this.pendingHead) return null;
+    const line = this.pendingNos[first];
     const raw = this.pendingTexts.slice(first, this.pendingHead).join('\n');
     this.compact();
     return { line, raw };
@@ -150,7 +155,9 @@ export class CsvTableReader {
 
   private onRecord(record: string[], endLine: number): void {
     if (this.fatal) return;
-    const { line, raw } = this.take(endLine);
+    const taken = this.take(endLine);
+    if (taken === null) return;
+    const { line, raw } = taken;
     if (this.headers === null) {
       this.counts.skipped++;
       this.setHeader(record);

@@ -115,6 +115,12 @@ describe('bad rows and bad headers', () => {
     expect(summary).toMatchObject({ linesRead: 3, rows: 2, rejected: 1 });
   });
 
+  it('lines of blanks are skipped, not rows', async () => {
+    const p = temp('blanks.csv', [header, good('A'), '   ', '\t', '', good('B')].join('\n') + '\n');
+    const { summary } = await read(p);
+    expect(summary).toMatchObject({ rows: 2, rejected: 0, skipped: 4 });
+  });
+
   it('a quoting error rejects every line it swallowed, and reading goes on', async () => {
     const lines = [header, good('A'), good('"B"x'), good('C'), good('D')];
     const p = temp('quote.csv', lines.join('\n') + '\n');
