@@ -7,7 +7,7 @@ import { CatalogueBuilder, type BuilderOptions } from '../clean/catalogueBuilder
 import type { Catalogue, Reject } from '../clean/types.js';
 import { readOrbitFile } from '../io/readOrbitFile.js';
 import { UnreadableInputError } from '../io/errors.js';
-import type { InputFormat } from '../io/types.js';
+import type { InputFormat, OrbitRow } from '../io/types.js';
 import type { FileAccount } from '../report/types.js';
 
 export interface LoadOptions extends BuilderOptions {
@@ -32,7 +32,7 @@ export async function loadCatalogue(paths: readonly string[], opts: LoadOptions 
       const info = await readOrbitFile(
         path,
         { format: opts.format, columns: opts.columns },
-        (row, line, text) => builder.add(row, path, line, text),
+        (row: OrbitRow, line: number, text?: string) => builder.add(row, path, line, text ?? ""),
         (err) => builder.rejectUnparsed(path, err.line, err.reason, err.text),
       );
       files.push({

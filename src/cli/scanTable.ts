@@ -1,6 +1,6 @@
 /** The short stdout summary of a scan: totals and the top candidates of each detector. */
 import { falseAlarmCell, flagsCell, scoreCell } from '../report/candidateCells.js';
-import { topOf } from '../report/rank.js';
+import { topByClass } from '../report/rank.js';
 import { textTable } from '../report/textTable.js';
 import type { ScanResult } from './scan.js';
 
@@ -16,7 +16,7 @@ export function scanStdoutTable(result: ScanResult, top: number, colour: boolean
   for (const d of s.detectors) {
     const counts = Object.entries(s.candidates[d]).map(([c, n]) => `${c} ${n}`).join(', ');
     lines.push('', bold(`${d}: ${counts}`));
-    const best = topOf(result.ranked, d, top);
+    const best = topByClass(result.ranked, d, top).flatMap(([, list]) => list);
     if (best.length === 0) continue;
     const rows = best.map((c) => [c.designation, c.class, scoreCell(c), falseAlarmCell(c), flagsCell(c)]);
     lines.push(textTable(['designation', 'class', 'score', 'false alarm', 'flags'], rows, [false, false, true, true, false]));

@@ -15,7 +15,17 @@ export function rankInPlace(candidates: Candidate[], detectorOrder: readonly str
   );
 }
 
-/** The best `n` candidates of one detector, boundary cases excluded unless nothing else. */
-export function topOf(candidates: readonly Candidate[], detector: string, n: number): Candidate[] {
-  return candidates.filter((c) => c.detector === detector && c.score > 0).slice(0, n);
+/**
+ * The best `n` candidates of each class of one detector, from ranked candidates, classes in
+ * order of their best score. Candidates scoring ≤ 0 (boundary cases) are left out.
+ */
+export function topByClass(ranked: readonly Candidate[], detector: string, n: number): [string, Candidate[]][] {
+  const groups = new Map<string, Candidate[]>();
+  for (const c of ranked) {
+    if (c.detector !== detector || !(c.score > 0)) continue;
+    const list = groups.get(c.class) ?? [];
+    if (list.length < n) list.push(c);
+    groups.set(c.class, list);
+  }
+  return [...groups];
 }

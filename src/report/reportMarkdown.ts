@@ -6,7 +6,7 @@
 import type { Catalogue } from '../clean/types.js';
 import type { Candidate, Detector } from '../detect/types.js';
 import { falseAlarmCell, flagsCell, scoreCell } from './candidateCells.js';
-import { topOf } from './rank.js';
+import { topByClass } from './rank.js';
 import { markdownTable } from './textTable.js';
 import type { ScanSummary } from './types.js';
 
@@ -42,11 +42,11 @@ function qualitySection(s: ScanSummary): string {
 function detectorSection(d: Detector, ranked: readonly Candidate[], s: ScanSummary, top: number): string {
   const counts = s.candidates[d.id] ?? {};
   const countLine = Object.entries(counts).map(([cls, n]) => `${cls} ${n}`).join(', ');
-  const best = topOf(ranked, d.id, top);
   const parts = [`## ${d.id}`, '', `${d.description}.`, '', `Candidates: ${countLine || 'none'}.`];
-  if (best.length > 0) {
-    const rows = best.map((c, k) => [String(k + 1), c.designation, c.class, scoreCell(c), falseAlarmCell(c), flagsCell(c), c.why]);
-    parts.push('', markdownTable(['#', 'designation', 'class', 'score', 'false alarm', 'flags', 'why'], rows, [true, false, false, true, true, false, false]));
+  for (const [cls, best] of topByClass(ranked, d.id, top)) {
+    const rows = best.map((c, k) => [String(k + 1), c.designation, scoreCell(c), falseAlarmCell(c), flagsCell(c), c.why]);
+    parts.push('', `### ${cls} (top ${best.length} of ${counts[cls]})`, '',
+      markdownTable(['#', 'designation', 'score', 'false alarm', 'flags', 'why'], rows, [true, false, true, true, false, false]));
   }
   return parts.join('\n');
 }
