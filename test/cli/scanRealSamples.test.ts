@@ -1,0 +1,55 @@
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { parse } from 'csv-parse/sync';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { ROOT, runCli, tempDir } from './cliHarness.js';
+
+// Real data: copies of the shared open samples of the one-line orbit and comet export
+// formats (provenance and notice in test/fixtures/orbit-export/ and comet-export/).
+const ORBITS = join(ROOT, 'test/fixtures/orbit-export/orbits-export-sample.txt');
+const COMETS = join(ROOT, 'test/fixtures/comet-export/comets-export-sample.txt');
+
+interface Cand { designation: string; class: string; details: { T: number } }
+let out = '';
+let summary: { rows: { read: number; accepted: number; rejected: number }; files: { rows: { read: number; accepted: number; rejected: number } }[] };
+let candidates: Cand[] = [];
+
+beforeAll(() => {
+  out = tempDir();
+  const r = runCli(['scan', ORBITS, COMETS, '--out', out, '--quiet', '--reproducible']);
+  expect(r.status, r.stderr).toBe(0);
+  summary = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
+  candidates = readFileSync(join(out, 'candidates.jsonl'), 'utf8').trim().split('\n').filter(Boolean).map((l) => JSON.parse(l));
+});
+
+describe('scan on real export samples', () => {
+  it('reads every data line of both samples (259 orbit lines, 100 comet lines): read = accepted + rejected', () => {
+    // 260 lines in the orbit sample, one of them the blank separator; 100 comet lines.
+    expect(summary.rows.read).toBe(259 + 100);
+    // Line 178 of the orbit sample has no designation and zero elements: the one reject.
+    expect(summary.rows.rejected).toBe(1);
+    expect(summary.rows.read).toBe(summary.rows.accepted + summary.rows.rejected);
+    for (const f of summary.files) expect(f.rows.read).toBe(f.rows.accepted + f.rows.rejected);
+  });
+
+  it('every rejected row carries its line, reason and raw text', () => {
+    const rejects = parse(readFileSync(join(out, 'rejects.csv')), { columns: true }) as { line: string; reason: string; text: string }[];
+    expect(rejects.length).toBe(summary.rows.rejected);
+    for (const r of rejects) {
+      expect(Number(r.line)).toBeGreaterThan(0);
+      expect(r.reason.length).toBeGreaterThan(5);
+      expect(r.text.length).toBeGreaterThan(0);
+    }
+  });
+
+  it('raises the main-belt comet P/2013 R3 as asteroid-like (T_J ≈ 3.18; known active asteroid, from memory)', () => {
+    const r3 = candidates.find((c) => c.designation.startsWith('P/2013 R3 ') || c.designation === 'P/2013 R3');
+    expect(r3?.class).toBe('asteroid-like-T');
+    expect(Math.abs(r3!.details.T - 3.18)).toBeLessThan(0.01);
+  });
+
+  it('does not raise (1) Ceres, (2) Pallas or (4) Vesta, which are asteroidal (T_J > 3)', () => {
+    const names = candidates.map((c) => c.designation);
+    for (const n of ['(1) Ceres', '(2) Pallas', '(4) Vesta']) expect(names).not.toContain(n);
+  });
+});
