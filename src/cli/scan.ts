@@ -107,18 +107,10 @@ export async function runScan(opts: ScanOptions, progress?: Progress): Promise<S
   return { summary, ranked, errors: loaded.errors.map((e) => e.message), outDir: opts.out };
 }
 
-interface RawScanFlags {
-  out: string;
-  detectors: string[];
-  planet: PlanetName;
-  tisserandBoundary: number;
-  tisserandMargin: number;
-  includeExterior: boolean;
-  inputFormat?: InputFormat;
-  columns?: Record<string, string>;
+/** What commander hands the action: the scan options plus the ones only the CLI uses. */
+interface RawScanFlags extends Omit<ScanOptions, 'files'> {
   format: 'text' | 'json';
   quiet: boolean;
-  reproducible: boolean;
   top: number;
   progress: boolean;
 }
