@@ -56,24 +56,32 @@ function timeCat(file: string): number {
   }
 }
 
-interface ScanRun { seconds: number; status: number | null; stderr: string; timeMaxRssKb: number }
+interface ScanRun { seconds: number; status: number | null; stderr: string; timeMaxRssKb: number; cpuSeconds: number }
 
 /** Wall time of the scan child; under /usr/bin/time -f %M when available (peak RSS fallback). */
 function timeScan(file: string, outDir: string): ScanRun {
   const args = [CLI, 'scan', file, '--detectors', 'tisserand', '--out', outDir, '--quiet'];
   const useTime = existsSync('/usr/bin/time');
   const [cmd, argv] = useTime
-    ? ['/usr/bin/time', ['-f', 'maxrss-kb=%M', process.execPath, ...args]]
+    ? ['/usr/bin/time', ['-f', 'maxrss-kb=%M cpu-user=%U cpu-sys=%S', process.execPath, ...args]]
     : [process.execPath, args];
   const t0 = process.hrtime.bigint();
   const r = spawnSync(cmd, argv, { cwd: ROOT, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8', maxBuffer: 1 << 26 });
   const seconds = secondsSince(t0);
-  const m = /maxrss-kb=(\d+)/.exec(r.stderr ?? '');
-  const stderr = (r.stderr ?? '').replace(/maxrss-kb=\d+\s*/, '').trim();
-  return { seconds, status: r.status, stderr, timeMaxRssKb: m ? Number(m[1]) : NaN };
+  const m = /maxrss-kb=(\d+) cpu-user=([\d.]+) cpu-sys=([\d.]+)/.exec(r.stderr ?? '');
+  const stderr = (r.stderr ?? '').replace(/maxrss-kb=.*\n?/, '').trim();
+  return {
+    seconds, status: r.status, stderr,
+    timeMaxRssKb: m ? Number(m[1]) : NaN,
+    cpuSeconds: m ? Number(m[2]) + Number(m[3]) : NaN,
+  };
 }
 
-interface ScanSummaryView { rows?: { read: number; accepted: number; rejected: number }; resources?: { peakRssMb?: number } }
+interface ScanSummaryView {
+  rows?: { read: number; accepted: number; rejected: number };
+  resources?: { peakRssMb?: number };
+  timing?: Record<string, number>;
+}
 
 function readSummary(outDir: string): ScanSummaryView | null {
   const path = join(outDir, 'summary.json');
@@ -112,7 +120,12 @@ function main(): void {
     const rowsRead = summary?.rows?.read ?? o.rows;
     const rate = rowsRead / scan.seconds;
     const secondsFor1_5M = (1_500_000 / rowsRead) * scan.seconds;
-    console.log(`  wayward scan --detectors tisserand (end to end, child process): ${scan.seconds.toFixed(2)} s`);
+    const cpu = Number.isFinite(scan.cpuSeconds) ? ` (child CPU ${scan.cpuSeconds.toFixed(2)} s user+sys)` : '';
+    console.log(`  wayward scan --detectors tisserand (end to end, child process): ${scan.seconds.toFixed(2)} s${cpu}`);
+    if (summary?.timing) {
+      const parts = Object.entries(summary.timing).map(([k, v]) => `${k.replace(/Seconds$/, '')} ${v.toFixed(2)} s`);
+      console.log(`    scan's own timing (summary.json): ${parts.join(', ')}`);
+    }
     if (summary?.rows) {
       const r = summary.rows;
       console.log(`    rows read ${fmtInt(r.read)} = accepted ${fmtInt(r.accepted)} + rejected ${fmtInt(r.rejected)}` +
