@@ -54,6 +54,15 @@ const NAMES: Readonly<Record<CsvField, readonly string[]>> = {
 
 export const CSV_FIELDS = Object.keys(NAMES) as CsvField[];
 
+/** RangeError for a mapping that names an orbit field not in CSV_FIELDS (caller misuse). */
+export function checkColumnMapping(mapping: ColumnMapping): void {
+  for (const field of Object.keys(mapping)) {
+    if (!(CSV_FIELDS as string[]).includes(field)) {
+      throw new RangeError(`unknown orbit field '${field}' in the column mapping; known: ${CSV_FIELDS.join(', ')}`);
+    }
+  }
+}
+
 /** The field a header spelled `omega` in any case belongs to (first letter decides). */
 function caseSensitiveField(header: string): CsvField | undefined {
   if (header.toLowerCase() !== 'omega') return undefined;

@@ -16,7 +16,7 @@
  * naming a header the file lacks → UnreadableInputError for the whole file.
  */
 import { parse, type Options, type Parser } from 'csv-parse';
-import { mapColumns, missingRequired, type ColumnIndex, type ColumnMapping } from './columnMap.js';
+import { checkColumnMapping, mapColumns, missingRequired, type ColumnIndex, type ColumnMapping } from './columnMap.js';
 import { parseCsvRecord } from './csvRecord.js';
 import { UnreadableInputError } from './errors.js';
 import { InputError, type OrbitRow } from './types.js';
@@ -61,9 +61,11 @@ export class CsvTableReader {
     private readonly file: string,
     private readonly mapping: ColumnMapping,
     private readonly row: OrbitRow,
-    private readonly onRow: (row: OrbitRow, lineNo: number) => void,
+    private readonly onRow: (row: OrbitRow, lineNo: number, text: string) => void,
     private readonly onReject: (err: InputError) => void,
-  ) {}
+  ) {
+    checkColumnMapping(mapping);
+  }
 
   /** One input line (from forEachLine), 1-based line numbers in order. */
   pushLine(text: string, lineNo: number): void {
@@ -175,7 +177,7 @@ export class CsvTableReader {
       return;
     }
     this.counts.rows++;
-    this.onRow(this.row, line);
+    this.onRow(this.row, line, raw);
   }
 
   private setHeader(record: string[]): void {

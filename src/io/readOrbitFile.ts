@@ -1,7 +1,8 @@
 /**
  * Reads one orbit input of any known format: streams its lines (./lineSource.ts), finds a
  * header block, detects the format (./detectFormat.ts) unless told, and hands every data row
- * to `onRow` in one reused scratch OrbitRow (copy what you keep) or every bad one to
+ * to `onRow` in one reused scratch OrbitRow (copy what you keep) with its line number and
+ * raw text (for CSV: the record's lines), or every bad one to
  * `onReject`. Invariant the pipeline builds on: linesRead = rows + rejected, where linesRead
  * counts data lines (records for CSV); header, blank and separator lines are `skipped`.
  * Fatal problems with the whole file → UnreadableInputError (`FILE: reason`).
@@ -45,7 +46,7 @@ type Sink = (text: string, lineNo: number) => void;
 export async function readOrbitFile(
   path: string,
   options: ReadOrbitOptions,
-  onRow: (row: OrbitRow, lineNo: number) => void,
+  onRow: (row: OrbitRow, lineNo: number, text: string) => void,
   onReject: (err: InputError) => void,
 ): Promise<ReadOrbitSummary> {
   const row = emptyOrbitRow();
@@ -69,7 +70,7 @@ export async function readOrbitFile(
     if (outcome === 'skip') counts.skipped++;
     else {
       counts.rows++;
-      onRow(row, lineNo);
+      onRow(row, lineNo, text);
     }
   };
 

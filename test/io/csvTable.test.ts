@@ -150,6 +150,11 @@ describe('bad rows and bad headers', () => {
       `${p}: column mapping names headers the file lacks (designation=objname); headers found: ${header.split(',').join(', ')}`);
   });
 
+  it('a mapping naming an unknown orbit field is caller misuse (RangeError)', async () => {
+    const p = temp('field.csv', [header, good('A')].join('\n') + '\n');
+    await expect(read(p, { columns: { colour: 'x' } as never })).rejects.toThrow(RangeError);
+  });
+
   it('a bad cell names the line, the column header and the text', async () => {
     const p = temp('cell.csv', [header, 'X,2461200.5,0.1,2.5,three,40,50,60'].join('\n') + '\n');
     const { rejects } = await read(p);
