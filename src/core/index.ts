@@ -23,3 +23,5 @@ export * from './kepler.js';
 export * from './anomaly.js';
 export * from './universal.js';
 export * from './twoBody.js';
+export * from './readerEpochs.js';
+export * from './stateToElements.js';

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { julian } from 'astronomia';
 import { calendarToJd, jdToCalendar } from '../../src/core/julian.js';
-import { jdToMjd, mjdToJd } from '../../src/core/time.js';
+import { jdToMjd, mjdToJd } from '../../src/core/readerEpochs.js';
 
 // Meeus p. 62 table, plus examples 7.a and 7.b. From memory of the book.
 const MEEUS_TABLE: ReadonlyArray<readonly [number, number, number, number]> = [

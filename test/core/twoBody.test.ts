@@ -7,10 +7,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { propagateTwoBody } from '../../src/core/universal.js';
+import { perihelionElementsToState, semimajorElementsToState, stateFromPerihelion } from '../../src/core/twoBody.js';
 import {
-  perihelionElementsToState, perihelionFromState, semimajorElementsToState, semimajorFromState,
-  stateFromPerihelion, stateToPerihelionElements, stateToSemimajorElements,
-} from '../../src/core/twoBody.js';
+  perihelionFromState, semimajorFromState, stateToPerihelionElements, stateToSemimajorElements,
+} from '../../src/core/stateToElements.js';
 import { meanMotionRadPerDay } from '../../src/core/anomaly.js';
 import { GM_SUN_AU3_PER_DAY2, KM_PER_AU } from '../../src/core/constants.js';
 
