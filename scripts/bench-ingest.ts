@@ -21,10 +21,12 @@ const TARGET_PEAK_RSS_MB = 1536; // 1.5 GB
 const ROOT = resolve(import.meta.dirname, '..');
 const CLI = join(ROOT, 'dist', 'src', 'cli', 'main.js');
 
-function positiveInteger(value: string): number {
-  const n = Number(value.replace(/_/g, ''));
-  if (!Number.isInteger(n) || n < 100) throw new InvalidArgumentError(`not an integer ≥ 100: ${value}`);
-  return n;
+function integerAtLeast(min: number): (value: string) => number {
+  return (value: string): number => {
+    const n = Number(value.replace(/_/g, ''));
+    if (!Number.isInteger(n) || n < min) throw new InvalidArgumentError(`not an integer ≥ ${min}: ${value}`);
+    return n;
+  };
 }
 
 function secondsSince(t0: bigint): number {
@@ -90,17 +92,46 @@ function readSummary(outDir: string): ScanSummaryView | null {
 
 const verdict = (ok: boolean): string => (ok ? 'met' : 'NOT met');
 
+/** Prints the scan figures next to the targets. */
+function reportScan(scan: ScanRun, summary: ScanSummaryView | null, generatedRows: number): void {
+  const rowsRead = summary?.rows?.read ?? generatedRows;
+  const rate = rowsRead / scan.seconds;
+  const secondsFor1_5M = (1_500_000 / rowsRead) * scan.seconds;
+  const cpu = Number.isFinite(scan.cpuSeconds) ? ` (child CPU ${scan.cpuSeconds.toFixed(2)} s user+sys)` : '';
+  console.log(`  wayward scan --detectors tisserand (end to end, child process): ${scan.seconds.toFixed(2)} s${cpu}`);
+  if (summary?.timing) {
+    const parts = Object.entries(summary.timing).map(([k, v]) => `${k.replace(/Seconds$/, '')} ${v.toFixed(2)} s`);
+    console.log(`    scan's own timing (summary.json): ${parts.join(', ')}`);
+  }
+  if (summary?.rows) {
+    const r = summary.rows;
+    console.log(`    rows read ${fmtInt(r.read)} = accepted ${fmtInt(r.accepted)} + rejected ${fmtInt(r.rejected)}` +
+      `${r.read === generatedRows ? '' : `  (generated ${fmtInt(generatedRows)}: MISMATCH)`}`);
+  }
+  console.log(`    throughput ${fmtInt(rate)} rows/s   target >= ${fmtInt(TARGET_ROWS_PER_S)} rows/s: ${verdict(rate >= TARGET_ROWS_PER_S)}`);
+  console.log(`    scaled to 1.5 M rows ${secondsFor1_5M.toFixed(2)} s   target < ${TARGET_SECONDS_1_5M} s: ${verdict(secondsFor1_5M < TARGET_SECONDS_1_5M)}`);
+  const fromSummary = summary?.resources?.peakRssMb;
+  const peakMb = fromSummary ?? (Number.isFinite(scan.timeMaxRssKb) ? scan.timeMaxRssKb / 1024 : NaN);
+  const source = fromSummary !== undefined ? 'summary.json resources.peakRssMb' : Number.isFinite(peakMb) ? '/usr/bin/time %M' : '';
+  if (Number.isFinite(peakMb)) {
+    const cross = fromSummary !== undefined && Number.isFinite(scan.timeMaxRssKb) ? ` (/usr/bin/time says ${(scan.timeMaxRssKb / 1024).toFixed(0)} MB)` : '';
+    console.log(`    peak RSS ${peakMb.toFixed(0)} MB from ${source}${cross}   target < ${TARGET_PEAK_RSS_MB} MB: ${verdict(peakMb < TARGET_PEAK_RSS_MB)}`);
+  } else {
+    console.log('    peak RSS unknown (no summary.json resources and no /usr/bin/time)');
+  }
+}
+
 function main(): void {
   const o = new Command('bench-ingest')
-    .option('--rows <n>', 'rows in the generated dump', positiveInteger, 1_500_000)
-    .option('--seed <n>', 'generator seed', positiveInteger, DEFAULT_SEED)
+    .option('--rows <n>', 'rows in the generated dump', integerAtLeast(100), 1_500_000)
+    .option('--seed <n>', 'generator seed', integerAtLeast(0), DEFAULT_SEED)
     .option('--build', 'rebuild dist/ first even if it exists', false)
     .parse()
     .opts<{ rows: number; seed: number; build: boolean }>();
   ensureBuilt(o.build);
   const dir = mkdtempSync(join(tmpdir(), 'wayward-bench-ingest-'));
   try {
-    let t0 = process.hrtime.bigint();
+    const t0 = process.hrtime.bigint();
     const gen = generateDemo({ seed: o.seed, outDir: join(dir, 'dump'), bodies: o.rows, populationOnly: true });
     const genSeconds = secondsSince(t0);
     const file = gen.files[0];
@@ -109,39 +140,13 @@ function main(): void {
     console.log(`  generation (not measured below): ${genSeconds.toFixed(2)} s, ${fmtInt(o.rows / genSeconds)} rows/s`);
     const catSeconds = timeCat(file);
     console.log(`  cat FILE > /dev/null:            ${catSeconds.toFixed(3)} s, ${(mb / catSeconds).toFixed(0)} MB/s`);
-    t0 = process.hrtime.bigint();
     const scan = timeScan(file, join(dir, 'out'));
     if (scan.status !== 0) {
       console.log(`  scan FAILED (exit ${scan.status}) after ${scan.seconds.toFixed(2)} s:\n${scan.stderr}`);
       process.exitCode = 1;
       return;
     }
-    const summary = readSummary(join(dir, 'out'));
-    const rowsRead = summary?.rows?.read ?? o.rows;
-    const rate = rowsRead / scan.seconds;
-    const secondsFor1_5M = (1_500_000 / rowsRead) * scan.seconds;
-    const cpu = Number.isFinite(scan.cpuSeconds) ? ` (child CPU ${scan.cpuSeconds.toFixed(2)} s user+sys)` : '';
-    console.log(`  wayward scan --detectors tisserand (end to end, child process): ${scan.seconds.toFixed(2)} s${cpu}`);
-    if (summary?.timing) {
-      const parts = Object.entries(summary.timing).map(([k, v]) => `${k.replace(/Seconds$/, '')} ${v.toFixed(2)} s`);
-      console.log(`    scan's own timing (summary.json): ${parts.join(', ')}`);
-    }
-    if (summary?.rows) {
-      const r = summary.rows;
-      console.log(`    rows read ${fmtInt(r.read)} = accepted ${fmtInt(r.accepted)} + rejected ${fmtInt(r.rejected)}` +
-        `${r.read === o.rows ? '' : `  (generated ${fmtInt(o.rows)}: MISMATCH)`}`);
-    }
-    console.log(`    throughput ${fmtInt(rate)} rows/s   target >= ${fmtInt(TARGET_ROWS_PER_S)} rows/s: ${verdict(rate >= TARGET_ROWS_PER_S)}`);
-    console.log(`    scaled to 1.5 M rows ${secondsFor1_5M.toFixed(2)} s   target < ${TARGET_SECONDS_1_5M} s: ${verdict(secondsFor1_5M < TARGET_SECONDS_1_5M)}`);
-    const fromSummary = summary?.resources?.peakRssMb;
-    const peakMb = fromSummary ?? (Number.isFinite(scan.timeMaxRssKb) ? scan.timeMaxRssKb / 1024 : NaN);
-    const source = fromSummary !== undefined ? 'summary.json resources.peakRssMb' : Number.isFinite(peakMb) ? '/usr/bin/time %M' : '';
-    if (Number.isFinite(peakMb)) {
-      const cross = fromSummary !== undefined && Number.isFinite(scan.timeMaxRssKb) ? ` (/usr/bin/time says ${(scan.timeMaxRssKb / 1024).toFixed(0)} MB)` : '';
-      console.log(`    peak RSS ${peakMb.toFixed(0)} MB from ${source}${cross}   target < ${TARGET_PEAK_RSS_MB} MB: ${verdict(peakMb < TARGET_PEAK_RSS_MB)}`);
-    } else {
-      console.log('    peak RSS unknown (no summary.json resources and no /usr/bin/time)');
-    }
+    reportScan(scan, readSummary(join(dir, 'out')), o.rows);
     console.log(`  ratio scan / cat: ${(scan.seconds / catSeconds).toFixed(1)}`);
   } finally {
     rmSync(dir, { recursive: true, force: true });

@@ -127,6 +127,21 @@ function writeSpecial(spec: AsteroidFileSpec, w: LineWriter, row: OrbitRow, s: S
   }
 }
 
+interface DuplicateSource { written: Written; el: DemoElements; q: DemoQuality }
+
+/** The trailing block of older re-submitted orbits, one per duplicate source. */
+function writeDuplicates(spec: AsteroidFileSpec, w: LineWriter, row: OrbitRow, sources: readonly DuplicateSource[]): void {
+  if (sources.length === 0) return;
+  w.write('');
+  for (const src of sources) {
+    const dup = planDuplicate(spec.random, src.el);
+    fillAsteroidRow(row, dup.el, src.q, src.written.designation, NaN, dup.epochJdTT);
+    const line = w.write(formatOrbitExportLine(row));
+    spec.truth.push(truthOf('orbits.txt', { designation: src.written.designation, line }, 'duplicate', 'clean', dup.el,
+      `same designation as line ${src.written.line} with an older epoch (${dup.epochText}); the newer orbit should be kept`));
+  }
+}
+
 /** Writes the asteroid file; returns the number of lines written. */
 export function writeAsteroidFile(spec: AsteroidFileSpec, populationOnly: boolean): number {
   const sizes = sectionSizes(spec.bodies);
@@ -135,7 +150,7 @@ export function writeAsteroidFile(spec: AsteroidFileSpec, populationOnly: boolea
   const row = emptyOrbitRow();
   const el = emptyElements();
   const q = emptyQuality();
-  const duplicateSources: { written: Written; el: DemoElements; q: DemoQuality }[] = [];
+  const duplicateSources: DuplicateSource[] = [];
   for (const line of asteroidFileHeader(spec.seed, packEpochJd(DEMO_EPOCH_JD_TT), populationOnly)) w.write(line);
   SECTIONS.forEach((section, k) => {
     if (k > 0) w.write('');
@@ -154,16 +169,7 @@ export function writeAsteroidFile(spec: AsteroidFileSpec, populationOnly: boolea
       if (dupHere) duplicateSources.push({ written, el: { ...el }, q: { ...q } });
     }
   });
-  if (duplicateSources.length > 0) {
-    w.write('');
-    for (const src of duplicateSources) {
-      const dup = planDuplicate(spec.random, src.el);
-      fillAsteroidRow(row, dup.el, src.q, src.written.designation, NaN, dup.epochJdTT);
-      const line = w.write(formatOrbitExportLine(row));
-      spec.truth.push(truthOf('orbits.txt', { designation: src.written.designation, line }, 'duplicate', 'clean', dup.el,
-        `same designation as line ${src.written.line} with an older epoch (${dup.epochText}); the newer orbit should be kept`));
-    }
-  }
+  writeDuplicates(spec, w, row, duplicateSources);
   w.close();
   return w.lines;
 }
