@@ -6,9 +6,11 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { KeplerConvergenceError, solveBarker, solveKeplerElliptic, solveKeplerHyperbolic } from '../../src/core/kepler.js';
 import {
-  eccentricFromTrue, hyperbolicFromTrue, meanFromEccentric, meanFromHyperbolic, meanFromTrue,
-  perihelionTimeOffsetDays, trueAnomalyFromPerihelionTime, trueFromEccentric, trueFromHyperbolic, trueFromMean,
+  eccentricFromTrue, hyperbolicFromTrue, meanAnomalyFromPerihelionTime, meanFromEccentric, meanFromHyperbolic,
+  meanFromTrue, meanMotionRadPerDay, perihelionTimeFromMeanAnomaly, perihelionTimeOffsetDays,
+  trueAnomalyFromPerihelionTime, trueFromEccentric, trueFromHyperbolic, trueFromMean,
 } from '../../src/core/anomaly.js';
+import { GAUSS_K } from '../../src/core/constants.js';
 import { stumpffInto } from '../../src/core/stumpff.js';
 import { wrapPi } from '../../src/core/math.js';
 
@@ -149,6 +151,35 @@ describe('anomaly conversions', () => {
         expect(Math.abs(trueFromHyperbolic(hyperbolicFromTrue(nu, e), e) - nu)).toBeLessThan(1e-12);
       }),
       { numRuns: 2000, seed: 46 },
+    );
+  });
+
+  it('perihelion time ↔ mean anomaly: n = k at a = 1 au, the Gaussian year of 365.2568983 d (IAU 1976; common practice)', () => {
+    expect(meanMotionRadPerDay(1)).toBe(GAUSS_K);
+    expect((2 * Math.PI) / meanMotionRadPerDay(1)).toBeCloseTo(365.2568983, 6);
+    const epoch = 2_461_200.5;
+    for (const a of [0.7, 2.77, 5.2, -1.5]) {
+      const tp = perihelionTimeFromMeanAnomaly(1.234, epoch, a);
+      expect(Math.abs(meanAnomalyFromPerihelionTime(tp, epoch, a) - 1.234)).toBeLessThan(1e-9);
+      // Kepler's third law: (epoch − T) n = M.
+      expect(Math.abs((epoch - tp) * Math.sqrt(GAUSS_K ** 2 / Math.abs(a) ** 3) - 1.234)).toBeLessThan(1e-9);
+    }
+  });
+
+  it('time from perihelion ↔ true anomaly round trips for every conic (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.1, max: 10, noNaN: true }),
+        fc.oneof(fc.double({ min: 0, max: 5, noNaN: true }), fc.constantFrom(0, 1, 0.99999, 1.00001)),
+        fc.double({ min: -0.95, max: 0.95, noNaN: true }),
+        (q, e, frac) => {
+          const limit = e < 1 ? Math.PI : Math.acos(-1 / e);
+          const nu = frac * limit;
+          const dt = perihelionTimeOffsetDays(nu, q, e);
+          expect(Math.abs(trueAnomalyFromPerihelionTime(dt, q, e) - nu)).toBeLessThan(1e-9);
+        },
+      ),
+      { numRuns: 2000, seed: 47 },
     );
   });
 
