@@ -81,6 +81,7 @@ afterAll(() => {
   for (const d of [dirA, dirB, dirC]) if (d) rmSync(d, { recursive: true, force: true });
 });
 
+// Determinism is a property of the generator itself (no outside source needed).
 describe('determinism', () => {
   it('gives byte-identical files for the same seed', () => {
     for (const f of FILES.filter((x) => x !== 'README.md')) {
@@ -98,6 +99,8 @@ describe('determinism', () => {
   });
 });
 
+// The project's own readers (src/io) and validity rules (src/clean) are the judges here; the
+// planted bad rows are the only lines they may reject (reasons printed).
 describe('every written line is re-read by the project parsers', () => {
   it('orbit file: rows + rejects = data lines, and the rejects are exactly the planted bad rows', () => {
     const back = readBack(join(dirA, 'orbits.txt'), 'orbit');
@@ -256,6 +259,9 @@ describe('co-orbitals and planet longitudes', () => {
 });
 
 describe('population shape', () => {
+  // Common practice: one-opposition orbits are a minority of an export and have much larger
+  // uncertainty parameters than multi-opposition ones; the bounds below are loose on purpose
+  // (the demo's shares are its own choice, 8 % one-opposition).
   it('has a small share of one-opposition orbits with worse U than numbered ones', () => {
     const back = readBack(join(dirA, 'orbits.txt'), 'orbit').filter((b) => b.row);
     const one = back.filter((b) => b.row!.nOpp === 1);
