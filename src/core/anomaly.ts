@@ -1,6 +1,6 @@
 /**
  * Conversions between mean, eccentric (hyperbolic) and true anomalies, and between time
- * from perihelion and true anomaly, for every conic. Formulas: Danby 1988 §6.3–6.5 and
+ * from perihelion and true anomaly, for every conic. Formulas: Danby 1988 ch. 6 (sections from memory) and
  * Meeus 1998 ch. 30, 34, 35, written in half-angle form (tan(ν/2) relations), which keeps
  * precision near e = 1.
  * Conventions: angles in rad, times in days, q in au, mu in au³/day² (any consistent units
@@ -19,7 +19,7 @@ export function meanFromHyperbolic(hyperbolicAnomaly: number, e: number): number
   return (e - 1) * hyperbolicAnomaly + e * sinhXMinusX(hyperbolicAnomaly);
 }
 
-/** ν from E: tan(ν/2) = √((1+e)/(1−e)) tan(E/2). Danby 1988 eq. 6.3.9. */
+/** ν from E: tan(ν/2) = √((1+e)/(1−e)) tan(E/2). Danby 1988 ch. 6. */
 export function trueFromEccentric(eccentricAnomalyRad: number, e: number): number {
   const turns = Math.round(eccentricAnomalyRad / (2 * Math.PI)) * 2 * Math.PI;
   const h = 0.5 * (eccentricAnomalyRad - turns);
@@ -33,7 +33,7 @@ export function eccentricFromTrue(trueAnomalyRad: number, e: number): number {
   return 2 * Math.atan2(Math.sqrt(1 - e) * Math.sin(h), Math.sqrt(1 + e) * Math.cos(h)) + turns;
 }
 
-/** ν from H: tan(ν/2) = √((e+1)/(e−1)) tanh(H/2). Danby 1988 eq. 6.5.5. */
+/** ν from H: tan(ν/2) = √((e+1)/(e−1)) tanh(H/2). Danby 1988 ch. 6. */
 export function trueFromHyperbolic(hyperbolicAnomaly: number, e: number): number {
   return 2 * Math.atan(Math.sqrt((e + 1) / (e - 1)) * Math.tanh(0.5 * hyperbolicAnomaly));
 }

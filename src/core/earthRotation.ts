@@ -9,7 +9,7 @@ const RAD_PER_ARCSEC = RAD_PER_DEG / 3600;
 
 /**
  * Earth rotation angle θ (rad, in [0, 2π)) at UT1.
- * IAU 2000 Resolution B1.8; IERS Conventions 2010 eq. 5.15:
+ * IAU 2000 Resolution B1.8; IERS Conventions 2010 ch. 5 (eq. 5.15, from memory):
  *   θ = 2π (0.7790572732640 + 1.00273781191135448 Du),  Du = JD(UT1) − 2451545.0.
  * Written as frac(jd1) + frac(jd2) + 0.00273781191135448 Du, as SOFA era00 does, so the
  * whole turns drop out before they cost precision.
@@ -22,7 +22,7 @@ export function earthRotationAngleRad(jd1Ut1: number, jd2Ut1 = 0): number {
 
 /**
  * Greenwich mean sidereal time (rad, in [0, 2π)), IAU 2006: ERA plus the polynomial of
- * Capitaine, Wallace & Chapront 2003 (A&A 412, 567, eq. 42); IERS Conventions 2010 eq. 5.32.
+ * Capitaine, Wallace & Chapront 2003 (A&A 412, 567); IERS Conventions 2010, ch. 5.
  *   GMST = θ(UT1) + 0.014506″ + 4612.156534″ t + 1.3915817″ t² − 0.00000044″ t³
  *          − 0.000029956″ t⁴ − 0.0000000368″ t⁵,   t = Julian centuries of TT from J2000.
  */

@@ -22,7 +22,7 @@ import { equatorialToEclipticInPlace } from './frames.js';
 /** Earth equatorial radius, km. IERS Conventions 2010, Table 1.1 (a_E = 6 378 136.6 m). */
 export const EARTH_EQUATORIAL_RADIUS_KM = 6378.1366;
 const EARTH_RADIUS_AU = EARTH_EQUATORIAL_RADIUS_KM / KM_PER_AU;
-/** Earth rotation rate in rad/day, from the ERA rate (IERS Conventions 2010 eq. 5.15). */
+/** Earth rotation rate in rad/day, from the ERA rate (IERS Conventions 2010, ch. 5). */
 export const EARTH_ROTATION_RAD_PER_DAY = TWO_PI * 1.00273781191135448;
 /** The same in rad/s. */
 export const EARTH_ROTATION_RAD_PER_S = EARTH_ROTATION_RAD_PER_DAY / SECONDS_PER_DAY;

@@ -1,7 +1,7 @@
 /**
  * IAU 2006 precession matrix from the J2000 mean equator and equinox to the mean equator
  * and equinox of date, from the equatorial precession angles ζ_A, z_A, θ_A of Capitaine,
- * Wallace & Chapront 2003 (A&A 412, 567, "P03"); IERS Conventions 2010 eq. 5.39–5.40:
+ * Wallace & Chapront 2003 (A&A 412, 567, "P03"); IERS Conventions 2010, ch. 5:
  *   P = R3(−z_A) · R2(θ_A) · R3(−ζ_A)
  *   ζ_A =  2.650545″ + 2306.083227″ t + 0.2988499″ t² + 0.01801828″ t³ − 0.000005971″ t⁴ − 0.0000003173″ t⁵
  *   z_A = −2.650545″ + 2306.077181″ t + 1.0927348″ t² + 0.01826837″ t³ − 0.000028596″ t⁴ − 0.0000002904″ t⁵
@@ -29,7 +29,7 @@ export function precessionMatrixP03(jdTT: number, out: Float64Array, offset = 0)
   const cz = Math.cos(zeta), sz = Math.sin(zeta);
   const cZ = Math.cos(z), sZ = Math.sin(z);
   const ct = Math.cos(theta), st = Math.sin(theta);
-  // Explicit product R3(−z)·R2(θ)·R3(−ζ) (e.g. Seidelmann 1992, Explanatory Supplement eq. 3.21-8).
+  // The explicit product R3(−z)·R2(θ)·R3(−ζ) (common practice).
   out[offset + 0] = cZ * ct * cz - sZ * sz;
   out[offset + 1] = -cZ * ct * sz - sZ * cz;
   out[offset + 2] = -cZ * st;

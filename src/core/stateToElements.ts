@@ -12,7 +12,7 @@ const EL = new Float64Array(6); // scratch: elements
 
 /**
  * Perihelion elements [q, e, i, Ω, ω, T] of the state at `epochJd`, written to
- * out[offset..offset+5]. Danby 1988 §6.8 (angular momentum, Laplace–Runge–Lenz vector);
+ * out[offset..offset+5]. Danby 1988 ch. 6 (angular momentum, Laplace–Runge–Lenz vector);
  * q = h² / (μ (1 + e)) keeps precision for every e.
  */
 export function stateToPerihelionElements(
@@ -33,7 +33,7 @@ export function stateToPerihelionElements(
 /**
  * Mean anomaly of a state on a non-parabolic orbit. From ν in general; far out on a
  * hyperbola (|sinh H| > 1), where ν nears the asymptote and tan(ν/2) loses the digits,
- * from r·v = √(μ|a|) e sinh H instead (Danby 1988 §6.5, the analogue of r·v = √(μa) e sin E).
+ * from r·v = √(μ|a|) e sinh H instead (Danby 1988 ch. 6, the analogue of r·v = √(μa) e sin E).
  */
 function meanAnomalyOfState(state: Float64Array, o: number, nu: number, aAbs: number, e: number, mu: number): number {
   if (e > 1) {

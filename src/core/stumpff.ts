@@ -1,6 +1,6 @@
 /**
  * Stumpff functions c0..c3 of the universal-variable formulation of two-body motion.
- * Danby, Fundamentals of Celestial Mechanics, 2nd ed. (1988), §6.9, eq. 6.9.9–6.9.11:
+ * Danby, Fundamentals of Celestial Mechanics, 2nd ed. (1988), §6.9 (section number from memory):
  *   c_k(x) = Σ_{j≥0} (−x)^j / (2j + k)!
  *   x > 0:  c0 = cos √x,  c1 = sin √x / √x;   x < 0: cosh and sinh of √−x;
  *   c2 = (1 − c0)/x,  c3 = (1 − c1)/x   (recurrence x c_{k+2} = 1/k! − c_k).

@@ -7,8 +7,8 @@
  * perihelion, time of perihelion passage. Helpers for the semimajor-axis form (a, e, i, Ω,
  * ω, M) cover e ≠ 1, with a < 0 for hyperbolic orbits (a = q / (1 − e)).
  *
- * Orientation: r = R3(Ω) R1(i) R3(ω) r_orbital, the P and Q vectors of Danby 1988 §6.4
- * (eq. 6.4.11) / Murray & Dermott 1999 eq. 2.122.
+ * Orientation: r = R3(Ω) R1(i) R3(ω) r_orbital, the P and Q vectors (Danby 1988 ch. 6;
+ * Murray & Dermott 1999 §2.8 — sections from memory).
  *
  * Conventions where an angle is undefined (documented, tested):
  *   - i = 0 or 180° (angular momentum along ±z exactly): Ω = 0, and ω is measured from the
@@ -54,7 +54,7 @@ function checkAngles(name: string, iRad: number, nodeRad: number, periRad: numbe
   }
 }
 
-/** P (toward perihelion) and Q (90° ahead in the orbit plane) into PQ. Danby 1988 eq. 6.4.11. */
+/** P (toward perihelion) and Q (90° ahead in the orbit plane) into PQ. Danby 1988 ch. 6. */
 function orientation(iRad: number, nodeRad: number, periRad: number): void {
   const cO = Math.cos(nodeRad), sO = Math.sin(nodeRad);
   const cw = Math.cos(periRad), sw = Math.sin(periRad);
@@ -98,7 +98,7 @@ export function perihelionElementsToState(
 
 /**
  * State from semimajor-axis elements by Kepler's equation (e < 1, a > 0) or its hyperbolic
- * form (e > 1, a < 0). Orbit-plane formulas: Danby 1988 eq. 6.3.15–6.3.17 and 6.5.7, with
+ * form (e > 1, a < 0). Orbit-plane formulas: Danby 1988 ch. 6, with
  * cos E − e written (1 − e) − 2 sin²(E/2) (and the hyperbolic analogue) so that positions
  * near perihelion keep their precision when e is close to 1.
  */

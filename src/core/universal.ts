@@ -1,7 +1,7 @@
 /**
  * Two-body propagation in universal variables, valid for every conic (elliptic, parabolic,
  * hyperbolic) and smooth through e = 1. Danby, Fundamentals of Celestial Mechanics, 2nd ed.
- * (1988), §6.9 (eq. 6.9.21–6.9.32), in his symbols:
+ * (1988), §6.9 (section number from memory), in his symbols:
  *   β = 2μ/r0 − v0²,  η0 = r0·v0,  ζ0 = μ − β r0,  c_k = c_k(β s²)  (stumpff.ts)
  *   Kepler's equation:  f(s) = r0 s c1 + η0 s² c2 + μ s³ c3 − (t − t0) = 0
  *   f′ = r = r0 c0 + η0 s c1 + μ s² c2,   f″ = η0 c0 + ζ0 s c1,   f‴ = ζ0 c0 − β η0 s c1
@@ -150,7 +150,7 @@ function solveUniversal(
     stepOld = step;
     step = next - s;
     s = next;
-    if (Math.abs(step) <= 4 * EPS * Math.abs(s) + 1e-300 || hi - lo <= 4 * EPS * Math.abs(s) + 1e-300) return s;
+    if (Math.abs(step) <= 4 * EPS * Math.abs(s) + 1e-322 || hi - lo <= 4 * EPS * Math.abs(s) + 1e-322) return s;
   }
   // e² = 1 − β h²/μ² (energy and angular momentum; Danby 1988 §6.9).
   const e = Math.sqrt(Math.max(0, 1 - (beta * h2) / (mu * mu)));
