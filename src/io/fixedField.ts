@@ -19,7 +19,11 @@ export function isBlankField(line: string, start: number, end: number): boolean 
 
 /** Columns [start, end) of `line` with surrounding spaces removed ('' past its end). */
 export function fieldText(line: string, start: number, end: number): string {
-  return line.slice(start, end).trim();
+  let a = start;
+  let b = end < line.length ? end : line.length;
+  while (a < b && line.charCodeAt(a) <= 32) a++;
+  while (b > a && line.charCodeAt(b - 1) <= 32) b--;
+  return a < b ? line.slice(a, b) : ''; // one slice, no intermediate string
 }
 
 /**
