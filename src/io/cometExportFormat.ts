@@ -13,6 +13,7 @@ const two = (v: number): string => String(v).padStart(2, '0');
 /** Columns 1–12: number + type (numbered periodic comets) or blanks + type + provisional. */
 function designationColumns(packed: string): string {
   if (packed.length === 5) return packed + ' '.repeat(7); // '0001P'
+  if (packed.length === 12) return packed; // '0073P      b'
   if (packed.length === 8) return '    ' + packed; // 'CJ95O010'
   throw new RangeError(`formatCometExportLine: '${packed}' is not a packed comet designation`);
 }
@@ -34,7 +35,7 @@ function epochColumns(epochJdTT: number): string {
 /** Readable designation and name: `1P/Halley` for numbered comets, `C/1995 O1 (Hale-Bopp)` else. */
 function readableText(row: OrbitRow, packed: string): string {
   if (row.name === '') return row.designation;
-  return packed.length === 5 ? `${row.designation}/${row.name}` : `${row.designation} (${row.name})`;
+  return packed.length !== 8 ? `${row.designation}/${row.name}` : `${row.designation} (${row.name})`;
 }
 
 /** One line of the comet orbit export format for `row` (kind 'comet'; q, e, tp required). */

@@ -47,7 +47,10 @@ function readDesignation(line: string, row: OrbitRow, file: string, lineNo: numb
   }
   const num = fieldText(line, C.number[0], C.number[1]);
   const prov = fieldText(line, C.provisional[0], C.provisional[1]);
-  const packed = num !== '' ? num.padStart(4, '0') + type : type + prov;
+  // a numbered comet: its number, or number + fragment letters (provisional columns ignored
+  // otherwise); an unnumbered one: type + provisional
+  const fragment = num !== '' && /^[a-z]{1,2}$/.test(prov);
+  const packed = num === '' ? type + prov : num.padStart(4, '0') + type + (fragment ? prov.padStart(7) : '');
   const unpacked = unpackComet(packed);
   if (unpacked === '') {
     const f: Field = num !== '' ? C.number : C.provisional;
@@ -56,7 +59,7 @@ function readDesignation(line: string, row: OrbitRow, file: string, lineNo: numb
   row.packedDesignation = packed;
   row.designation = unpacked;
   const readable = fieldText(line, C.readable[0], C.readable[1]);
-  const named = num !== '' ? /^\d+[PDI]\/(.+)$/.exec(readable) : /^\S+ \S+ \((.+)\)$/.exec(readable);
+  const named = num !== '' ? /^\d+[PDI](?:-[A-Z]{1,2})?\/(.+)$/.exec(readable) : /^\S+ \S+ \((.+)\)$/.exec(readable);
   row.name = named ? named[1] : '';
 }
 

@@ -9,8 +9,8 @@
  *   comets that kept a minor-planet-style designation) the uppercase second letter:
  *   `CJ95O010` = C/1995 O1, `PK04V05a` = P/2004 V5-A, `PK04FE0Y` = P/2004 FY140,
  *   `CJ42E00A` = C/1942 EA.
- * Not handled: fragments of numbered comets (73P-B); the published packed form for them
- * is not reproduced here and such text is reported as an unknown form.
+ * - fragments of numbered comets: the 12-column field with the lowercase fragment letters
+ *   right-aligned in its last columns, `0073P      b` = 73P-B (placement from memory).
  * Functions return '' when the text is not in these forms.
  */
 import {
@@ -22,6 +22,10 @@ const ORBIT_TYPES = 'PCDXIA';
 
 /** Readable form of a packed comet designation (5 or 8 characters), or ''. */
 export function unpackComet(packed: string): string {
+  if (packed.length === 12) {
+    const m = /^(\d{4})([PDI]) {5,6}([a-z]{1,2})$/.exec(packed);
+    return m && Number(m[1]) > 0 ? `${Number(m[1])}${m[2]}-${m[3].toUpperCase()}` : '';
+  }
   if (packed.length === 5) {
     const m = /^(\d{4})([PDI])$/.exec(packed);
     return m && Number(m[1]) > 0 ? `${Number(m[1])}${m[2]}` : '';
@@ -45,11 +49,15 @@ export function unpackComet(packed: string): string {
 
 /**
  * Packed form of a readable comet designation, or ''. A trailing name is dropped:
- * `1P/Halley` → `0001P`, `C/1995 O1 (Hale-Bopp)` → `CJ95O010`.
+ * `1P/Halley` → `0001P`, `C/1995 O1 (Hale-Bopp)` → `CJ95O010`, `73P-B` → `0073P      b`.
  */
 export function packComet(readable: string): string {
-  const numbered = /^(\d{1,4})([PDI])(?:\/.*)?$/.exec(readable);
-  if (numbered) return Number(numbered[1]) > 0 ? numbered[1].padStart(4, '0') + numbered[2] : '';
+  const numbered = /^(\d{1,4})([PDI])(?:-([A-Z]{1,2}))?(?:\/.*)?$/.exec(readable);
+  if (numbered) {
+    if (Number(numbered[1]) === 0) return '';
+    const head = numbered[1].padStart(4, '0') + numbered[2];
+    return numbered[3] === undefined ? head : head + numbered[3].toLowerCase().padStart(7);
+  }
   const desig = readable.replace(/ \(.*\)$/, '');
   const comet = /^([PCDXIA])\/(\d{4}) ([A-HJ-Y])([1-9]\d*)(?:-([A-Z]))?$/.exec(desig);
   if (comet) {

@@ -13,7 +13,7 @@ import { packProvisional, unpackProvisional } from './packedProvisional.js';
 /**
  * Readable designation of a packed one: `00001` → `(1)`, `A0000` → `(100000)`,
  * `~0000` → `(620000)`, `K19E05U` → `2019 EU5`, `_EW002J` → `2014 WT625`,
- * `PLS2040` → `2040 P-L`, `CJ95O010` → `C/1995 O1`, `0001P` → `1P`.
+ * `PLS2040` → `2040 P-L`, `CJ95O010` → `C/1995 O1`, `0001P` → `1P`, `0073P      b` → `73P-B`.
  */
 export function unpackDesignation(packed: string): string {
   if (packed.length === 5) {
@@ -40,7 +40,7 @@ export function packDesignation(readable: string): string {
     }
     return packNumber(n);
   }
-  const out = text.includes('/') || /^\d{1,4}[PDI]$/.test(text) ? packComet(text) : packProvisional(text);
+  const out = text.includes('/') || /^\d{1,4}[PDI](-[A-Z]{1,2})?$/.test(text) ? packComet(text) : packProvisional(text);
   if (out === '') throw new PackedFormError('designation in no packable form', readable);
   return out;
 }

@@ -125,6 +125,7 @@ describe('comet designations', () => {
     ['PJ30J010', 'P/1930 J1'], // from memory
     ['DJ93F02b', 'D/1993 F2-B'], // fragment, from memory
     ['0001P', '1P'], ['0002P', '2P'], ['0001I', '1I'], // periodic numbers, from memory
+    ['0073P      b', '73P-B'], ['0073P     aa', '73P-AA'], // numbered fragments, placement from memory
     ['PK04V05a', 'P/2004 V5-A'], ['PK04FE0Y', 'P/2004 FY140'], ['CJ42E00A', 'C/1942 EA'], // real sample
   ];
   it.each(cases)('%s = %s', (packed, readable) => {

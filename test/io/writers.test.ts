@@ -50,7 +50,7 @@ describe('orbit export writer ↔ reader (property)', () => {
 });
 
 describe('comet export writer ↔ reader (property)', () => {
-  const designations = fc.constantFrom('1P', '2P', '12P', '1I', 'C/1995 O1', 'P/2004 V5-A', 'C/2031 A12', 'P/2030 FY140', 'C/1942 EA');
+  const designations = fc.constantFrom('1P', '2P', '12P', '1I', '73P-B', '73P-AA', 'C/1995 O1', 'P/2004 V5-A', 'C/2031 A12', 'P/2030 FY140', 'C/1942 EA');
   it('round-trips invented rows to the column resolution', () => {
     const worst = { angleArcsec: 0, tpSeconds: 0 };
     fc.assert(fc.property(
