@@ -17,7 +17,7 @@
  */
 import { parse, type Options, type Parser } from 'csv-parse';
 import { checkColumnMapping, mapColumns, missingRequired, type ColumnIndex, type ColumnMapping } from './columnMap.js';
-import { parseCsvRecord } from './csvRecord.js';
+import { parseCsvRecord, type RecordContext } from './csvRecord.js';
 import { UnreadableInputError } from './errors.js';
 import { InputError, type OrbitRow } from './types.js';
 
@@ -56,6 +56,8 @@ export class CsvTableReader {
   private pendingNos: number[] = []; // non-blank lines not yet given to a record
   private pendingTexts: string[] = [];
   private pendingHead = 0;
+  /** Reused for every record (no per-record objects beyond csv-parse's own arrays). */
+  private readonly ctx: RecordContext = { file: '', line: 0, headers: [], raw: '' };
 
   constructor(
     private readonly file: string,
@@ -133,18 +135,19 @@ export class CsvTableReader {
   }
 
   /**
-   * Takes the pending lines of one record: its first line and raw text, or null when it
-   * has none (a line of blanks, already counted as skipped, that csv-parse turned into an
-   * empty record).
+   * Takes the pending lines of one record into ctx (its first line and raw text); false
+   * when it has none (a line of blanks, already counted as skipped, that csv-parse turned
+   * into an empty record).
    */
-  private take(endLine: number): { line: number; raw: string } | null {
+  private take(endLine: number): boolean {
     const first = this.pendingHead;
     while (this.pendingHead < this.pendingNos.length && this.pendingNos[this.pendingHead] <= endLine) this.pendingHead++;
-    if (first === this.pendingHead) return null;
-    const line = this.pendingNos[first];
-    const raw = this.pendingTexts.slice(first, this.pendingHead).join('\n');
+    if (first === this.pendingHead) return false;
+    this.ctx.line = this.pendingNos[first];
+    this.ctx.raw = this.pendingHead - first === 1 ? this.pendingTexts[first]
+      : this.pendingTexts.slice(first, this.pendingHead).join('\n');
     this.compact();
-    return { line, raw };
+    return true;
   }
 
   private compact(): void {
@@ -157,9 +160,8 @@ export class CsvTableReader {
 
   private onRecord(record: string[], endLine: number): void {
     if (this.fatal) return;
-    const taken = this.take(endLine);
-    if (taken === null) return;
-    const { line, raw } = taken;
+    if (!this.take(endLine)) return;
+    const { line, raw } = this.ctx;
     if (this.headers === null) {
       this.counts.skipped++;
       this.setHeader(record);
@@ -169,7 +171,7 @@ export class CsvTableReader {
       if (record.length !== this.headers.length) {
         throw new InputError(this.file, line, 0, `${record.length} fields where the header has ${this.headers.length}`, raw);
       }
-      parseCsvRecord(record, this.index!, { file: this.file, line, headers: this.headers, raw }, this.row);
+      parseCsvRecord(record, this.index!, this.ctx, this.row);
     } catch (err) {
       if (!(err instanceof InputError)) throw err;
       this.counts.rejected++;
@@ -182,6 +184,8 @@ export class CsvTableReader {
 
   private setHeader(record: string[]): void {
     this.headers = record.map((h) => h.trim());
+    this.ctx.file = this.file;
+    this.ctx.headers = this.headers;
     const { index, missingMapped } = mapColumns(this.headers, this.mapping);
     const found = `headers found: ${this.headers.join(', ')}`;
     if (missingMapped.length > 0) {
