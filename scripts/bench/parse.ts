@@ -6,7 +6,7 @@
  *   2. node:readline over the same file, for comparison,
  *   3. the fixed-width parser (parseOrbitExportLine) on lines already in memory,
  *   4. parseFloat on substrings vs the hand-written fixed-field parser, for the 11 numeric fields,
- *   5. the whole reader (readOrbitFile), when built.
+ *   5. the whole reader (readOrbitFile): export lines plain and gzip, and the same rows as CSV.
  * Each figure is the best of 5 runs (shared machine). Usage: npx tsx scripts/bench/parse.ts
  * [lines]. Figures only; nothing is asserted.
  */
@@ -51,6 +51,18 @@ function makeLines(n: number): string[] {
   return lines;
 }
 
+/** The same rows as a CSV table with a header (read back through the export parser). */
+function toCsv(lines: string[]): string {
+  const row = io.emptyOrbitRow();
+  const out = ['designation,epoch,e,a,i,om,w,ma,H,G,n_obs,condition_code,rms'];
+  for (const [k, line] of lines.entries()) {
+    io.parseOrbitExportLine(line, row, 'bench', k + 1);
+    out.push([row.designation, row.epochJdTT, row.e, row.aAu, row.iDeg, row.nodeDeg, row.periDeg, row.meanAnomalyDeg,
+      row.H, row.G, row.nObs, row.uncertainty, row.rmsArcsec].join(','));
+  }
+  return out.join('\n') + '\n';
+}
+
 function rate(label: string, lines: number, ms: number, base?: number): number {
   const perS = (lines / ms) * 1000;
   console.log(`${label.padEnd(46)} ${(perS / 1e6).toFixed(2).padStart(6)} M lines/s${base ? `  (×${(perS / base).toFixed(2)})` : ''}`);
@@ -76,7 +88,9 @@ async function main(): Promise<void> {
     const text = lines.join('\n') + '\n';
     const plain = join(dir, 'orbits.txt');
     const gz = join(dir, 'orbits.txt.gz');
+    const csv = join(dir, 'orbits.csv');
     writeFileSync(plain, text);
+    writeFileSync(csv, toCsv(lines));
     writeFileSync(gz, gzipSync(text));
     console.log(`${N} lines, ${(text.length / 1e6).toFixed(1)} MB, mean ${(text.length / N - 1).toFixed(0)} characters per line`);
 
@@ -105,12 +119,9 @@ async function main(): Promise<void> {
       for (let k = 0; k < N; k++) for (const f of fields) sink += io.parseFixedNumber(lines[k], f[0], f[1]);
     }), pf);
 
-    const readOrbitFile = (io as Record<string, unknown>).readOrbitFile as
-      | ((p: string, o: object, r: () => void, j: () => void) => Promise<unknown>) | undefined;
-    if (readOrbitFile) {
-      rate('readOrbitFile (read + split + parse)', N, await timeIt(() => readOrbitFile(plain, {}, () => {}, () => {})));
-      rate('readOrbitFile, gzip', N, await timeIt(() => readOrbitFile(gz, {}, () => {}, () => {})));
-    }
+    rate('readOrbitFile (read + split + parse)', N, await timeIt(() => io.readOrbitFile(plain, {}, () => {}, () => {})));
+    rate('readOrbitFile, gzip', N, await timeIt(() => io.readOrbitFile(gz, {}, () => {}, () => {})));
+    rate('readOrbitFile, CSV (csv-parse)', N, await timeIt(() => io.readOrbitFile(csv, {}, () => {}, () => {})));
     if (count < 0 || sink === 0.5) console.log('');
   } finally {
     rmSync(dir, { recursive: true, force: true });

@@ -110,9 +110,9 @@ export class CsvTableReader {
   private makeParser(delimiter: string): Parser {
     const options: Options = {
       delimiter, relax_column_count: true, skip_empty_lines: true, skip_records_with_error: true,
-      raw: true, trim: true,
+      trim: true,
       on_record: (rec, ctx) => {
-        this.onRecord((rec as unknown as { record: string[] }).record, ctx.lines); // raw: true wraps it
+        this.onRecord(rec as string[], ctx.lines);
         return null; // handled here, nothing is buffered in the stream
       },
     };
