@@ -1,0 +1,140 @@
+// `wayward propagate`, called through runPropagate / propagateOne as the command would.
+// Outside checks: astronomy-engine 2.1.19 (an independent library: its GravitySimulator
+// integrates small bodies under the Sun and planets from its own planetary model, and its
+// HelioState gives the Earth); Kepler's third law (a body returns after one period,
+// common practice). Elements and catalogue lines: (1) Ceres as written in the published
+// one-line orbit export sample (provenance in test/fixtures/orbit-export/).
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import * as Astronomy from 'astronomy-engine';
+import { InvalidArgumentError } from 'commander';
+import {
+  parseDateToJdTDB, parseElements, propagateOne, PropagateInputError, PropagateUsageError, runPropagate,
+  type PropagateOptions,
+} from '../../src/cli/propagate.js';
+import { GM_SUN_AU3_PER_DAY2, J2000_JD, KM_PER_AU } from '../../src/core/constants.js';
+
+const CERES_LINE = '00001    3.34  0.15 K2669 274.41935   73.29420   80.24863   10.58803  0.0796923  0.21430445   2.7655526  0 MPO980521  7297 126 1801-2026 0.83 M-v 30k Veres      4000      (1) Ceres              20260103';
+const CERES = 'a=2.7655526,e=0.0796923,i=10.58803,node=80.24863,peri=73.29420,M=274.41935,epoch=2461200.5';
+
+function opts(over: Partial<PropagateOptions>): PropagateOptions {
+  return { toJdTDB: 2462502.5, nbody: false, relativity: true, distances: false, format: 'text', ...over };
+}
+
+describe('propagate: two-body', () => {
+  it('one Keplerian period later the body is back where it started (Kepler III)', async () => {
+    const el = parseElements(CERES);
+    const period = 2 * Math.PI * Math.sqrt(2.7655526 ** 3 / GM_SUN_AU3_PER_DAY2);
+    const start = await propagateOne(opts({ elements: el, toJdTDB: el.epochJdTDB }));
+    const later = await propagateOne(opts({ elements: el, toJdTDB: el.epochJdTDB + period }));
+    const dKm = Math.hypot(...[0, 1, 2].map((k) => later.state[k] - start.state[k])) * KM_PER_AU;
+    console.log(`two-body, one period of Ceres: back within ${(dKm * 1000).toFixed(3)} m`);
+    expect(dKm).toBeLessThan(1e-3);
+    // The elements printed back at the epoch are the ones given.
+    expect(start.semimajor!.aAu).toBeCloseTo(2.7655526, 10);
+    expect(start.perihelion.e).toBeCloseTo(0.0796923, 10);
+    expect(start.perihelion.iDeg).toBeCloseTo(10.58803, 8);
+    expect(start.semimajor!.meanAnomalyDeg).toBeCloseTo(274.41935, 8);
+  });
+
+  it('the text output names the model, both dates and the state', async () => {
+    const text = await runPropagate(opts({ elements: parseElements(CERES), distances: true }));
+    expect(text).toMatch(/^body {5}elements\nmodel {4}two-body/);
+    expect(text).toContain('from     JD 2461200.500000 TDB (2026-06-09T00:00:00 TDB)');
+    expect(text).toMatch(/to {7}JD 2462502\.50\d{4} TDB \(2030-01-01T00:00:00 TDB\)/);
+    expect(text).toMatch(/\n {2}x {2}[ -]\d\.\d{12} au/);
+    expect(text).toMatch(/geocentric {3}\d\.\d{10} au\n$/);
+  });
+});
+
+describe('propagate --nbody against astronomy-engine\'s gravity simulator', () => {
+  it('Ceres over 4 years: position difference in km, and the planets matter', async () => {
+    const el = parseElements(CERES);
+    const target = el.epochJdTDB + 4 * 365.25;
+    const nb = await propagateOne(opts({ elements: el, toJdTDB: target, nbody: true, relativity: false, distances: true }));
+    const kep = await propagateOne(opts({ elements: el, toJdTDB: target }));
+    const start = await propagateOne(opts({ elements: el, toJdTDB: el.epochJdTDB }));
+    // astronomy-engine: equatorial J2000 states, time as TT days since J2000 (TDB − TT < 2 ms).
+    const ecl2eqj = Astronomy.Rotation_ECL_EQJ();
+    const t0 = Astronomy.AstroTime.FromTerrestrialTime(el.epochJdTDB - J2000_JD);
+    const s = start.state;
+    const eq0 = Astronomy.RotateState(ecl2eqj, new Astronomy.StateVector(s[0], s[1], s[2], s[3], s[4], s[5], t0));
+    const sim = new Astronomy.GravitySimulator(Astronomy.Body.Sun, t0, [eq0]);
+    let ref = eq0;
+    const steps = 4 * 365 * 4; // quarter-day steps, the library asks for small increments
+    for (let k = 1; k <= steps; k++) {
+      ref = sim.Update(Astronomy.AstroTime.FromTerrestrialTime(el.epochJdTDB - J2000_JD + ((target - el.epochJdTDB) * k) / steps))[0];
+    }
+    const back = Astronomy.RotateState(Astronomy.Rotation_EQJ_ECL(), ref);
+    const dKm = Math.hypot(nb.state[0] - back.x, nb.state[1] - back.y, nb.state[2] - back.z) * KM_PER_AU;
+    const perturbationKm = Math.hypot(...[0, 1, 2].map((k) => nb.state[k] - kep.state[k])) * KM_PER_AU;
+    console.log(`Ceres 4 yr, N-body vs astronomy-engine: ${dKm.toFixed(0)} km; planetary perturbation itself `
+      + `${perturbationKm.toFixed(0)} km`);
+    // Two different planetary models and integrators (the library's planets are truncated
+    // series good to ~1e-6 au); measured ~750 km against a perturbation of ~1.9e6 km.
+    expect(perturbationKm).toBeGreaterThan(1e5);
+    expect(dKm).toBeLessThan(0.005 * perturbationKm);
+    // Geocentric distance against the library's Earth.
+    const earth = Astronomy.RotateState(Astronomy.Rotation_EQJ_ECL(),
+      Astronomy.HelioState(Astronomy.Body.Earth, Astronomy.AstroTime.FromTerrestrialTime(target - J2000_JD)));
+    const geoRef = Math.hypot(nb.state[0] - earth.x, nb.state[1] - earth.y, nb.state[2] - earth.z);
+    const geoErrKm = Math.abs(nb.distances!.geocentricAu - geoRef) * KM_PER_AU;
+    console.log(`geocentric distance vs astronomy-engine's Earth: ${geoErrKm.toFixed(1)} km`);
+    expect(geoErrKm).toBeLessThan(5000); // the library's Earth: truncated series, ~1e-5 au at worst
+  });
+});
+
+describe('propagate: designation from a catalogue file', () => {
+  const dir = mkdtempSync(join(tmpdir(), 'wayward-propagate-'));
+  const file = join(dir, 'orbits.txt');
+  writeFileSync(file, CERES_LINE + '\n');
+
+  it('finds (1) Ceres by readable form, by number and by name, with the file\'s elements', async () => {
+    for (const name of ['(1) Ceres', '1', 'ceres']) {
+      const r = await propagateOne(opts({ designation: name, catalogue: [file], toJdTDB: parseDateToJdTDB('2026-06-09') }));
+      expect(r.label).toBe('(1) Ceres');
+      expect(r.semimajor!.aAu).toBeCloseTo(2.7655526, 9);
+      expect(r.perihelion.nodeDeg).toBeCloseTo(80.24863, 8);
+    }
+  });
+
+  it('an unknown designation or an unreadable file is an input error (exit 1)', async () => {
+    await expect(propagateOne(opts({ designation: '(2) Pallas', catalogue: [file] })))
+      .rejects.toThrow(PropagateInputError);
+    await expect(propagateOne(opts({ designation: '(1) Ceres', catalogue: [join(dir, 'missing.txt')] })))
+      .rejects.toThrow(/missing\.txt/);
+  });
+});
+
+describe('propagate: bad input is refused at the boundary', () => {
+  it('non-finite, missing or contradictory elements → InvalidArgumentError with the reason', () => {
+    expect(() => parseElements('a=2.7,e=NaN,i=1,node=1,peri=1,M=1,epoch=2461200.5')).toThrow(/e='NaN' is not a finite number/);
+    expect(() => parseElements('a=Infinity,e=0.1,i=1,node=1,peri=1,M=1,epoch=2461200.5')).toThrow(InvalidArgumentError);
+    expect(() => parseElements('a=2.7,e=0.1,i=1,node=1,peri=1')).toThrow(/elements lack M, epoch/);
+    expect(() => parseElements('a=2.7,q=2,e=0.1,i=1,node=1,peri=1,M=1,epoch=1')).toThrow(/either q/);
+    expect(() => parseElements('a=-2.7,e=0.1,i=1,node=1,peri=1,M=1,epoch=2461200.5')).toThrow(/must be > 0/);
+    expect(() => parseElements('q=1,e=-0.1,i=1,node=1,peri=1,tp=2461200.5')).toThrow(/e=-0.1 must be ≥ 0/);
+    expect(() => parseElements('q=1,e=0.1,i=200,node=1,peri=1,tp=2461200.5')).toThrow(/0–180/);
+    expect(() => parseElements('q=1,e=0.1,i=1,node=1,peri=1,tp=yesterday')).toThrow(/neither an ISO date/);
+    expect(() => parseElements('x=1')).toThrow(/key one of/);
+  });
+
+  it('dates: ISO in TT by default, UTC when it says Z, bare numbers are JD (TT)', () => {
+    const tt = parseDateToJdTDB('2030-01-01T00:00');
+    const utc = parseDateToJdTDB('2030-01-01T00:00Z');
+    // TT − UTC = 69.184 s since 2017 (IERS Bulletin C leap-second list; no leap second since).
+    expect((tt - utc) * 86400).toBeCloseTo(-69.184, 2);
+    expect(parseDateToJdTDB('2462502.5')).toBeCloseTo(tt, 7);
+    expect(() => parseDateToJdTDB('2030-13-01')).toThrow(InvalidArgumentError);
+  });
+
+  it('a date outside the planetary ephemeris span is a usage error, never NaN', async () => {
+    const el = parseElements(CERES);
+    await expect(propagateOne(opts({ elements: el, toJdTDB: parseDateToJdTDB('3500-01-01'), nbody: true })))
+      .rejects.toThrow(/outside the planetary ephemeris span JD 2086295–2816795/);
+    await expect(propagateOne(opts({ elements: el, toJdTDB: 2462502.5, designation: 'x' })))
+      .rejects.toThrow(PropagateUsageError);
+  });
+});
