@@ -55,6 +55,17 @@ function pack(): ElpPacked {
   return { rows, blockStart, w1: Float64Array.from(elpData.W1) };
 }
 
+/**
+ * The packed ELP/MPP02 series, for bulk evaluators: `rows` holds A, φ0..φ4 per term (A in
+ * arcsec for L and B, km for R; φ in rad, T in centuries); the terms of variable v (0 L,
+ * 1 B, 2 R) and power α occupy rows [blockStart[v*4+α], blockStart[v*4+α+1]). Each term is
+ * A sin(φ0 + φ1 T + … + φ4 T⁴). Read-only.
+ */
+export function elpPackedSeries(): { readonly rows: Float64Array; readonly blockStart: Int32Array; readonly powers: number } {
+  if (packed === undefined) packed = pack();
+  return { rows: packed.rows, blockStart: packed.blockStart, powers: BLOCKS };
+}
+
 /** Value and d/dT of a polynomial with coefficients c (ascending powers) at t. */
 function polyWithRate(c: ArrayLike<number>, t: number, out: Float64Array, at: number): void {
   let p = 0;
@@ -75,7 +86,7 @@ const lbr = new Float64Array(6); // L, B, R, dL/dT, dB/dT, dR/dT
 const poly = new Float64Array(2);
 const ofDate = new Float64Array(6);
 
-/** Sum the three series and their T-derivatives into `lbr` (L, B in rad; R in km). */
+/** Sum the three series and their T-derivatives into `lbr` (V_L, V_B in arcsec; V_R in km). */
 function sumSeries(p: ElpPacked, t: number): void {
   const rows = p.rows;
   for (let v = 0; v < 3; v++) {
@@ -101,11 +112,6 @@ function sumSeries(p: ElpPacked, t: number): void {
     lbr[v] = value;
     lbr[v + 3] = rate;
   }
-  polyWithRate(p.w1, t, poly, 0);
-  lbr[0] = poly[0] + lbr[0] / ARCSEC_PER_RAD;
-  lbr[3] = poly[1] + lbr[3] / ARCSEC_PER_RAD;
-  lbr[1] /= ARCSEC_PER_RAD;
-  lbr[4] /= ARCSEC_PER_RAD;
 }
 
 /**
@@ -116,9 +122,26 @@ export function elpGeocentricMoonState(jdTDB: number, out: Float64Array, offset 
   if (packed === undefined) packed = pack();
   const t = (jdTDB - J2000_JD) / DAYS_PER_JULIAN_CENTURY;
   sumSeries(packed, t);
-  const cl = Math.cos(lbr[0]), sl = Math.sin(lbr[0]);
-  const cb = Math.cos(lbr[1]), sb = Math.sin(lbr[1]);
-  const r = lbr[2], dl = lbr[3], db = lbr[4], dr = lbr[5];
+  elpMoonStateFromSums(lbr, t, out, offset);
+}
+
+/**
+ * Finish a Moon state from the summed series: `sums` = [V_L, V_B (arcsec), V_R (km), and
+ * their d/dT per century] at T = `t` (Julian centuries TDB from J2000). Adds the mean
+ * longitude W1, converts to rectangular coordinates on the ecliptic of date and rotates to
+ * the J2000 ecliptic: x, y, z (km), vx, vy, vz (km/day) into out[offset .. offset+5].
+ * `sums` is left unchanged. Shared by the direct evaluation and the bulk cache fill.
+ */
+export function elpMoonStateFromSums(sums: Float64Array, t: number, out: Float64Array, offset: number): void {
+  if (packed === undefined) packed = pack();
+  polyWithRate(packed.w1, t, poly, 0);
+  const l = poly[0] + sums[0] / ARCSEC_PER_RAD;
+  const dl = poly[1] + sums[3] / ARCSEC_PER_RAD;
+  const b = sums[1] / ARCSEC_PER_RAD;
+  const db = sums[4] / ARCSEC_PER_RAD;
+  const r = sums[2], dr = sums[5];
+  const cl = Math.cos(l), sl = Math.sin(l);
+  const cb = Math.cos(b), sb = Math.sin(b);
   // Position and d/dT on the ecliptic of date (chain rule on spherical → rectangular).
   ofDate[0] = r * cb * cl;
   ofDate[1] = r * cb * sl;

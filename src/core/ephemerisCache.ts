@@ -17,6 +17,8 @@
 import type { Ephemeris, EphemerisBody } from './types.js';
 import { assertInSpan, ephemerisBodyIndex, EPHEMERIS_BODIES } from './ephemerisBody.js';
 import { chebyshevFit, chebyshevNode, chebyshevValue3 } from './chebyshev.js';
+import { hasSegmentFitter } from './segmentFitter.js';
+import type { SegmentFitter } from './segmentFitter.js';
 
 /** Segment layout of one body: nominal segment length (days) and coefficients per axis. */
 export interface ChebyshevLayout {
@@ -51,12 +53,43 @@ export const DEFAULT_CHEBYSHEV_LAYOUTS: readonly ChebyshevLayout[] = [
 
 export type CacheVelocityMode = 'derivative' | 'fitted';
 
+/**
+ * How segments are fitted. 'bulk': the source fits runs of segments from its own series
+ * (segmentFitter.ts; only sources that offer it, e.g. the direct VSOP87/ELP series);
+ * 'nodes': the source is sampled at each segment's Chebyshev nodes (any source; the
+ * reference path).
+ */
+export type CacheFillMethod = 'bulk' | 'nodes';
+
+/**
+ * Default bound (au) on what the bulk fill may leave out of the series, summed worst-case
+ * over every dropped coefficient: with the layouts' own fit error (≤ 1.3e-11 au) the cache
+ * stays within 1e-9 au of the direct series (measured per body in ephemerisCacheFill.test.ts).
+ */
+export const DEFAULT_FIT_TOLERANCE_AU = 1e-10;
+
+/**
+ * A looser bound for dynamics over long spans. 1e-8 au is 1.5 km, i.e. 0.002″ at 1 au and
+ * 0.0001″ at Neptune, while VSOP87 itself departs from modern numerical ephemerides by
+ * ~0.01–0.1″ near J2000 and up to 1″ at ±2 000–4 000 years (Bretagnon & Francou 1988 give
+ * 1″ over 4 000 years for Mercury–Mars and 2 000 years for Jupiter–Saturn; the near-J2000
+ * figures from memory). The error actually reached is far below the bound (tests).
+ */
+export const DYNAMICS_FIT_TOLERANCE_AU = 1e-8;
+
+/** Segments per bulk-fill run: also the unit of lazy filling with 'bulk'. */
+export const CACHE_FILL_CHUNK = 64;
+
 export interface EphemerisCacheOptions {
   startJdTDB: number;
   endJdTDB: number;
   velocity?: CacheVelocityMode;
   /** Per-body layouts indexed like EPHEMERIS_BODIES; defaults to DEFAULT_CHEBYSHEV_LAYOUTS. */
   layouts?: readonly ChebyshevLayout[];
+  /** Default 'bulk' when the source offers it, else 'nodes'. */
+  fill?: CacheFillMethod;
+  /** Bulk fill only: worst-case bound (au) of left-out series terms; default DEFAULT_FIT_TOLERANCE_AU. */
+  fitToleranceAu?: number;
 }
 
 /** One body's segments: coefficients of segment s at s*stride; built[s] = 1 once fitted. */
@@ -74,7 +107,10 @@ export class EphemerisCache implements Ephemeris {
   readonly startJdTDB: number;
   readonly endJdTDB: number;
   readonly velocity: CacheVelocityMode;
+  readonly fill: CacheFillMethod;
+  readonly fitToleranceAu: number;
   private readonly tables: BodyTable[];
+  private readonly fitters: Array<SegmentFitter | null>;
   private readonly nodeStates: Float64Array;
   private segmentsFitted = 0;
 
@@ -101,6 +137,18 @@ export class EphemerisCache implements Ephemeris {
       throw new RangeError(`EphemerisCache: need ${EPHEMERIS_BODIES.length} layouts, got ${layouts.length}`);
     }
     this.tables = layouts.map((l) => this.makeTable(l));
+    this.fill = opts.fill ?? (hasSegmentFitter(source) ? 'bulk' : 'nodes');
+    if (this.fill !== 'bulk' && this.fill !== 'nodes') {
+      throw new TypeError(`EphemerisCache: fill must be 'bulk' or 'nodes', got '${String(this.fill)}'`);
+    }
+    if (this.fill === 'bulk' && !hasSegmentFitter(source)) {
+      throw new TypeError(`EphemerisCache: source '${source.name}' cannot fit segments in bulk; use fill 'nodes'`);
+    }
+    this.fitToleranceAu = opts.fitToleranceAu ?? DEFAULT_FIT_TOLERANCE_AU;
+    if (!(this.fitToleranceAu >= 0 && Number.isFinite(this.fitToleranceAu))) {
+      throw new RangeError(`EphemerisCache: fitToleranceAu must be a finite number ≥ 0, got ${this.fitToleranceAu}`);
+    }
+    this.fitters = this.tables.map(() => null);
     const nMax = Math.max(...layouts.map((l) => l.coefficients));
     this.nodeStates = new Float64Array(6 * nMax);
   }
@@ -130,10 +178,64 @@ export class EphemerisCache implements Ephemeris {
 
   /** Fit every segment of every body now (instead of at first touch). */
   fillAll(): void {
-    for (let b = 0; b < this.tables.length; b++) {
+    this.prefill(this.startJdTDB, this.endJdTDB);
+  }
+
+  /**
+   * Fit now every not-yet-fitted segment that overlaps [startJdTDB, endJdTDB] (clipped to the
+   * cache span) for `bodies` (default all): the path for long integrations. The coefficients
+   * are the same as lazy filling would produce, whatever the order of calls.
+   */
+  prefill(startJdTDB: number, endJdTDB: number, bodies: readonly EphemerisBody[] = EPHEMERIS_BODIES): void {
+    if (!(startJdTDB <= endJdTDB)) throw new RangeError(`prefill: bad range [${startJdTDB}, ${endJdTDB}]`);
+    const lo = Math.max(startJdTDB, this.startJdTDB);
+    const hi = Math.min(endJdTDB, this.endJdTDB);
+    if (lo > hi) return;
+    for (const body of bodies) {
+      const b = ephemerisBodyIndex(body);
       const t = this.tables[b];
-      for (let s = 0; s < t.segmentCount; s++) if (t.built[s] === 0) this.fitSegment(b, s);
+      const first = this.segmentIndex(t, lo);
+      const last = this.segmentIndex(t, hi);
+      for (let s = first; s <= last; s++) if (t.built[s] === 0) this.fitAround(b, s);
     }
+  }
+
+  /** Segment of table t holding jdTDB (inside the span). */
+  private segmentIndex(t: BodyTable, jdTDB: number): number {
+    const s = Math.floor((jdTDB - this.startJdTDB) / t.segmentDays);
+    return s >= t.segmentCount ? t.segmentCount - 1 : s < 0 ? 0 : s;
+  }
+
+  /** Fit segment s of body b: alone ('nodes') or with its whole bulk-fill chunk ('bulk'). */
+  private fitAround(b: number, s: number): void {
+    if (this.fill === 'nodes') {
+      this.fitSegment(b, s);
+      return;
+    }
+    const t = this.tables[b];
+    const first = s - (s % CACHE_FILL_CHUNK);
+    const count = Math.min(CACHE_FILL_CHUNK, t.segmentCount - first);
+    this.bodyFitter(b).fitSegments(first, count, t.coeffs, t.stride);
+    for (let k = first; k < first + count; k++) {
+      if (t.built[k] === 0) this.segmentsFitted++;
+      t.built[k] = 1;
+    }
+  }
+
+  /** The source's bulk fitter for body b, made at first use. */
+  bodyFitter(b: number): SegmentFitter {
+    let f = this.fitters[b];
+    if (f === null) {
+      const t = this.tables[b];
+      if (!hasSegmentFitter(this.source)) throw new TypeError(`EphemerisCache: source '${this.source.name}' has no bulk fitter`);
+      f = this.source.createSegmentFitter(
+        EPHEMERIS_BODIES[b],
+        { startJdTDB: this.startJdTDB, segmentDays: t.segmentDays, segmentCount: t.segmentCount, coefficients: t.n },
+        { fitVelocities: this.velocity === 'fitted', toleranceAu: this.fitToleranceAu },
+      );
+      this.fitters[b] = f;
+    }
+    return f;
   }
 
   helioState(body: EphemerisBody, jdTDB: number, out: Float64Array, offset = 0): void {
@@ -143,7 +245,7 @@ export class EphemerisCache implements Ephemeris {
     const u = (jdTDB - this.startJdTDB) / t.segmentDays;
     let s = Math.floor(u);
     if (s >= t.segmentCount) s = t.segmentCount - 1; // jdTDB === endJdTDB
-    if (t.built[s] === 0) this.fitSegment(b, s);
+    if (t.built[s] === 0) this.fitAround(b, s);
     const x = 2 * (u - s) - 1;
     const base = s * t.stride;
     if (this.velocity === 'fitted') {

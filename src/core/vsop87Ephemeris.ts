@@ -15,6 +15,8 @@ import type { Ephemeris, EphemerisBody } from './types.js';
 import { assertInSpan, ephemerisBodyIndex } from './ephemerisBody.js';
 import { DAYS_PER_JULIAN_MILLENNIUM, vsop87HelioState } from './vsop87.js';
 import { elpGeocentricMoonState } from './elpMoon.js';
+import type { SegmentFitter, SegmentFitterOptions, SegmentFitterSource, SegmentGrid } from './segmentFitter.js';
+import { Vsop87SegmentFitter } from './vsop87SegmentFitter.js';
 
 /**
  * Default span: J2000 ± 1 000 years. VSOP87 keeps about 1″ over ±4 000 years for Mercury–Mars
@@ -33,7 +35,7 @@ export interface Vsop87EphemerisOptions {
   endJdTDB?: number;
 }
 
-export class Vsop87Ephemeris implements Ephemeris {
+export class Vsop87Ephemeris implements Ephemeris, SegmentFitterSource {
   readonly name = 'VSOP87B + ELP/MPP02 (direct series)';
   readonly startJdTDB: number;
   readonly endJdTDB: number;
@@ -58,5 +60,19 @@ export class Vsop87Ephemeris implements Ephemeris {
     vsop87HelioState('earth', jdTDB, out, offset);
     elpGeocentricMoonState(jdTDB, this.moon, 0);
     for (let j = 0; j < 6; j++) out[offset + j] += this.moon[j] * MOON_TO_EMB_AU_PER_KM;
+  }
+
+  /**
+   * Bulk fitter of cache segments for `body` (vsop87SegmentFitter.ts): the same fits as
+   * sampling helioState at the Chebyshev nodes, from the series' own Chebyshev coefficients.
+   */
+  createSegmentFitter(body: EphemerisBody, grid: SegmentGrid, opts: SegmentFitterOptions): SegmentFitter {
+    const endJd = grid.startJdTDB + grid.segmentCount * grid.segmentDays;
+    if (grid.startJdTDB < this.startJdTDB || endJd > this.endJdTDB + 1e-6) {
+      throw new RangeError(
+        `${this.name}: segment grid [${grid.startJdTDB}, ${endJd}] exceeds the span [${this.startJdTDB}, ${this.endJdTDB}]`,
+      );
+    }
+    return new Vsop87SegmentFitter(body, grid, opts);
   }
 }

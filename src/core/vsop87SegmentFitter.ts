@@ -1,0 +1,222 @@
+/**
+ * Bulk fitting of cache segments from the VSOP87B series (and, for the Earth–Moon
+ * barycentre, the ELP/MPP02 Moon): the same quantities as sampling the direct ephemeris
+ * (vsop87Ephemeris.ts) at the Chebyshev nodes of each segment, obtained instead from the
+ * series' own Chebyshev coefficients (poissonChebyshev.ts).
+ *
+ * Per segment: for each variable (L, B, R), Horner's scheme over the powers of time,
+ * V = S_0 + t (S_1 + t (S_2 + …)), done on Chebyshev coefficients with t = t_m + h x
+ * (chebyshevAlgebra.ts); V evaluated at the n nodes; spherical → rectangular at each node
+ * (and the Moon added to the Earth for the barycentre); then the n-point Chebyshev
+ * interpolant of x, y, z (NR §5.8), as in the node-sampling path. The series coefficients
+ * are kept to SLOT_MARGIN more than n, so their own truncation stays below the interpolant's.
+ */
+import { ARCSEC_PER_RAD, EARTH_MOON_MASS_RATIO, J2000_JD, KM_PER_AU } from './constants.js';
+import type { PlanetName } from './constants.js';
+import type { EphemerisBody } from './types.js';
+import { ephemerisBodyIndex } from './ephemerisBody.js';
+import { chebyshevNode } from './chebyshev.js';
+import {
+  chebyshevDerivative, chebyshevFitMatrix, chebyshevNodeMatrix, chebyshevTimesLinear, matrixTimesVector,
+} from './chebyshevAlgebra.js';
+import type { PoissonChebyshevPlan } from './poissonChebyshev.js';
+import { planPoissonChebyshev, poissonChunkCoefficients } from './poissonChebyshev.js';
+import type { PoissonSeries } from './poissonSeries.js';
+import { elpPoissonSeries, vsop87PoissonSeries } from './poissonSeries.js';
+import { sphericalToRectangularState } from './vsop87.js';
+import { elpMoonStateFromSums } from './elpMoon.js';
+import type { SegmentFitter, SegmentFitterOptions, SegmentGrid } from './segmentFitter.js';
+
+/** Series coefficients kept beyond the n of the cache (truncation margin; measured, see tests). */
+const SLOT_MARGIN = 8;
+/** Longest run of segments per recurrence restart (drift ≤ ~64 rotations of a few ulps). */
+export const SEGMENT_FITTER_CHUNK = 64;
+/** EMB = Earth + geocentric Moon / (1 + M_earth/M_moon); au per km of the Moon's offset. */
+const MOON_TO_EMB_AU_PER_KM = 1 / ((1 + EARTH_MOON_MASS_RATIO) * KM_PER_AU);
+
+/** One theory's part of a body: plan, scratch and node values of L, B, R (+ rates). */
+class SeriesPart {
+  readonly plan: PoissonChebyshevPlan;
+  private acc = new Float64Array(0);
+  private readonly horner: Float64Array;
+  private readonly hornerTmp: Float64Array;
+  private readonly deriv: Float64Array;
+  readonly width: number; // coefficients after Horner: slots + powers − 1
+  /** nodeValues[6k + v] = V_v at node k; [6k + 3 + v] = dV_v/dt (per series unit). */
+  readonly nodeValues: Float64Array;
+  private firstMid = 0;
+  private chunkCount = 0;
+
+  private readonly nodeMatrix: Float64Array;
+
+  constructor(readonly series: PoissonSeries, readonly grid: SegmentGrid, weights: number[], budgetAu: number,
+    private readonly n: number) {
+    const toT = (jd: number) => (jd - J2000_JD) / series.daysPerUnit;
+    const endJd = grid.startJdTDB + grid.segmentCount * grid.segmentDays;
+    this.plan = planPoissonChebyshev(series, {
+      slots: n + SLOT_MARGIN, segmentDays: grid.segmentDays, tMin: toT(grid.startJdTDB), tMax: toT(endJd),
+      variableWeight: weights, budget: budgetAu,
+    });
+    this.width = this.plan.slots + series.powers - 1;
+    this.nodeMatrix = chebyshevNodeMatrix(n, this.width);
+    this.horner = new Float64Array(this.width + 1);
+    this.hornerTmp = new Float64Array(this.width + 1);
+    this.deriv = new Float64Array(this.width);
+    this.nodeValues = new Float64Array(6 * n);
+  }
+
+  /** Series time of segment s's midpoint. */
+  midT(s: number): number {
+    const g = this.grid;
+    return (g.startJdTDB + (s + 0.5) * g.segmentDays - J2000_JD) / this.series.daysPerUnit;
+  }
+
+  /** Series coefficients for segments [first, first + count). */
+  loadChunk(first: number, count: number): void {
+    const s = this.series;
+    const size = s.variables * s.powers * count * this.plan.slots;
+    if (this.acc.length < size) this.acc = new Float64Array(size);
+    poissonChunkCoefficients(this.plan, this.midT(first), count, this.acc);
+    this.firstMid = first;
+    this.chunkCount = count;
+  }
+
+  /** V_v (and with rates, dV_v/dt) of segment s (inside the loaded chunk) at the nodes. */
+  evaluate(s: number, withRates: boolean): void {
+    const ser = this.series;
+    const slots = this.plan.slots;
+    const h = this.plan.halfSegment;
+    const tm = this.midT(s);
+    const local = s - this.firstMid;
+    for (let v = 0; v < ser.variables; v++) {
+      // Horner over α on Chebyshev coefficients: V ← S_α + (t_m + h x) V.
+      let len = 0;
+      this.horner.fill(0);
+      for (let alpha = ser.powers - 1; alpha >= 0; alpha--) {
+        if (len > 0) {
+          chebyshevTimesLinear(this.horner, 0, len, tm, h, this.hornerTmp, 0);
+          len++;
+          this.horner.set(this.hornerTmp.subarray(0, len));
+        }
+        const base = ((v * ser.powers + alpha) * this.chunkCount + local) * slots;
+        for (let j = 0; j < slots; j++) this.horner[j] += this.acc[base + j];
+        len = Math.max(len, slots);
+      }
+      for (let j = len; j < this.width; j++) this.horner[j] = 0;
+      matrixTimesVector(this.nodeMatrix, this.n, this.width, this.horner, 0, 1, this.nodeValues, v, 6);
+      if (withRates) {
+        chebyshevDerivative(this.horner, 0, this.width, this.deriv, 0);
+        this.deriv[this.width - 1] = 0;
+        matrixTimesVector(this.nodeMatrix, this.n, this.width, this.deriv, 0, 1, this.nodeValues, 3 + v, 6);
+        for (let k = 0; k < this.n; k++) this.nodeValues[6 * k + 3 + v] /= h;
+      }
+    }
+  }
+}
+
+/** Bound of a Poisson variable's size: Σ_α t^α Σ_k |A_k| over its blocks (triangle inequality). */
+function variableBound(s: PoissonSeries, v: number, tAbs: number): number {
+  let sum = 0;
+  for (let alpha = 0; alpha < s.powers; alpha++) {
+    let a = 0;
+    for (let k = s.blockStart[v * s.powers + alpha]; k < s.blockStart[v * s.powers + alpha + 1]; k++) {
+      a += Math.abs(s.amplitude[k]);
+    }
+    sum += a * tAbs ** alpha;
+  }
+  return sum;
+}
+
+export class Vsop87SegmentFitter implements SegmentFitter {
+  readonly termsKept: number;
+  readonly termsTotal: number;
+  readonly droppedBoundAu: number;
+  private readonly planet: SeriesPart;
+  private readonly moon: SeriesPart | null;
+  private readonly n: number;
+  private readonly fitMatrix: Float64Array;
+  private readonly nodeX: Float64Array;
+  private readonly states: Float64Array;
+  private readonly lbr = new Float64Array(6);
+  private readonly moonState = new Float64Array(6);
+
+  constructor(body: EphemerisBody, private readonly grid: SegmentGrid, private readonly opts: SegmentFitterOptions) {
+    const index = ephemerisBodyIndex(body);
+    const n = grid.coefficients;
+    if (!Number.isInteger(n) || n < 2) throw new RangeError(`Vsop87SegmentFitter: bad coefficient count ${n}`);
+    if (!(opts.toleranceAu >= 0)) throw new RangeError(`Vsop87SegmentFitter: tolerance must be ≥ 0 au, got ${opts.toleranceAu}`);
+    this.n = n;
+    const planetName: PlanetName = index === 8 ? 'earth' : (body as PlanetName);
+    const vsop = vsop87PoissonSeries(planetName);
+    const endJd = grid.startJdTDB + grid.segmentCount * grid.segmentDays;
+    const tauAbs = Math.max(Math.abs(grid.startJdTDB - J2000_JD), Math.abs(endJd - J2000_JD)) / vsop.daysPerUnit;
+    const rMaxAu = variableBound(vsop, 2, tauAbs);
+    const share = index === 8 ? 0.5 : 1;
+    this.planet = new SeriesPart(vsop, grid, [rMaxAu, rMaxAu, 1], share * opts.toleranceAu, n);
+    if (index === 8) {
+      const elp = elpPoissonSeries();
+      const tAbs = (tauAbs * vsop.daysPerUnit) / elp.daysPerUnit;
+      const rMoonKm = variableBound(elp, 2, tAbs);
+      const angular = (rMoonKm / ARCSEC_PER_RAD) * MOON_TO_EMB_AU_PER_KM;
+      this.moon = new SeriesPart(elp, grid, [angular, angular, MOON_TO_EMB_AU_PER_KM], share * opts.toleranceAu, n);
+    } else {
+      this.moon = null;
+    }
+    this.termsKept = this.planet.plan.termsKept + (this.moon?.plan.termsKept ?? 0);
+    this.termsTotal = this.planet.series.amplitude.length + (this.moon?.series.amplitude.length ?? 0);
+    const bound = (p: PoissonChebyshevPlan) => p.droppedBound.reduce((a, b) => a + b, 0);
+    this.droppedBoundAu = bound(this.planet.plan) + (this.moon === null ? 0 : bound(this.moon.plan));
+    this.fitMatrix = chebyshevFitMatrix(n);
+    this.nodeX = Float64Array.from({ length: n }, (_, k) => chebyshevNode(k, n));
+    this.states = new Float64Array(6 * n);
+  }
+
+  fitSegments(first: number, count: number, coeffs: Float64Array, stride: number): void {
+    if (!(Number.isInteger(first) && Number.isInteger(count) && first >= 0 && count >= 0 && first + count <= this.grid.segmentCount)) {
+      throw new RangeError(`fitSegments: segments [${first}, ${first + count}) outside [0, ${this.grid.segmentCount})`);
+    }
+    for (let c = first; c < first + count; c += SEGMENT_FITTER_CHUNK) {
+      const m = Math.min(SEGMENT_FITTER_CHUNK, first + count - c);
+      this.planet.loadChunk(c, m);
+      this.moon?.loadChunk(c, m);
+      for (let s = c; s < c + m; s++) this.fitOne(s, coeffs, s * stride);
+    }
+  }
+
+  private fitOne(s: number, coeffs: Float64Array, at: number): void {
+    const n = this.n;
+    const rates = this.opts.fitVelocities;
+    const states = this.states;
+    const lbr = this.lbr;
+    this.planet.evaluate(s, rates);
+    const pv = this.planet.nodeValues;
+    const perDay = 1 / this.planet.series.daysPerUnit;
+    for (let k = 0; k < n; k++) {
+      for (let v = 0; v < 3; v++) {
+        lbr[v] = pv[6 * k + v];
+        lbr[3 + v] = rates ? pv[6 * k + 3 + v] * perDay : 0;
+      }
+      sphericalToRectangularState(lbr, states, 6 * k);
+    }
+    if (this.moon !== null) this.addMoon(s, rates);
+    const axes = rates ? 6 : 3;
+    for (let a = 0; a < axes; a++) matrixTimesVector(this.fitMatrix, n, n, states, a, 6, coeffs, at + a * n, 1);
+  }
+
+  /** Add the Moon's share of the barycentre offset at every node of segment s. */
+  private addMoon(s: number, rates: boolean): void {
+    const moon = this.moon as SeriesPart;
+    moon.evaluate(s, rates);
+    const mv = moon.nodeValues;
+    const h = moon.plan.halfSegment;
+    const tm = moon.midT(s);
+    for (let k = 0; k < this.n; k++) {
+      for (let v = 0; v < 3; v++) {
+        this.lbr[v] = mv[6 * k + v];
+        this.lbr[3 + v] = rates ? mv[6 * k + 3 + v] : 0;
+      }
+      elpMoonStateFromSums(this.lbr, tm + h * this.nodeX[k], this.moonState, 0);
+      for (let j = 0; j < 6; j++) this.states[6 * k + j] += this.moonState[j] * MOON_TO_EMB_AU_PER_KM;
+    }
+  }
+}
