@@ -8,42 +8,16 @@
  */
 import { calendarToJd } from '../core/julian.js';
 import { COMET_COLUMNS as C, COMET_ORBIT_TYPES } from './cometExportLayout.js';
-import { fieldText, isBlankField, parseFixedNumber } from './fixedField.js';
-import { isSeparatorLine } from './orbitExportLine.js';
+import { fieldText } from './fixedField.js';
+import { columnsOf, failAt, isSeparatorLine, optionalNumber, requiredNumber, type Field } from './fixedFieldRead.js';
 import { unpackComet } from './packedComet.js';
-import { InputError, type LineOutcome, type OrbitRow } from './types.js';
-
-type Field = readonly [number, number];
-
-function fail(file: string, lineNo: number, line: string, field: Field, reason: string): never {
-  throw new InputError(file, lineNo, field[0] + 1, reason, line);
-}
-
-const columnsOf = (f: Field): string => (f[1] - f[0] === 1 ? `column ${f[1]}` : `columns ${f[0] + 1}–${f[1]}`);
-
-function optionalNumber(line: string, f: Field, what: string, file: string, lineNo: number): number {
-  if (line.length > f[0] && line.length < f[1]) {
-    fail(file, lineNo, line, f, `line ends at column ${line.length}, inside ${what} (${columnsOf(f)})`);
-  }
-  const v = parseFixedNumber(line, f[0], f[1]);
-  if (Number.isNaN(v) && !isBlankField(line, f[0], f[1])) {
-    fail(file, lineNo, line, f, `${what} is not a number: '${fieldText(line, f[0], f[1])}' (${columnsOf(f)})`);
-  }
-  return v;
-}
-
-function requiredNumber(line: string, f: Field, what: string, file: string, lineNo: number): number {
-  if (line.length <= f[0]) fail(file, lineNo, line, f, `line ends at column ${line.length}, before ${what} (${columnsOf(f)})`);
-  const v = optionalNumber(line, f, what, file, lineNo);
-  if (Number.isNaN(v)) fail(file, lineNo, line, f, `missing ${what} (${columnsOf(f)})`);
-  return v;
-}
+import type { LineOutcome, OrbitRow } from './types.js';
 
 /** Columns 1–12 and 103–158: packed and readable designation, name. */
 function readDesignation(line: string, row: OrbitRow, file: string, lineNo: number): void {
   const type = line[C.type[0]] ?? ' ';
   if (!COMET_ORBIT_TYPES.includes(type) || type === ' ') {
-    fail(file, lineNo, line, C.type, `orbit type '${type}' is not one of ${COMET_ORBIT_TYPES.split('').join(', ')} (${columnsOf(C.type)})`);
+    failAt(file, lineNo, line, C.type, `orbit type '${type}' is not one of ${COMET_ORBIT_TYPES.split('').join(', ')} (${columnsOf(C.type)})`);
   }
   const num = fieldText(line, C.number[0], C.number[1]);
   const prov = fieldText(line, C.provisional[0], C.provisional[1]);
@@ -54,7 +28,7 @@ function readDesignation(line: string, row: OrbitRow, file: string, lineNo: numb
   const unpacked = unpackComet(packed);
   if (unpacked === '') {
     const f: Field = num !== '' ? C.number : C.provisional;
-    fail(file, lineNo, line, f, `unknown packed comet designation form: '${line.slice(0, C.provisional[1]).trim()}' (columns 1–12)`);
+    failAt(file, lineNo, line, f, `unknown packed comet designation form: '${line.slice(0, C.provisional[1]).trim()}' (columns 1–12)`);
   }
   row.packedDesignation = packed;
   row.designation = unpacked;
@@ -69,7 +43,7 @@ function readPerihelion(line: string, row: OrbitRow, file: string, lineNo: numbe
   const month = requiredNumber(line, C.tpMonth, 'perihelion month', file, lineNo);
   const day = requiredNumber(line, C.tpDay, 'perihelion day', file, lineNo);
   if (!Number.isInteger(year) || !Number.isInteger(month) || month < 1 || month > 12 || day < 1 || day >= 32) {
-    fail(file, lineNo, line, C.tpYear, `perihelion date is not a calendar date: '${fieldText(line, C.tpYear[0], C.tpDay[1])}' (columns 15–29)`);
+    failAt(file, lineNo, line, C.tpYear, `perihelion date is not a calendar date: '${fieldText(line, C.tpYear[0], C.tpDay[1])}' (columns 15–29)`);
   }
   row.tpJdTT = calendarToJd(year, month, day);
 }
@@ -84,7 +58,7 @@ function readEpoch(line: string, row: OrbitRow, file: string, lineNo: number): v
   const month = m ? Number(m[2]) : 0;
   const day = m ? Number(m[3]) : 0;
   if (!m || month < 1 || month > 12 || day < 1 || day > 31) {
-    fail(file, lineNo, line, f, `epoch is not YYYYMMDD: '${text}' (columns 82–89)`);
+    failAt(file, lineNo, line, f, `epoch is not YYYYMMDD: '${text}' (columns 82–89)`);
   }
   row.epochJdTT = calendarToJd(Number(m[1]), month, day);
 }

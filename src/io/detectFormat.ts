@@ -6,7 +6,7 @@
  */
 import { COMET_ORBIT_TYPES } from './cometExportLayout.js';
 import { UnreadableInputError } from './errors.js';
-import { isSeparatorLine } from './orbitExportLine.js';
+import { isSeparatorLine } from './fixedFieldRead.js';
 import type { InputFormat } from './types.js';
 
 /** True for a line with the shape of the one-line orbit export format. */

@@ -2,6 +2,7 @@ export * from './types.js';
 export * from './errors.js';
 export * from './base62.js';
 export * from './fixedField.js';
+export * from './fixedFieldRead.js';
 export * from './packedNumber.js';
 export * from './packedProvisional.js';
 export * from './packedComet.js';

@@ -3,7 +3,7 @@
  * layout of the one-line minor-planet orbit export format; columns in ./orbitExportLayout.ts).
  * Real lines are 165–202 characters: fields past the end of a line are absent (NaN / '').
  * Blank lines and lines of dashes → 'skip'; header text before the dashed line is the file
- * reader's business (./headerGate.ts). Every field of the scratch row is assigned, so the
+ * reader's business (./detectFormat.ts, ./readOrbitFile.ts). Every field of the scratch row is assigned, so the
  * row needs no reset between lines. A bad data line throws InputError (file, line, column).
  *
  * Missing semimajor axis: computed from the mean daily motion n by Kepler's third law in
@@ -14,55 +14,13 @@
 import { GAUSS_K, RAD_PER_DEG } from '../core/constants.js';
 import { calendarToJd } from '../core/julian.js';
 import { PackedFormError } from './errors.js';
-import { fieldText, isBlankField, parseDigits, parseFixedNumber } from './fixedField.js';
+import { fieldText, isBlankField, parseDigits } from './fixedField.js';
+import { columnsOf, failAt, isSeparatorLine, optionalNumber, requiredNumber } from './fixedFieldRead.js';
 import { ORBIT_COLUMNS as C } from './orbitExportLayout.js';
 import { unpackDesignation } from './packedDesignation.js';
 import { unpackEpochJd } from './packedEpoch.js';
 import { unpackNumber } from './packedNumber.js';
-import { InputError, type LineOutcome, type OrbitRow } from './types.js';
-
-type Field = readonly [number, number];
-
-/** True for a blank line or a separator line made of dashes (and spaces). */
-export function isSeparatorLine(line: string): boolean {
-  let dashes = 0;
-  for (let k = 0; k < line.length; k++) {
-    const c = line.charCodeAt(k);
-    if (c === 45) dashes++;
-    else if (c !== 32 && c !== 9) return false;
-  }
-  return dashes === 0 || dashes >= 5;
-}
-
-function fail(file: string, lineNo: number, line: string, field: Field, reason: string): never {
-  throw new InputError(file, lineNo, field[0] + 1, reason, line);
-}
-
-function columnsOf(field: Field): string {
-  return `columns ${field[0] + 1}–${field[1]}`;
-}
-
-/** Number from `field`, NaN when blank; InputError when present but not a number. */
-function optionalNumber(line: string, field: Field, what: string, file: string, lineNo: number): number {
-  if (line.length > field[0] && line.length < field[1]) {
-    fail(file, lineNo, line, field, `line ends at column ${line.length}, inside ${what} (${columnsOf(field)})`);
-  }
-  const v = parseFixedNumber(line, field[0], field[1]);
-  if (Number.isNaN(v) && !isBlankField(line, field[0], field[1])) {
-    fail(file, lineNo, line, field, `${what} is not a number: '${fieldText(line, field[0], field[1])}' (${columnsOf(field)})`);
-  }
-  return v;
-}
-
-/** Number from `field`; InputError naming the field when blank, cut off, or not a number. */
-function requiredNumber(line: string, field: Field, what: string, file: string, lineNo: number): number {
-  if (line.length <= field[0]) {
-    fail(file, lineNo, line, field, `line ends at column ${line.length}, before ${what} (${columnsOf(field)})`);
-  }
-  const v = optionalNumber(line, field, what, file, lineNo);
-  if (Number.isNaN(v)) fail(file, lineNo, line, field, `missing ${what} (${columnsOf(field)})`);
-  return v;
-}
+import type { LineOutcome, OrbitRow } from './types.js';
 
 /**
  * End of the readable designation: column 194, or the end of the line when the text runs
@@ -77,7 +35,7 @@ function readableEnd(line: string): number {
 /** Designation fields: packed (1–7) and readable (167–194). */
 function readDesignation(line: string, row: OrbitRow, file: string, lineNo: number): void {
   const packed = fieldText(line, C.packed[0], C.packed[1]);
-  if (packed === '') fail(file, lineNo, line, C.packed, `blank packed designation (${columnsOf(C.packed)})`);
+  if (packed === '') failAt(file, lineNo, line, C.packed, `blank packed designation (${columnsOf(C.packed)})`);
   row.packedDesignation = packed;
   row.number = unpackNumber(packed); // the common case first: no readable string to build
   let unpacked = '';
@@ -85,7 +43,7 @@ function readDesignation(line: string, row: OrbitRow, file: string, lineNo: numb
     try {
       unpacked = unpackDesignation(packed);
     } catch (err) {
-      if (err instanceof PackedFormError) fail(file, lineNo, line, C.packed, err.message);
+      if (err instanceof PackedFormError) failAt(file, lineNo, line, C.packed, err.message);
       throw err;
     }
   }
@@ -97,7 +55,7 @@ function readDesignation(line: string, row: OrbitRow, file: string, lineNo: numb
     const close = readable.indexOf(')');
     const n = readable.charCodeAt(0) === 40 && close > 1 ? parseDigits(readable, 1, close) : -1;
     if (n !== row.number) {
-      fail(file, lineNo, line, C.readable, `readable designation '${readable}' disagrees with packed ${packed} = (${row.number})`);
+      failAt(file, lineNo, line, C.readable, `readable designation '${readable}' disagrees with packed ${packed} = (${row.number})`);
     }
     row.name = readable.slice(close + 1).trim();
   }
@@ -120,7 +78,7 @@ function readArc(line: string, row: OrbitRow, file: string, lineNo: number): voi
   }
   const text = fieldText(line, a, b);
   const days = /^(\d+) days$/.exec(text);
-  if (!days) fail(file, lineNo, line, C.arc, `arc is neither 'YYYY-YYYY' nor 'N days': '${text}' (${columnsOf(C.arc)})`);
+  if (!days) failAt(file, lineNo, line, C.arc, `arc is neither 'YYYY-YYYY' nor 'N days': '${text}' (${columnsOf(C.arc)})`);
   row.arcDays = Number(days[1]);
 }
 
@@ -133,7 +91,7 @@ function readLastObs(line: string, row: OrbitRow, file: string, lineNo: number):
   const month = parseDigits(line, a + 4, a + 6);
   const day = parseDigits(line, a + 6, a + 8);
   if (year < 0 || month < 1 || month > 12 || day < 1 || day > 31 || !isBlankField(line, b, line.length)) {
-    fail(file, lineNo, line, C.lastObs, `date of last observation is not YYYYMMDD: '${fieldText(line, a, line.length)}' (${columnsOf(C.lastObs)})`);
+    failAt(file, lineNo, line, C.lastObs, `date of last observation is not YYYYMMDD: '${fieldText(line, a, line.length)}' (${columnsOf(C.lastObs)})`);
   }
   row.lastObsJdTT = calendarToJd(year, month, day);
 }
@@ -147,14 +105,14 @@ function readUncertainty(line: string, row: OrbitRow): void {
 /** Elements block (epoch .. a); a from n when blank. */
 function readElements(line: string, row: OrbitRow, file: string, lineNo: number): void {
   if (line.length <= C.epoch[0]) {
-    fail(file, lineNo, line, C.epoch, `line ends at column ${line.length}, before the epoch (${columnsOf(C.epoch)})`);
+    failAt(file, lineNo, line, C.epoch, `line ends at column ${line.length}, before the epoch (${columnsOf(C.epoch)})`);
   }
   const epoch = fieldText(line, C.epoch[0], C.epoch[1]);
-  if (epoch === '') fail(file, lineNo, line, C.epoch, `missing epoch (${columnsOf(C.epoch)})`);
+  if (epoch === '') failAt(file, lineNo, line, C.epoch, `missing epoch (${columnsOf(C.epoch)})`);
   try {
     row.epochJdTT = unpackEpochJd(epoch);
   } catch (err) {
-    if (err instanceof PackedFormError) fail(file, lineNo, line, C.epoch, err.message);
+    if (err instanceof PackedFormError) failAt(file, lineNo, line, C.epoch, err.message);
     throw err;
   }
   row.meanAnomalyDeg = requiredNumber(line, C.M, 'mean anomaly', file, lineNo);
@@ -167,7 +125,7 @@ function readElements(line: string, row: OrbitRow, file: string, lineNo: number)
   if (Number.isNaN(row.aAu)) {
     const n = row.meanMotionDegPerDay;
     if (!(n > 0)) {
-      fail(file, lineNo, line, C.a, `missing semimajor axis and no positive mean daily motion to derive it (${columnsOf(C.n)}, ${columnsOf(C.a)})`);
+      failAt(file, lineNo, line, C.a, `missing semimajor axis and no positive mean daily motion to derive it (${columnsOf(C.n)}, ${columnsOf(C.a)})`);
     }
     row.aAu = Math.cbrt((GAUSS_K / (n * RAD_PER_DEG)) ** 2); // a = (k/n)^(2/3)
   }
