@@ -3,7 +3,7 @@
  * readers of ./csvValues.ts. Every field of the scratch row is assigned. Angles are taken
  * in degrees. Derived values, each only where the file does not give it:
  * - a = q / (1 − e) for e < 1; else a = (k / n)^(2/3) from a mean motion n (deg/day),
- *   Kepler's third law in the Gaussian system (GAUSS_K; Gauss 1809, Theoria Motus art. 6–7);
+ *   Kepler's third law in the Gaussian system (GAUSS_K; Gauss 1809, Theoria Motus, from memory);
  * - epoch = tp when the file gives a perihelion time and no epoch (elements referred to it);
  * - arcDays = last_obs − first_obs when both are full dates.
  * kind = 'comet' for comet designations ('1P', 'C/1995 O1'), else 'asteroid'.

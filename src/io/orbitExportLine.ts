@@ -2,13 +2,13 @@
  * Parser of one line of the one-line minor-planet orbit export format (published column
  * layout of the one-line minor-planet orbit export format; columns in ./orbitExportLayout.ts).
  * Real lines are 165–202 characters: fields past the end of a line are absent (NaN / '').
- * Blank lines and lines of dashes → 'skip'; header text before the dashed line is the file
- * reader's business (./detectFormat.ts, ./readOrbitFile.ts). Every field of the scratch row is assigned, so the
- * row needs no reset between lines. A bad data line throws InputError (file, line, column).
+ * Blank lines and lines of dashes → 'skip'; header text before the dashed line is the
+ * file reader's business (./detectFormat.ts, ./readOrbitFile.ts). Every field of the
+ * scratch row is assigned, so the row needs no reset between lines. A bad data line throws InputError (file, line, column).
  *
  * Missing semimajor axis: computed from the mean daily motion n by Kepler's third law in
  * the Gaussian system, n = k a^(-3/2) (k = GAUSS_K in rad/day, massless body; Gauss 1809,
- * Theoria Motus, art. 6–7), i.e. a = (k / n)^(2/3) with n in rad/day.
+ * Theoria Motus, book I art. 1–6, from memory), i.e. a = (k / n)^(2/3) with n in rad/day.
  * Arc as first–last years: arcDays = (last − first) × 365.25, good to about a year.
  */
 import { GAUSS_K, RAD_PER_DEG } from '../core/constants.js';
