@@ -124,3 +124,21 @@ export function missingRequired(index: ColumnIndex): string[] {
   if (!has('M') && !has('tp')) missing.push('M or tp');
   return missing;
 }
+
+/**
+ * The mapping written as `field=header,field=header` (the `--columns` option's text), e.g.
+ * `designation=objname,e=ecc`. RangeError for malformed pairs, unknown fields or a field
+ * given twice (the CLI turns it into its own argument error).
+ */
+export function parseColumnMapping(text: string): ColumnMapping {
+  const mapping: ColumnMapping = {};
+  for (const pair of text.split(',')) {
+    const m = /^\s*([A-Za-z]+)\s*=\s*(.*?)\s*$/.exec(pair);
+    if (!m || m[2] === '') throw new RangeError(`column mapping '${pair.trim()}' is not field=header`);
+    const field = m[1] as CsvField;
+    if (field in mapping) throw new RangeError(`column mapping gives '${field}' twice`);
+    mapping[field] = m[2];
+  }
+  checkColumnMapping(mapping);
+  return mapping;
+}

@@ -10,7 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import {
-  cellJd, emptyOrbitRow, mapColumns, parseOrbitExportLine, readOrbitFile, sniffDelimiter,
+  cellJd, emptyOrbitRow, mapColumns, parseColumnMapping, parseOrbitExportLine, readOrbitFile, sniffDelimiter,
   UnreadableInputError, type InputError, type OrbitRow, type ReadOrbitOptions,
 } from '../../src/io/index.js';
 import { isoToJd } from './fixtureCases.js';
@@ -52,6 +52,13 @@ describe('header and delimiter', () => {
     expect(mapColumns(['name', 'pdes']).index.designation).toBe(1);
     expect(mapColumns(['name']).index.designation).toBe(0);
     expect(mapColumns(['name']).index.name).toBe(-1);
+  });
+
+  it('parses the --columns text', () => {
+    expect(parseColumnMapping('designation=objname, e = ecc ,tp=T peri')).toEqual({ designation: 'objname', e: 'ecc', tp: 'T peri' });
+    expect(() => parseColumnMapping('designation')).toThrow(new RangeError("column mapping 'designation' is not field=header"));
+    expect(() => parseColumnMapping('e=a,e=b')).toThrow(new RangeError("column mapping gives 'e' twice"));
+    expect(() => parseColumnMapping('colour=x')).toThrow(RangeError);
   });
 
   it('an explicit mapping wins', () => {
