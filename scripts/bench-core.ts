@@ -5,9 +5,13 @@
  * Usage: npm run bench:core
  */
 import { benchEphemeris } from './bench/ephemeris.js';
+import { benchTwoBody } from './bench/twoBody.js';
+import { benchIntegrator } from './bench/integrator.js';
 
 const pieces: Array<[string, () => Promise<Record<string, number>>]> = [
   ['ephemeris', benchEphemeris],
+  ['twoBody', async () => ({ ...benchTwoBody() })],
+  ['integrator', () => benchIntegrator()],
 ];
 
 const results: Record<string, Record<string, number>> = {};
