@@ -9,6 +9,7 @@ import { RAD_PER_DEG } from '../core/constants.js';
 import type { OrbitRow } from '../io/types.js';
 import { completeElements, type CompleteElements } from './derivedElements.js';
 import { qualityWord } from './qualityFlags.js';
+import { NumberSlotIndex, StringSlotIndex } from './slotIndex.js';
 import { DEFAULT_QUALITY, DEFAULT_VALIDITY, type QualityThresholds, type ValidityLimits } from './thresholds.js';
 import { KIND_ASTEROID, KIND_COMET, qualityBit, type Catalogue, type Reject } from './types.js';
 import { invalidReason } from './validate.js';
@@ -20,22 +21,27 @@ const FLOAT_COLUMNS = [
 ] as const;
 type FloatColumn = (typeof FLOAT_COLUMNS)[number];
 
-/** Key under which two rows are the same body: the number if any, else the readable designation. */
-export function designationKey(row: OrbitRow): string {
-  if (Number.isFinite(row.number)) return `#${row.number}`;
-  return row.designation.trim().replace(/\s+/g, ' ').toUpperCase();
+/**
+ * Key under which two unnumbered rows are the same body: the readable designation with
+ * outer blanks dropped and inner runs of blanks made one (numbered rows match by number).
+ */
+export function designationKey(designation: string): string {
+  const t = designation.trim();
+  return t.includes('  ') || t.includes('\t') ? t.replace(/\s+/g, ' ') : t;
 }
 
 export interface BuilderOptions {
   validity?: Partial<ValidityLimits>;
   quality?: Partial<QualityThresholds>;
+  expectedRows?: number; // capacity to start with (a guess is fine: columns grow past it)
 }
 
 export class CatalogueBuilder {
   private readonly validity: ValidityLimits;
   private readonly thresholds: QualityThresholds;
   private readonly elements: CompleteElements = { aAu: NaN, qAu: NaN, meanAnomalyRad: NaN, tpJdTT: NaN };
-  private readonly slotByKey = new Map<string, number>();
+  private readonly slotByNumber: NumberSlotIndex; // numbered bodies
+  private readonly slotByName: StringSlotIndex; // unnumbered, by designationKey
   private capacity = 0;
   private cols!: Record<FloatColumn, Float64Array>;
   private kind: Uint8Array = new Uint8Array(0);
@@ -52,7 +58,11 @@ export class CatalogueBuilder {
   constructor(options: BuilderOptions = {}) {
     this.validity = { ...DEFAULT_VALIDITY, ...options.validity };
     this.thresholds = { ...DEFAULT_QUALITY, ...options.quality };
-    this.grow(1 << 12);
+    const expected = Math.max(1 << 12, Math.ceil(options.expectedRows ?? 0));
+    this.grow(expected);
+    // Either index may hold every row; presizing both costs 24 bytes a row, once.
+    this.slotByNumber = new NumberSlotIndex(expected);
+    this.slotByName = new StringSlotIndex(expected / 4);
   }
 
   get accepted(): number {
@@ -73,12 +83,13 @@ export class CatalogueBuilder {
       this.rejects.push({ kind: 'invalid', file, line, reason, text });
       return false;
     }
-    const key = designationKey(row);
-    const existing = this.slotByKey.get(key);
-    if (existing !== undefined) return this.settleDuplicate(existing, row, file, line, text);
+    // Claim the next slot under this body's key, unless a row of the same body holds one.
+    const existing = Number.isFinite(row.number)
+      ? this.slotByNumber.lookupOrInsert(row.number, this.size)
+      : this.slotByName.lookupOrInsert(designationKey(row.designation), this.size);
+    if (existing >= 0) return this.settleDuplicate(existing, row, file, line, text);
     if (this.size === this.capacity) this.grow(this.capacity * 2);
     const slot = this.size++;
-    this.slotByKey.set(key, slot);
     this.designation.push(row.designation);
     this.write(slot, row, file, line);
     return true;
@@ -159,21 +170,24 @@ export class CatalogueBuilder {
     this.capacity = capacity;
   }
 
-  /** The finished catalogue (columns trimmed to size; the builder must not be used after). */
+  /**
+   * The finished catalogue. Columns are views of the builder's buffers, trimmed to size
+   * (no copy); the builder must not be used after.
+   */
   finish(): Catalogue {
     const n = this.size;
     const c = this.cols;
     return {
       size: n,
       designation: this.designation,
-      kind: this.kind.slice(0, n),
-      epochJdTT: c.epochJdTT.slice(0, n),
-      a: c.a.slice(0, n), q: c.q.slice(0, n), e: c.e.slice(0, n), i: c.i.slice(0, n),
-      node: c.node.slice(0, n), peri: c.peri.slice(0, n), meanAnomaly: c.meanAnomaly.slice(0, n),
-      tpJdTT: c.tpJdTT.slice(0, n), H: c.H.slice(0, n), uncertainty: c.uncertainty.slice(0, n),
-      nObs: c.nObs.slice(0, n), arcDays: c.arcDays.slice(0, n),
-      quality: this.quality.slice(0, n), fileIndex: this.fileIndex.slice(0, n),
-      source: this.source.slice(0, n), files: this.files.slice(),
+      kind: this.kind.subarray(0, n),
+      epochJdTT: c.epochJdTT.subarray(0, n),
+      a: c.a.subarray(0, n), q: c.q.subarray(0, n), e: c.e.subarray(0, n), i: c.i.subarray(0, n),
+      node: c.node.subarray(0, n), peri: c.peri.subarray(0, n), meanAnomaly: c.meanAnomaly.subarray(0, n),
+      tpJdTT: c.tpJdTT.subarray(0, n), H: c.H.subarray(0, n), uncertainty: c.uncertainty.subarray(0, n),
+      nObs: c.nObs.subarray(0, n), arcDays: c.arcDays.subarray(0, n),
+      quality: this.quality.subarray(0, n), fileIndex: this.fileIndex.subarray(0, n),
+      source: this.source.subarray(0, n), files: this.files.slice(),
     };
   }
 }

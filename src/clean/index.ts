@@ -5,3 +5,4 @@ export * from './validate.js';
 export * from './derivedElements.js';
 export * from './qualityFlags.js';
 export * from './catalogueBuilder.js';
+export * from './slotIndex.js';

@@ -15,8 +15,29 @@ function fmt(v: number): string {
   return Number.isFinite(v) ? String(v) : Number.isNaN(v) ? 'missing' : String(v);
 }
 
+/**
+ * True when a row plainly passes every rule: the common case, tested with comparisons only
+ * (NaN fails every comparison, so missing values fall through to the detailed checks).
+ */
+function plainlyValid(row: OrbitRow, limits: ValidityLimits): boolean {
+  return (
+    row.e >= 0 && row.e < 1 && row.aAu > 0 && row.aAu < Infinity &&
+    row.epochJdTT >= limits.epochMinJdTT && row.epochJdTT <= limits.epochMaxJdTT &&
+    row.iDeg >= 0 && row.iDeg <= 180 && row.nodeDeg >= 0 && row.nodeDeg <= 360 &&
+    row.periDeg >= 0 && row.periDeg <= 360 && row.meanAnomalyDeg >= 0 && row.meanAnomalyDeg <= 360 &&
+    (Number.isNaN(row.qAu) || (row.qAu > 0 && row.qAu < Infinity)) &&
+    (Number.isNaN(row.H) || (row.H >= limits.hMin && row.H <= limits.hMax)) &&
+    row.designation.length > 0 && row.designation.charCodeAt(0) > 32
+  );
+}
+
 /** Reason the row is invalid, or null when it passes every rule. Does not modify the row. */
 export function invalidReason(row: OrbitRow, limits: ValidityLimits): string | null {
+  return plainlyValid(row, limits) ? null : ruleByRule(row, limits);
+}
+
+/** The rules one by one, naming the first that fails (exported for its equivalence test). */
+export function ruleByRule(row: OrbitRow, limits: ValidityLimits): string | null {
   if (row.designation.trim() === '') return 'no designation';
   if (!Number.isFinite(row.e)) return `eccentricity is ${fmt(row.e)}`;
   if (row.e < 0) return `eccentricity ${row.e} is negative`;

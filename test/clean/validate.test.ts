@@ -42,3 +42,22 @@ describe('validity rules', () => {
     expect(invalidReason(cometRow({ qAu: 0 }), DEFAULT_VALIDITY)).toBe('perihelion distance 0 is not positive');
   });
 });
+
+describe('fast path', () => {
+  it('agrees with the rule-by-rule check on random rows (property-based)', async () => {
+    const fc = (await import('fast-check')).default;
+    const { ruleByRule } = await import('../../src/clean/validate.js');
+    const num = fc.oneof(fc.double(), fc.double({ min: -5, max: 400, noNaN: true }), fc.constant(Number.NaN));
+    fc.assert(
+      fc.property(
+        fc.record({ e: num, aAu: num, qAu: num, iDeg: num, nodeDeg: num, periDeg: num, meanAnomalyDeg: num, H: num,
+          epochJdTT: fc.oneof(num, fc.constant(2_463_000.5)), designation: fc.oneof(fc.string(), fc.constant(' x')) }),
+        (o) => {
+          const row = asteroidRow(o);
+          return invalidReason(row, DEFAULT_VALIDITY) === ruleByRule(row, DEFAULT_VALIDITY);
+        },
+      ),
+      { numRuns: 5000 },
+    );
+  });
+});
