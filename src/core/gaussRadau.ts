@@ -213,8 +213,7 @@ export class GaussRadauIntegrator {
         if (dir * (ts - this.prevT) < 0) {
           throw new RangeError(`GaussRadau: sample times must be sorted inside the span; got ${ts}`);
         }
-        const o = 2 * n * next;
-        this.denseState(ts, sampleOut!.subarray(o, o + n), sampleOut!.subarray(o + n, o + 2 * n));
+        this.denseStateInto(ts, sampleOut!, 2 * n * next);
         next++;
       }
     }
@@ -229,16 +228,27 @@ export class GaussRadauIntegrator {
    */
   denseState(tJd: number, outX: Float64Array, outV: Float64Array): void {
     const dt = this.prevDt;
+    this.evalPolynomial(this.denseH(tJd), dt, this.prevX, this.prevV, this.prevA, this.prevB, outX, outV, 0, 0);
+  }
+
+  /** As denseState, writing x then v (2·dim numbers) to out[offset..]. */
+  denseStateInto(tJd: number, out: Float64Array, offset: number): void {
+    const dt = this.prevDt;
+    this.evalPolynomial(this.denseH(tJd), dt, this.prevX, this.prevV, this.prevA, this.prevB, out, out, offset, offset + this.dim);
+  }
+
+  private denseH(tJd: number): number {
+    const dt = this.prevDt;
     if (dt === 0) throw new RangeError('GaussRadau: no step taken yet');
     const h = (tJd - this.prevT) / dt;
     if (!(h >= -1e-12 && h <= 1 + 1e-12)) {
       throw new RangeError(`GaussRadau: time ${tJd} outside the last step [${this.prevT}, ${this.prevT + dt}]`);
     }
-    this.evalPolynomial(h, dt, this.prevX, this.prevV, this.prevA, this.prevB, outX, outV);
+    return h;
   }
 
   private evalPolynomial(h: number, dt: number, x0: Float64Array, v0: Float64Array, a0: Float64Array,
-    b: Float64Array, outX: Float64Array, outV: Float64Array): void {
+    b: Float64Array, outX: Float64Array, outV: Float64Array, ox: number, ov: number): void {
     const n = this.dim;
     const hdt = h * dt;
     const h2dt2 = hdt * hdt;
@@ -251,8 +261,8 @@ export class GaussRadauIntegrator {
       // v(h) = v0 + h dt [a0 + b0 h/2 + b1 h^2/3 + … + b6 h^7/8]
       const pv = ((((((b6 * 0.125 * h + b5 * (1 / 7)) * h + b4 * (1 / 6)) * h + b3 * 0.2) * h
         + b2 * 0.25) * h + b1 * (1 / 3)) * h + b0 * 0.5) * h + a0[i];
-      outX[i] = x0[i] + (hdt * v0[i] + h2dt2 * px);
-      outV[i] = v0[i] + hdt * pv;
+      outX[ox + i] = x0[i] + (hdt * v0[i] + h2dt2 * px);
+      outV[ov + i] = v0[i] + hdt * pv;
     }
   }
 
@@ -318,7 +328,7 @@ export class GaussRadauIntegrator {
       for (let iter = 0; iter < PC_MAX_ITERATIONS; iter++) {
         for (let s = 1; s < 8; s++) {
           const h = RADAU_SPACINGS[s];
-          this.evalPolynomial(h, dt, x, v, a0, b, xs, vs);
+          this.evalPolynomial(h, dt, x, v, a0, b, xs, vs, 0, 0);
           this.system.accel(t0 + (tc + h * dt), xs, vs, at);
           this.forceEvaluations++;
           this.updateCoefficients(s, at, a0, g, b, n);
