@@ -5,16 +5,6 @@
  * empirical p-values: Davison & Hinkley 1997, Bootstrap Methods, eq. 4.11).
  */
 
-/** Sorted copy (ascending) of the finite values of `values`. */
-export function sortedFinite(values: ArrayLike<number>): Float64Array {
-  let n = 0;
-  for (let k = 0; k < values.length; k++) if (Number.isFinite(values[k])) n++;
-  const out = new Float64Array(n);
-  let j = 0;
-  for (let k = 0; k < values.length; k++) if (Number.isFinite(values[k])) out[j++] = values[k];
-  return out.sort();
-}
-
 /** Number of entries of ascending `sorted` that are ≤ x. */
 export function countAtMost(sorted: Float64Array, x: number): number {
   let lo = 0;

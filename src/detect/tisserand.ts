@@ -30,7 +30,7 @@ import { PLANET_MEAN_A_AU, planetGmAu3PerDay2, GM_SUN_AU3_PER_DAY2, DEG_PER_RAD 
 import type { PlanetName } from '../core/constants.js';
 import { tisserandParameter } from '../core/tisserand.js';
 import { KIND_COMET, qualityNames, type Catalogue } from '../clean/types.js';
-import { lowerTailFraction, sortedFinite, upperTailFraction } from './empiricalTail.js';
+import { lowerTailFraction, upperTailFraction } from './empiricalTail.js';
 import type { Candidate, Detector, DetectorOptions, TisserandOptions } from './types.js';
 
 export const TISSERAND_DEFAULTS: Readonly<TisserandOptions> = {
@@ -75,17 +75,23 @@ export const tisserandDetector: Detector = {
     const n = cat.size;
     const t = new Float64Array(n).fill(NaN);
     const zones: TisserandZone[] = new Array(n);
-    const refAsteroid: number[] = [];
-    const refComet: number[] = [];
+    // Screened T values of each catalogue, collected in place, then sorted for calibration.
+    const refAsteroid = new Float64Array(n);
+    const refComet = new Float64Array(n);
+    let nAsteroid = 0;
+    let nComet = 0;
     progress?.start('tisserand', n);
     for (let k = 0; k < n; k++) {
       zones[k] = tisserandZone(opts.planet, cat.a[k], cat.q[k], cat.e[k], cat.i[k]);
       t[k] = tisserandParameter(aP, cat.q[k], cat.e[k], cat.i[k]);
-      if (screened(zones[k], opts)) (cat.kind[k] === KIND_COMET ? refComet : refAsteroid).push(t[k]);
+      if (screened(zones[k], opts) && Number.isFinite(t[k])) {
+        if (cat.kind[k] === KIND_COMET) refComet[nComet++] = t[k];
+        else refAsteroid[nAsteroid++] = t[k];
+      }
       if ((k & 0xffff) === 0) progress?.update(k);
     }
-    const sortedAsteroid = sortedFinite(refAsteroid);
-    const sortedComet = sortedFinite(refComet);
+    const sortedAsteroid = refAsteroid.subarray(0, nAsteroid).sort();
+    const sortedComet = refComet.subarray(0, nComet).sort();
     const out: Candidate[] = [];
     for (let k = 0; k < n; k++) {
       if (!screened(zones[k], opts)) continue;
