@@ -1,6 +1,7 @@
 /** The wayward command-line program: every command registered on one commander program. */
 import { Command } from 'commander';
 import { packageVersion } from './packageInfo.js';
+import { registerPropagate } from './propagate.js';
 import { registerScan } from './scan.js';
 
 export function buildProgram(): Command {
@@ -12,5 +13,6 @@ export function buildProgram(): Command {
     .exitOverride()
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   registerScan(program);
+  registerPropagate(program);
   return program;
 }
