@@ -1,59 +1,120 @@
-// The Earth–Moon barycentre integrated as a test body in the field of the Sun, the 1PN term
-// and the seven other planets from the core's VSOP87 ephemeris, against VSOP87 itself.
+// Planets integrated as test bodies in the field of the Sun, its 1PN term and the other
+// planets from the core's VSOP87 ephemeris, against VSOP87 itself over a century.
 // Outside check: VSOP87B (Bretagnon & Francou 1988, A&A 202, 309), an analytical theory fitted
 // to the numerical integration DE200; the core's ephemeris evaluates it (src/core/vsop87.ts).
 //
-// Expected size of the difference (why the bound is what it is): the theory is not the
-// solution of our equations. It was fitted to DE200 (other masses, asteroids included, full
-// relativistic N-body), it is truncated, and our initial state is its osculating state at one
-// instant, so its local error at J2000 becomes a slow drift. Measured: ~100–200 km over 30 yr,
-// no secular runaway. Without the 1PN term the same run drifts ~60 km/yr (the Sun's
-// Schwarzschild field changes the mean motion by ~3μ/(c²a) ≈ 3e-8; checked below), and
-// without the Earth–Moon mass in the central term (a test body feels G·M_sun, a planet's
-// heliocentric motion G(M_sun + m): Murray & Dermott 1999 eq. 6.8) ~6 000 km/yr (measured
-// while building this test, not re-run here).
-// Span: 30 years, not a century, because filling the Chebyshev cache from the full series
-// costs ~0.5 ms of series evaluation per day of span for these planets (test-time budget).
+// What is compared, and the expected size. The theory is not the solution of our equations:
+// it is truncated (its authors quote 1″ over four millennia for the inner planets, so errors
+// of ~1e-7 rad in a given century are within its budget), it was fitted to DE200 (other
+// masses, asteroids, full N-body relativity), and a planet's heliocentric equation has
+// G(M_sun + m) as central term (Murray & Dermott 1999, eq. 6.8; set through sunGm).
+//  1. Started from the series' osculating state at one instant, the run inherits the series'
+//     local error there (~1e-7 of the velocity): a drift of 50–250 km/yr that depends on the
+//     start date (measured while building this test for starts spread over ten years).
+//  2. So the honest comparison fits the six initial conditions to the series' positions over
+//     the whole century (least squares through the state transition matrix of the variational
+//     equations) and reports what no initial state can absorb: the dynamical mismatch. That is
+//     what is asserted, with the post-fit worst residual printed in km. Measured: Mars 23 km,
+//     the Earth–Moon barycentre 80 km (its series adds a lunar theory's offset to the Earth's).
 import { describe, expect, it } from 'vitest';
 import { createEphemeris } from '../../src/core/ephemeris.js';
 import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
 import { createTestBodyIntegrator } from '../../src/core/propagateTestBodies.js';
-import { GM_SUN_AU3_PER_DAY2, KM_PER_AU, planetGmAu3PerDay2, type PlanetName } from '../../src/core/constants.js';
+import { GM_SUN_AU3_PER_DAY2, KM_PER_AU, PLANETS, planetGmAu3PerDay2, type PlanetName } from '../../src/core/constants.js';
+import type { EphemerisBody } from '../../src/core/types.js';
 
 const J2000 = 2_451_545;
-const YEARS = 30;
+const YEARS = 100;
 const SPAN = 365.25 * YEARS;
-const PERTURBERS: PlanetName[] = ['mercury', 'venus', 'mars', 'jupiter', 'saturn', 'uranus', 'neptune'];
+const N_SAMPLES = 400;
+const eph = createEphemeris({ startJdTDB: J2000 - 1, endJdTDB: J2000 + SPAN + 1 });
+const times = Array.from({ length: N_SAMPLES }, (_, k) => J2000 + (SPAN * (k + 1)) / N_SAMPLES);
 
-describe('Earth–Moon barycentre as a test body vs VSOP87', () => {
-  const eph = createEphemeris({ startJdTDB: J2000 - 1, endJdTDB: J2000 + SPAN + 1 });
-  const s0 = new Float64Array(6);
-  new Vsop87Ephemeris().helioState('emb', J2000, s0, 0); // initial state from the series itself
-  const times = Array.from({ length: 120 }, (_, k) => J2000 + (SPAN * (k + 1)) / 120);
+interface Run { worstKm: number; endKm: number; partials: Float64Array; residuals: Float64Array }
 
-  function run(relativity: boolean, sunGm: number): { worstKm: number; endKm: number } {
-    const { integrator } = createTestBodyIntegrator({
-      epochJdTDB: J2000, states: s0, forces: { planets: PERTURBERS, ephemeris: eph, relativity, sunGm },
-    }, J2000 + SPAN);
-    const samples = new Float64Array(6 * times.length);
-    integrator.integrateTo(J2000 + SPAN, times, samples);
-    const ref = new Float64Array(6);
-    let worstKm = 0, endKm = 0;
-    for (let k = 0; k < times.length; k++) {
-      eph.helioState('emb', times[k], ref, 0);
-      const d = Math.hypot(samples[6 * k] - ref[0], samples[6 * k + 1] - ref[1], samples[6 * k + 2] - ref[2]) * KM_PER_AU;
-      worstKm = Math.max(worstKm, d);
-      endKm = d;
-    }
-    return { worstKm, endKm };
+/** Integrate `body` from state s0 with variational equations; residuals vs the series at the samples. */
+function run(body: EphemerisBody, planet: PlanetName, s0: Float64Array, relativity: boolean): Run {
+  const perturbers = PLANETS.filter((p) => p !== planet);
+  const { model, integrator } = createTestBodyIntegrator({
+    epochJdTDB: J2000, states: s0,
+    forces: { planets: perturbers, ephemeris: eph, relativity, variational: true, sunGm: GM_SUN_AU3_PER_DAY2 + planetGmAu3PerDay2(planet) },
+  }, J2000 + SPAN);
+  const dim = model.dim;
+  const samples = new Float64Array(2 * dim * N_SAMPLES);
+  integrator.integrateTo(J2000 + SPAN, times, samples);
+  const ref = new Float64Array(6);
+  const stm = new Float64Array(36);
+  const residuals = new Float64Array(3 * N_SAMPLES);
+  const partials = new Float64Array(18 * N_SAMPLES); // ∂r(t)/∂(r0, v0), 3×6 per sample
+  let worstKm = 0, endKm = 0;
+  for (let k = 0; k < N_SAMPLES; k++) {
+    const o = 2 * dim * k;
+    eph.helioState(body, times[k], ref, 0);
+    for (let i = 0; i < 3; i++) residuals[3 * k + i] = ref[i] - samples[o + i];
+    const d = Math.hypot(residuals[3 * k], residuals[3 * k + 1], residuals[3 * k + 2]) * KM_PER_AU;
+    worstKm = Math.max(worstKm, d);
+    endKm = d;
+    model.readVariations(0, samples.subarray(o, o + dim), samples.subarray(o + dim, o + 2 * dim), stm, null);
+    partials.set(stm.subarray(0, 18), 18 * k);
   }
+  return { worstKm, endKm, partials, residuals };
+}
 
-  it(`${YEARS} years: drift in km, with the 1PN term and the planet's own mass`, () => {
-    const full = run(true, GM_SUN_AU3_PER_DAY2 + planetGmAu3PerDay2('earth'));
-    console.log(`EMB vs VSOP87 over ${YEARS} yr: worst ${full.worstKm.toFixed(1)} km, at the end ${full.endKm.toFixed(1)} km`);
-    expect(full.worstKm).toBeLessThan(400);
-    const noPn = run(false, GM_SUN_AU3_PER_DAY2 + planetGmAu3PerDay2('earth'));
-    console.log(`  without 1PN: worst ${noPn.worstKm.toFixed(0)} km`);
-    expect(noPn.worstKm).toBeGreaterThan(5 * full.worstKm);
-  });
+/** One Gauss–Newton correction of the initial state (normal equations, columns scaled). */
+function correct(s0: Float64Array, r: Run): Float64Array {
+  const scale = [1, 1, 1, SPAN, SPAN, SPAN]; // velocity columns carry a factor of time
+  const n = new Float64Array(36), b = new Float64Array(6);
+  for (let k = 0; k < N_SAMPLES; k++) {
+    for (let i = 0; i < 3; i++) {
+      const row = 18 * k + 6 * i;
+      for (let p = 0; p < 6; p++) {
+        const jp = r.partials[row + p] * scale[p];
+        b[p] += jp * r.residuals[3 * k + i];
+        for (let q = 0; q < 6; q++) n[6 * p + q] += jp * r.partials[row + q] * scale[q];
+      }
+    }
+  }
+  // Gaussian elimination with partial pivoting (common practice) on the 6×6 system.
+  const a = Array.from({ length: 6 }, (_, p) => [...n.subarray(6 * p, 6 * p + 6), b[p]]);
+  for (let c = 0; c < 6; c++) {
+    let piv = c;
+    for (let rr = c + 1; rr < 6; rr++) if (Math.abs(a[rr][c]) > Math.abs(a[piv][c])) piv = rr;
+    [a[c], a[piv]] = [a[piv], a[c]];
+    for (let rr = c + 1; rr < 6; rr++) {
+      const f = a[rr][c] / a[c][c];
+      for (let q = c; q < 7; q++) a[rr][q] -= f * a[c][q];
+    }
+  }
+  const x = new Array(6).fill(0);
+  for (let c = 5; c >= 0; c--) {
+    let s = a[c][6];
+    for (let q = c + 1; q < 6; q++) s -= a[c][q] * x[q];
+    x[c] = s / a[c][c];
+  }
+  return Float64Array.from(s0, (v, p) => v + x[p] * scale[p]);
+}
+
+describe('planets as test bodies vs VSOP87 over a century', () => {
+  for (const [body, planet, boundKm] of [['emb', 'earth', 150], ['mars', 'mars', 60]] as const) {
+    it(`${body}: drift from the series' own state, then the post-fit residual in km`, () => {
+      let s0 = new Float64Array(6);
+      new Vsop87Ephemeris().helioState(body, J2000, s0, 0);
+      const first = run(body, planet, s0, true);
+      s0 = correct(s0, first);
+      const second = run(body, planet, s0, true);
+      s0 = correct(s0, second);
+      const fitted = run(body, planet, s0, true);
+      const noPn = run(body, planet, s0, false);
+      console.log(`${body} vs VSOP87, ${YEARS} yr: from the series' state worst ${first.worstKm.toFixed(0)} km; `
+        + `fitted initial state worst ${fitted.worstKm.toFixed(1)} km (end ${fitted.endKm.toFixed(1)} km); `
+        + `same without 1PN ${noPn.worstKm.toFixed(0)} km`);
+      // Post-fit: the dynamical mismatch only. Bound set from the measured value with margin
+      // (see the file comment for why it is not zero).
+      expect(fitted.worstKm).toBeLessThan(boundKm);
+      // The fit converged (a further correction changes nothing visible).
+      expect(fitted.worstKm).toBeLessThanOrEqual(second.worstKm * 1.01 + 0.1);
+      // The 1PN term is resolved: without it the fitted state cannot follow the series.
+      expect(noPn.worstKm).toBeGreaterThan(5 * fitted.worstKm);
+    });
+  }
 });
