@@ -1,6 +1,7 @@
 /**
  * Adaptive 15th-order Gauss–Radau integrator for second-order systems x'' = F(t, x, x').
  *
+ * Equation and section numbers below are from memory of the papers.
  * Method: Everhart 1985 (IAU Colloq. 83, pp. 185–202), implicit Runge–Kutta on Gauss–Radau
  * spacings with a predictor–corrector iterated to convergence, and the step-size control of
  * Rein & Spiegel 2015 (MNRAS 446, 1424; "IAS15") and its revision by Pham, Rein & Spiegel 2024:
@@ -310,61 +311,65 @@ export class GaussRadauIntegrator {
 
   /** One step attempt loop: repeats with smaller steps until one is accepted. */
   private step(dtWanted: number): number {
-    const n = this.dim;
-    const ne = this.errorDim;
-    const x = this.x, v = this.v, a0 = this.a0, b = this.b, g = this.g;
-    const xs = this.xs, vs = this.vs, at = this.at;
     let dt = dtWanted;
     let rejections = 0;
     const t0 = this.t;
     const tc = this.tComp;
-    this.system.accel(t0 + tc, x, v, a0);
+    this.system.accel(t0 + tc, this.x, this.v, this.a0);
     this.forceEvaluations++;
     for (;;) {
       this.predict(dt);
-      let pcError = Infinity;
-      let pcErrorLast = Infinity;
-      let converged = false;
-      for (let iter = 0; iter < PC_MAX_ITERATIONS; iter++) {
-        for (let s = 1; s < 8; s++) {
-          const h = RADAU_SPACINGS[s];
-          this.evalPolynomial(h, dt, x, v, a0, b, xs, vs, 0, 0);
-          this.system.accel(t0 + (tc + h * dt), xs, vs, at);
-          this.forceEvaluations++;
-          this.updateCoefficients(s, at, a0, g, b, n);
-        }
-        // Predictor–corrector convergence: |Δb6| / |F| at the last substep, bodies and
-        // variational components each against their own scale.
-        pcError = Math.max(ratio(this.lastDeltaB6, maxAbs(at, 0, ne)),
-          ratio(this.lastDeltaB6Var, maxAbs(at, ne, n)));
-        if (!(pcError >= 0)) {
-          throw new IntegrationError('non-finite acceleration in Gauss–Radau substeps', t0 + tc, dt);
-        }
-        if (pcError < PC_TOLERANCE) { converged = true; break; }
-        if (iter > 2 && pcError >= pcErrorLast) { converged = true; break; }
-        pcErrorLast = pcError;
-      }
+      const converged = this.iterateCorrector(t0, tc, dt);
       let dtNew = this.stepControl === 'b6-ratio' ? this.nextStepB6(dt) : this.nextStepDerivatives(dt);
       if (!Number.isFinite(dtNew)) {
         throw new IntegrationError('non-finite error estimate in Gauss–Radau step', t0 + tc, dt);
       }
       if (Math.abs(dtNew) > Math.abs(dt) / SAFETY) dtNew = dt / SAFETY;
-      if (!converged || Math.abs(dtNew) < SAFETY * Math.abs(dt)) {
-        // Reject: redo with the smaller step (halve when the corrector did not converge).
-        this.rejectedSteps++;
-        if (++rejections > MAX_REJECTIONS_IN_A_ROW) {
-          throw new IntegrationError(`integration could not meet tolerance after ${rejections} rejected steps`, t0 + tc, dt);
-        }
-        dt = converged ? dtNew : 0.5 * dt;
-        if (Math.abs(dt) < this.minStep) {
-          throw new IntegrationError('integration could not meet tolerance', t0 + tc, dt);
-        }
-        continue;
+      if (converged && Math.abs(dtNew) >= SAFETY * Math.abs(dt)) {
+        this.accept(dt, tc);
+        this.dtNext = Math.abs(dtNew);
+        return dt;
       }
-      this.accept(dt, tc);
-      this.dtNext = Math.abs(dtNew);
-      return dt;
+      // Reject: redo with the smaller step (halve when the corrector did not converge).
+      this.rejectedSteps++;
+      if (++rejections > MAX_REJECTIONS_IN_A_ROW) {
+        throw new IntegrationError(`integration could not meet tolerance after ${rejections} rejected steps`, t0 + tc, dt);
+      }
+      dt = converged ? dtNew : 0.5 * dt;
+      if (Math.abs(dt) < this.minStep) {
+        throw new IntegrationError('integration could not meet tolerance', t0 + tc, dt);
+      }
     }
+  }
+
+  /**
+   * Predictor–corrector sweeps over the seven substeps until |Δb6| / |F| at the last substep
+   * is below 1e-16 or stops decreasing (Rein & Spiegel 2015 sec. 2.5), bodies and variational
+   * components each against their own scale. Returns false when 12 sweeps did not settle.
+   */
+  private iterateCorrector(t0: number, tc: number, dt: number): boolean {
+    const n = this.dim, ne = this.errorDim;
+    const x = this.x, v = this.v, a0 = this.a0, b = this.b, g = this.g;
+    const xs = this.xs, vs = this.vs, at = this.at;
+    let pcErrorLast = Infinity;
+    for (let iter = 0; iter < PC_MAX_ITERATIONS; iter++) {
+      for (let s = 1; s < 8; s++) {
+        const h = RADAU_SPACINGS[s];
+        this.evalPolynomial(h, dt, x, v, a0, b, xs, vs, 0, 0);
+        this.system.accel(t0 + (tc + h * dt), xs, vs, at);
+        this.forceEvaluations++;
+        this.updateCoefficients(s, at, a0, g, b, n);
+      }
+      const pcError = Math.max(ratio(this.lastDeltaB6, maxAbs(at, 0, ne)),
+        ratio(this.lastDeltaB6Var, maxAbs(at, ne, n)));
+      if (!(pcError >= 0)) {
+        throw new IntegrationError('non-finite acceleration in Gauss–Radau substeps', t0 + tc, dt);
+      }
+      if (pcError < PC_TOLERANCE) return true;
+      if (iter > 2 && pcError >= pcErrorLast) return true;
+      pcErrorLast = pcError;
+    }
+    return false;
   }
 
   /**
