@@ -9,7 +9,7 @@
 import { GM_SUN_AU3_PER_DAY2, PLANETS, planetGmAu3PerDay2 } from './constants.js';
 import type { Ephemeris } from './types.js';
 import { EphemerisCache } from './ephemerisCache.js';
-import type { CacheVelocityMode, ChebyshevLayout } from './ephemerisCache.js';
+import type { CacheFillMethod, CacheVelocityMode, ChebyshevLayout } from './ephemerisCache.js';
 import { Vsop87Ephemeris } from './vsop87Ephemeris.js';
 
 export interface CreateEphemerisOptions {
@@ -22,9 +22,20 @@ export interface CreateEphemerisOptions {
   layouts?: readonly ChebyshevLayout[];
   /** Fit every segment now instead of at first touch (default false). */
   eager?: boolean;
+  /** How segments are fitted; default 'bulk' when the source offers it (EphemerisCacheOptions). */
+  fill?: CacheFillMethod;
+  /**
+   * Bulk fill: worst-case bound (au) of left-out series terms; default
+   * DEFAULT_FIT_TOLERANCE_AU (1e-10), or DYNAMICS_FIT_TOLERANCE_AU (1e-8) for dynamics.
+   */
+  fitToleranceAu?: number;
 }
 
-/** A cached planetary ephemeris over [startJdTDB, endJdTDB]. */
+/**
+ * A cached planetary ephemeris over [startJdTDB, endJdTDB]. Segments are fitted at first
+ * touch; a long integration should call `prefill(start, end, PLANET_SYSTEM_BODIES)` (or pass
+ * `eager`) first: a bulk fill of 1 000 years of those eight bodies takes a few seconds.
+ */
 export function createEphemeris(opts: CreateEphemerisOptions): EphemerisCache {
   const source = opts.source ?? new Vsop87Ephemeris();
   const cache = new EphemerisCache(source, {
@@ -32,6 +43,8 @@ export function createEphemeris(opts: CreateEphemerisOptions): EphemerisCache {
     endJdTDB: opts.endJdTDB,
     velocity: opts.velocity,
     layouts: opts.layouts,
+    fill: opts.fill,
+    fitToleranceAu: opts.fitToleranceAu,
   });
   if (opts.eager === true) cache.fillAll();
   return cache;

@@ -8,6 +8,12 @@ import type { EphemerisBody } from './types.js';
 /** Bodies an Ephemeris answers for, in index order: the eight planets, then 'emb'. */
 export const EPHEMERIS_BODIES: readonly EphemerisBody[] = [...PLANETS, 'emb'];
 
+/**
+ * The eight planet systems as the dynamics reads them: the planets with the Earth–Moon
+ * barycentre in place of the Earth (sunBarycentricState, the force model).
+ */
+export const PLANET_SYSTEM_BODIES: readonly EphemerisBody[] = PLANETS.map((p) => (p === 'earth' ? 'emb' : p));
+
 const INDEX: ReadonlyMap<string, number> = new Map(EPHEMERIS_BODIES.map((b, k) => [b, k]));
 
 /** Index of `body` in EPHEMERIS_BODIES; TypeError for anything else. */

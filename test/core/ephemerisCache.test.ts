@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { KM_PER_AU } from '../../src/core/constants.js';
 import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
-import { DEFAULT_CHEBYSHEV_LAYOUTS, EphemerisCache } from '../../src/core/ephemerisCache.js';
-import type { CacheVelocityMode } from '../../src/core/ephemerisCache.js';
+import { CACHE_FILL_CHUNK, DEFAULT_CHEBYSHEV_LAYOUTS, EphemerisCache } from '../../src/core/ephemerisCache.js';
+import type { CacheFillMethod, CacheVelocityMode } from '../../src/core/ephemerisCache.js';
 import { createEphemeris, sunBarycentricState } from '../../src/core/ephemeris.js';
 import { EPHEMERIS_BODIES } from '../../src/core/ephemerisBody.js';
 import type { Ephemeris, EphemerisBody } from '../../src/core/types.js';
@@ -12,8 +12,8 @@ const source = new Vsop87Ephemeris();
 const MM_PER_S_PER_AU_PER_DAY = (KM_PER_AU * 1e6) / 86_400;
 
 /** Worst position (au) and velocity (au/day) difference, cache vs direct, per body. */
-function compare(mode: CacheVelocityMode, datesPerBody: number, seed: number) {
-  const cache = new EphemerisCache(source, { startJdTDB: JD_1900, endJdTDB: JD_2100, velocity: mode });
+function compare(mode: CacheVelocityMode, datesPerBody: number, seed: number, fill: CacheFillMethod = 'bulk') {
+  const cache = new EphemerisCache(source, { startJdTDB: JD_1900, endJdTDB: JD_2100, velocity: mode, fill });
   const a = new Float64Array(6);
   const d = new Float64Array(6);
   const rows: Array<{ body: EphemerisBody; pos: number; vel: number }> = [];
@@ -29,7 +29,7 @@ function compare(mode: CacheVelocityMode, datesPerBody: number, seed: number) {
     rows.push({ body, pos, vel });
   }
   const text = rows.map((r) => `${r.body} ${(r.pos * KM_PER_AU * 1000).toFixed(2)} m / ${(r.vel * MM_PER_S_PER_AU_PER_DAY).toFixed(3)} mm/s`);
-  console.log(`cache ('${mode}' velocities) vs direct VSOP87, 1900–2100, worst position / velocity: ${text.join(', ')}`);
+  console.log(`cache ('${mode}' velocities, '${fill}' fill) vs direct VSOP87, 1900–2100, worst position / velocity: ${text.join(', ')}`);
   return rows;
 }
 
@@ -38,6 +38,14 @@ describe('Chebyshev cache over the direct series, 200-year span', () => {
     // Reference: the direct VSOP87B/ELP series (this project), itself checked against the
     // published VSOP87 check values and astronomia in ephemerisVsop87.test.ts.
     for (const r of compare('derivative', 60, 31)) {
+      expect(r.pos).toBeLessThan(1e-9);
+      expect(r.vel).toBeLessThan(1e-9);
+    }
+  });
+
+  it("agrees to ≤ 1e-9 au and ≤ 1e-9 au/day when fitted by sampling the series at the nodes ('nodes')", () => {
+    // The reference fill path: every node is one evaluation of the direct series.
+    for (const r of compare('derivative', 12, 36, 'nodes')) {
       expect(r.pos).toBeLessThan(1e-9);
       expect(r.vel).toBeLessThan(1e-9);
     }
@@ -76,17 +84,25 @@ describe('Chebyshev cache over the direct series, 200-year span', () => {
     expect(worst).toBeLessThan(1e-10);
   });
 
-  it('fits lazily: one query fits one segment; fillAll fits the rest', () => {
-    const cache = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_451_400 });
-    const out = new Float64Array(6);
-    expect(cache.fittedSegmentCount).toBe(0);
-    cache.helioState('jupiter', 2_451_100, out);
-    cache.helioState('jupiter', 2_451_101, out);
-    expect(cache.fittedSegmentCount).toBe(1);
-    cache.fillAll();
+  it("fits lazily: with 'nodes' one query fits one segment, with 'bulk' its run of CACHE_FILL_CHUNK; fillAll fits the rest", () => {
     // 400 days cut into equal segments no longer than each body's nominal length.
     const expected = DEFAULT_CHEBYSHEV_LAYOUTS.reduce((n, l) => n + Math.ceil(400 / l.segmentDays), 0);
-    expect(cache.fittedSegmentCount).toBe(expected);
+    const out = new Float64Array(6);
+    const nodes = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_451_400, fill: 'nodes' });
+    expect(nodes.fittedSegmentCount).toBe(0);
+    nodes.helioState('jupiter', 2_451_100, out);
+    nodes.helioState('jupiter', 2_451_101, out);
+    expect(nodes.fittedSegmentCount).toBe(1);
+    nodes.fillAll();
+    expect(nodes.fittedSegmentCount).toBe(expected);
+
+    // Jupiter: 48-day segments, so 400 days hold 9 (< CACHE_FILL_CHUNK): one run fits them all.
+    const bulk = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_451_400 });
+    expect(bulk.fill).toBe('bulk');
+    bulk.helioState('jupiter', 2_451_100, out);
+    expect(bulk.fittedSegmentCount).toBe(Math.min(CACHE_FILL_CHUNK, Math.ceil(400 / DEFAULT_CHEBYSHEV_LAYOUTS[4].segmentDays)));
+    bulk.fillAll();
+    expect(bulk.fittedSegmentCount).toBe(expected);
   });
 });
 
