@@ -29,6 +29,9 @@ import { addNonGravAcceleration, NONGRAV_SCRATCH } from './nonGrav.js';
 import type { NonGravLaw } from './nonGravLaw.js';
 import { addRadiationPressure } from './radiationPressure.js';
 
+/** Distinct times whose planet states are kept (the eight substep times of a step). */
+const PLANET_SLOTS = 8;
+
 /** Number of per-body parameters: A1, A2, A3, A/m. */
 export const PARAMS_PER_BODY = 4;
 /** Deviation vectors per body when variational equations are on: 6 STM columns + 4 params. */
@@ -74,7 +77,12 @@ export class TestBodyForceModel implements SecondOrderSystem {
   private readonly partials = new Float64Array(3 * PARAMS_PER_BODY);
   private readonly scratch = new Float64Array(NONGRAV_SCRATCH);
   private readonly indirect = new Float64Array(3);
-  private lastPlanetTime = NaN;
+  // Planet states and indirect terms at the last PLANET_SLOTS distinct times: the
+  // predictor–corrector revisits the same eight substep times 2–12 times per step.
+  private readonly slotTimes = new Float64Array(PLANET_SLOTS).fill(NaN);
+  private readonly slotStates: Float64Array;
+  private readonly slotIndirect = new Float64Array(3 * PLANET_SLOTS);
+  private nextSlot = 0;
 
   constructor(nBodies: number, params: Float64Array | null, options: ForceModelOptions = {}) {
     if (!Number.isInteger(nBodies) || nBodies < 1) throw new RangeError(`force model: bad body count ${nBodies}`);
@@ -91,6 +99,7 @@ export class TestBodyForceModel implements SecondOrderSystem {
     this.planetBodies = this.planets.map((p) => (p === 'earth' ? 'emb' : p));
     this.planetGm = Float64Array.from(this.planets.map((p) => planetGmAu3PerDay2(p)));
     this.planetStates = new Float64Array(6 * this.planets.length);
+    this.slotStates = new Float64Array(PLANET_SLOTS * 6 * this.planets.length);
     this.relativity = options.relativity ?? false;
     this.law = options.nonGravLaw ?? 'comet-water';
     this.cr = options.radiationPressureCoefficient ?? 1;
@@ -116,11 +125,22 @@ export class TestBodyForceModel implements SecondOrderSystem {
     }
   }
 
-  /** Evaluate the planets once for time t (shared by all bodies and the indirect term). */
+  /**
+   * Planet states and the indirect term at time t into planetStates / indirect: from the
+   * slot cache when t was seen among the last PLANET_SLOTS times, else from the ephemeris
+   * (all planets once per time, shared by all bodies).
+   */
   private updatePlanets(tJd: number): void {
-    if (tJd === this.lastPlanetTime) return;
     const ps = this.planetStates;
     const ind = this.indirect;
+    const block = 6 * this.planetBodies.length;
+    for (let k = 0; k < PLANET_SLOTS; k++) {
+      if (this.slotTimes[k] === tJd) {
+        ps.set(this.slotStates.subarray(k * block, (k + 1) * block));
+        ind[0] = this.slotIndirect[3 * k]; ind[1] = this.slotIndirect[3 * k + 1]; ind[2] = this.slotIndirect[3 * k + 2];
+        return;
+      }
+    }
     ind[0] = 0; ind[1] = 0; ind[2] = 0;
     for (let j = 0; j < this.planetBodies.length; j++) {
       this.eph!.helioState(this.planetBodies[j], tJd, ps, 6 * j);
@@ -129,7 +149,11 @@ export class TestBodyForceModel implements SecondOrderSystem {
       const f = this.planetGm[j] / (r2 * Math.sqrt(r2));
       ind[0] -= f * x; ind[1] -= f * y; ind[2] -= f * z;
     }
-    this.lastPlanetTime = tJd;
+    const k = this.nextSlot;
+    this.nextSlot = (k + 1) % PLANET_SLOTS;
+    this.slotTimes[k] = tJd;
+    this.slotStates.set(ps, k * block);
+    this.slotIndirect[3 * k] = ind[0]; this.slotIndirect[3 * k + 1] = ind[1]; this.slotIndirect[3 * k + 2] = ind[2];
   }
 
   accel(tJd: number, x: Float64Array, v: Float64Array, out: Float64Array): void {
