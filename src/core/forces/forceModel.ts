@@ -136,7 +136,8 @@ export class TestBodyForceModel implements SecondOrderSystem {
     const block = 6 * this.planetBodies.length;
     for (let k = 0; k < PLANET_SLOTS; k++) {
       if (this.slotTimes[k] === tJd) {
-        ps.set(this.slotStates.subarray(k * block, (k + 1) * block));
+        const ss = this.slotStates;
+        for (let i = 0, o = k * block; i < block; i++) ps[i] = ss[o + i];
         ind[0] = this.slotIndirect[3 * k]; ind[1] = this.slotIndirect[3 * k + 1]; ind[2] = this.slotIndirect[3 * k + 2];
         return;
       }
