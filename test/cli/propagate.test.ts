@@ -9,9 +9,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import * as Astronomy from 'astronomy-engine';
-import { InvalidArgumentError } from 'commander';
+import { Command, CommanderError, InvalidArgumentError } from 'commander';
 import {
-  parseDateToJdTDB, parseElements, propagateOne, PropagateInputError, PropagateUsageError, runPropagate,
+  parseDateToJdTDB, parseElements, propagateOne, PropagateInputError, PropagateUsageError, registerPropagate, runPropagate,
   type PropagateOptions,
 } from '../../src/cli/propagate.js';
 import { GM_SUN_AU3_PER_DAY2, J2000_JD, KM_PER_AU } from '../../src/core/constants.js';
@@ -136,5 +136,56 @@ describe('propagate: bad input is refused at the boundary', () => {
       .rejects.toThrow(/outside the planetary ephemeris span JD 2086295–2816795/);
     await expect(propagateOne(opts({ elements: el, toJdTDB: 2462502.5, designation: 'x' })))
       .rejects.toThrow(PropagateUsageError);
+  });
+});
+
+describe('propagate: the registered command and its exit codes', () => {
+  /** Parse argv with the command registered on a fresh program; capture what it writes. */
+  async function parse(args: string[]): Promise<{ error: unknown; stdout: string; stderr: string; exitCode: unknown }> {
+    const program = new Command().exitOverride().configureOutput({ writeErr: () => {}, writeOut: () => {} });
+    registerPropagate(program);
+    let stdout = '', stderr = '';
+    const out = process.stdout.write, err = process.stderr.write;
+    const before = process.exitCode;
+    process.stdout.write = ((s: string) => { stdout += s; return true; }) as typeof process.stdout.write;
+    process.stderr.write = ((s: string) => { stderr += s; return true; }) as typeof process.stderr.write;
+    let error: unknown;
+    try {
+      await program.parseAsync(['node', 'wayward', 'propagate', ...args]);
+    } catch (e) {
+      error = e;
+    } finally {
+      process.stdout.write = out;
+      process.stderr.write = err;
+    }
+    const exitCode = process.exitCode;
+    process.exitCode = before;
+    return { error, stdout, stderr, exitCode };
+  }
+
+  it('prints the propagation (exit 0)', async () => {
+    const r = await parse(['--elements', CERES, '--to', '2030-01-01', '--format', 'json']);
+    expect(r.error).toBeUndefined();
+    const j = JSON.parse(r.stdout);
+    expect(j.semimajor.aAu).toBeCloseTo(2.7655526, 9); // two-body: a is unchanged
+  });
+
+  it('bad elements and out-of-span dates are commander usage errors (exit 2 in main)', async () => {
+    const bad = await parse(['--elements', 'a=2.7,e=oops,i=1,node=1,peri=1,M=1,epoch=2461200.5', '--to', '2030-01-01']);
+    expect(bad.error).toBeInstanceOf(CommanderError);
+    expect((bad.error as CommanderError).code).toBe('commander.invalidArgument');
+    const span = await parse(['--elements', CERES, '--to', '3500-01-01', '--nbody']);
+    expect(span.error).toBeInstanceOf(CommanderError);
+    expect((span.error as CommanderError).exitCode).toBe(2);
+    expect((span.error as CommanderError).message).toMatch(/outside the planetary ephemeris span/);
+    const noTo = await parse(['--elements', CERES]);
+    expect(noTo.error).toBeInstanceOf(CommanderError);
+  });
+
+  it('an unreadable catalogue sets exit code 1 with one line on stderr', async () => {
+    const r = await parse(['(1) Ceres', '--catalogue', '/nonexistent/orbits.txt', '--to', '2030-01-01']);
+    expect(r.error).toBeUndefined();
+    expect(r.exitCode).toBe(1);
+    expect(r.stderr).toMatch(/^wayward: .*orbits\.txt.*\n$/);
   });
 });
