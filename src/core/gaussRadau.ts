@@ -414,9 +414,11 @@ export class GaussRadauIntegrator {
         y4 += d2 * d2;
       }
       const tau2 = (2 * y2) / (y3 + Math.sqrt(y4 * y2)); // in units of dt²
-      if (tau2 < minTau2 || tau2 !== tau2) minTau2 = tau2;
+      // Bodies with no usable timescale (0/0, or no force variation) do not vote; non-finite
+      // forces were already caught by the corrector.
+      if (tau2 > 0 && tau2 < minTau2) minTau2 = tau2;
     }
-    if (minTau2 === Infinity || minTau2 === 0) return dt / SAFETY;
+    if (minTau2 === Infinity) return dt / SAFETY;
     return Math.sqrt(minTau2) * dt * this.stepFactor;
   }
 
