@@ -104,6 +104,10 @@ export class TestBodyForceModel implements SecondOrderSystem {
     this.law = options.nonGravLaw ?? 'comet-water';
     this.cr = options.radiationPressureCoefficient ?? 1;
     this.sunGm = options.sunGm ?? GM_SUN_AU3_PER_DAY2;
+    if (!(this.sunGm > 0 && Number.isFinite(this.sunGm))) throw new RangeError(`force model: bad sunGm ${this.sunGm}`);
+    this.planets.forEach((p, j) => {
+      if (!(this.planetGm[j] > 0)) throw new RangeError(`force model: unknown planet '${p}'`);
+    });
     if (!(this.cr >= 0) || !Number.isFinite(this.cr)) throw new RangeError(`force model: bad C_R ${this.cr}`);
     this.params = new Float64Array(PARAMS_PER_BODY * nBodies);
     if (params !== null) {
