@@ -15,6 +15,8 @@
  * A header that lacks the required columns (./columnMap.ts missingRequired) or a mapping
  * naming a header the file lacks → UnreadableInputError for the whole file.
  */
+import { once } from 'node:events';
+import { finished } from 'node:stream/promises';
 import { parse, type Options, type Parser } from 'csv-parse';
 import { checkColumnMapping, mapColumns, missingRequired, type ColumnIndex, type ColumnMapping } from './columnMap.js';
 import { parseCsvRecord, type RecordContext } from './csvRecord.js';
@@ -85,7 +87,12 @@ export class CsvTableReader {
     if (this.batch.length > 0 && this.parser !== null) {
       const text = this.batch.join('\n') + '\n';
       this.batch = [];
-      if (!this.parser.write(text)) await new Promise((resolve) => this.parser!.once('drain', resolve));
+      // wait for room; events.once rejects if the parser fails meanwhile (no hang)
+      if (!this.parser.write(text) && !this.parser.destroyed) {
+        await once(this.parser, 'drain').catch((err: Error) => {
+          this.fatal ??= err;
+        });
+      }
     }
     if (this.fatal) throw this.fatal;
   }
@@ -94,13 +101,13 @@ export class CsvTableReader {
   async finish(): Promise<CsvCounts> {
     await this.flush();
     if (this.parser !== null) {
-      const done = new Promise<void>((resolve, reject) => {
-        this.parser!.on('end', resolve);
-        this.parser!.on('error', reject);
+      const parser = this.parser;
+      parser.end();
+      parser.resume();
+      // resolves on 'end', rejects on an error even if it was emitted already
+      await finished(parser).catch((err: Error) => {
+        this.fatal ??= err;
       });
-      this.parser.end();
-      this.parser.resume();
-      await done;
     }
     if (this.fatal) throw this.fatal;
     this.claim(Infinity, 'not part of any record: an unterminated quoted field runs to the end of the file');
@@ -118,8 +125,10 @@ export class CsvTableReader {
     };
     const parser = parse(options);
     parser.on('skip', (err: CsvError) => this.claim(err.lines ?? Infinity, `malformed CSV: ${err.message}`));
-    parser.on('error', (err) => {
-      this.fatal ??= new UnreadableInputError(this.file, `CSV parser failed: ${err.message}`);
+    parser.on('error', (err: Error & { code?: string }) => {
+      // the parser's own failures name the file; anything else (a callback that threw) is
+      // passed on as it is
+      this.fatal ??= err.code?.startsWith('CSV_') ? new UnreadableInputError(this.file, `CSV parser failed: ${err.message}`) : err;
     });
     return parser;
   }

@@ -162,6 +162,12 @@ describe('bad rows and bad headers', () => {
     await expect(read(p, { columns: { colour: 'x' } as never })).rejects.toThrow(RangeError);
   });
 
+  it('an exception from the row callback reaches the caller unchanged', async () => {
+    const p = temp('throwing.csv', [header, good('A'), good('B')].join('\n') + '\n');
+    const boom = new TypeError('consumer failed');
+    await expect(readOrbitFile(p, {}, () => { throw boom; }, () => {})).rejects.toBe(boom);
+  });
+
   it('a bad cell names the line, the column header and the text', async () => {
     const p = temp('cell.csv', [header, 'X,2461200.5,0.1,2.5,three,40,50,60'].join('\n') + '\n');
     const { rejects } = await read(p);
