@@ -60,6 +60,11 @@ describe('real samples', () => {
       'notes.txt', 'cannot tell the format from the first lines (no CSV header, no fixed-width orbit or comet lines); name the format explicitly'));
   });
 
+  it('an exception from the row callback reaches the caller unchanged (and the file is closed)', async () => {
+    const boom = new TypeError('consumer failed');
+    await expect(readOrbitFile(temp(ORBITS), {}, () => { throw boom; }, () => {})).rejects.toBe(boom);
+  });
+
   it('empty file: zero rows, no error', async () => {
     const { summary } = await read(temp(''));
     expect(summary).toMatchObject({ linesRead: 0, rows: 0, rejected: 0, skipped: 0, lines: 0 });
