@@ -11,10 +11,12 @@ import { base62Encode, base62Value } from './base62.js';
 import { PackedFormError } from './errors.js';
 import { packCenturyYear, unpackCenturyYear } from './packedProvisional.js';
 
-/** Days per month in a common year and in a leap year (Gregorian rule, common practice). */
+const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+
+/** Days in a month, February by the Gregorian leap-year rule (common practice). */
 function daysInMonth(year: number, month: number): number {
   if (month === 2) return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28;
-  return [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1];
+  return DAYS_IN_MONTH[month - 1];
 }
 
 /**

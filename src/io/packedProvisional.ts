@@ -18,6 +18,7 @@
  * turns that into a PackedFormError with a reason.
  */
 import { base62Decode, base62Encode, base62Value } from './base62.js';
+import { parseDigits } from './fixedField.js';
 
 /** Letters of the half-month code and of the second letter: A..Z without I (25 letters). */
 const LETTERS_NO_I = 'ABCDEFGHJKLMNOPQRSTUVWXYZ';
@@ -47,8 +48,9 @@ function isDigits(text: string, start: number, length: number): boolean {
 /** Year from a century letter I..L and two digits at `start`; NaN if not that form. */
 export function unpackCenturyYear(packed: string, start: number): number {
   const c = packed.charCodeAt(start);
-  if (c < 73 || c > 76 || !isDigits(packed, start + 1, 2)) return NaN; // 'I'..'L'
-  return (base62Value(c) * 100) + Number(packed.slice(start + 1, start + 3));
+  const yy = parseDigits(packed, start + 1, start + 3);
+  if (c < 73 || c > 76 || yy < 0) return NaN; // 'I'..'L'
+  return base62Value(c) * 100 + yy;
 }
 
 /** Century letter + two digits of a year 1800..2199, or '' when outside that range. */
