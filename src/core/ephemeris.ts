@@ -9,7 +9,7 @@
 import { GM_SUN_AU3_PER_DAY2, PLANETS, planetGmAu3PerDay2 } from './constants.js';
 import type { Ephemeris } from './types.js';
 import { EphemerisCache } from './ephemerisCache.js';
-import type { CacheFillMethod, CacheVelocityMode, ChebyshevLayout } from './ephemerisCache.js';
+import type { CacheFillChoice, CacheVelocityMode, ChebyshevLayout } from './ephemerisCache.js';
 import { Vsop87Ephemeris } from './vsop87Ephemeris.js';
 
 export interface CreateEphemerisOptions {
@@ -22,8 +22,8 @@ export interface CreateEphemerisOptions {
   layouts?: readonly ChebyshevLayout[];
   /** Fit every segment now instead of at first touch (default false). */
   eager?: boolean;
-  /** How segments are fitted; default 'bulk' when the source offers it (EphemerisCacheOptions). */
-  fill?: CacheFillMethod;
+  /** How segments are fitted; default 'auto' (CacheFillChoice in ephemerisCache.ts). */
+  fill?: CacheFillChoice;
   /**
    * Bulk fill: worst-case bound (au) of left-out series terms; default
    * DEFAULT_FIT_TOLERANCE_AU (1e-10), or DYNAMICS_FIT_TOLERANCE_AU (1e-8) for dynamics.

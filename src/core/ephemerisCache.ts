@@ -10,8 +10,9 @@
  * the eight planet systems in ≈ 6 s on one core instead of ≈ 330 s). Other sources are
  * sampled at the nodes ('nodes', also available for the series as the reference path).
  * Segments are fitted lazily at first touch, in runs of CACHE_FILL_CHUNK segments with
- * 'bulk' (one run costs about what one segment costs by node sampling), so short uses of a
- * long span pay only for what they read; `prefill(start, end, bodies)` fits a range up front
+ * 'bulk' (a run of 64 Mercury segments costs ≈ 8 ms, one segment by node sampling ≈ 6 ms;
+ * measured), so short uses of a long span pay only for what they read; short spans use node
+ * sampling by default ('auto', CacheFillChoice); `prefill(start, end, bodies)` fits a range up front
  * for long integrations, `fillAll()` everything. Runs start at fixed segment indices, so the
  * coefficients do not depend on the order or way of filling (tested bit for bit).
  *
@@ -73,6 +74,15 @@ export type CacheVelocityMode = 'derivative' | 'fitted';
 export type CacheFillMethod = 'bulk' | 'nodes';
 
 /**
+ * 'auto' (the default): per body, 'bulk' when the source offers it and the body has more
+ * than one run of CACHE_FILL_CHUNK segments in the span, else 'nodes'. The bulk fill has a
+ * set-up cost per body (planning which series terms and coefficients to keep: 5–80 ms,
+ * measured) that only pays when more than one run is used; the choice depends on the span
+ * and layouts alone, never on the order of queries.
+ */
+export type CacheFillChoice = CacheFillMethod | 'auto';
+
+/**
  * Default bound (au) on what the bulk fill may leave out of the series, summed worst-case
  * over every dropped coefficient: with the layouts' own fit error (≤ 1.3e-11 au) the cache
  * stays within 1e-9 au of the direct series (measured per body in ephemerisCacheFill.test.ts).
@@ -98,8 +108,8 @@ export interface EphemerisCacheOptions {
   velocity?: CacheVelocityMode;
   /** Per-body layouts indexed like EPHEMERIS_BODIES; defaults to DEFAULT_CHEBYSHEV_LAYOUTS. */
   layouts?: readonly ChebyshevLayout[];
-  /** Default 'bulk' when the source offers it, else 'nodes'. */
-  fill?: CacheFillMethod;
+  /** Default 'auto' (see CacheFillChoice). */
+  fill?: CacheFillChoice;
   /** Bulk fill only: worst-case bound (au) of left-out series terms; default DEFAULT_FIT_TOLERANCE_AU. */
   fitToleranceAu?: number;
 }
@@ -119,10 +129,12 @@ export class EphemerisCache implements Ephemeris {
   readonly startJdTDB: number;
   readonly endJdTDB: number;
   readonly velocity: CacheVelocityMode;
-  readonly fill: CacheFillMethod;
+  readonly fill: CacheFillChoice;
   readonly fitToleranceAu: number;
   private readonly tables: BodyTable[];
   private readonly fitters: Array<SegmentFitter | null>;
+  /** Fill method per body (resolved from `fill`). */
+  private readonly methods: CacheFillMethod[];
   private readonly nodeStates: Float64Array;
   private segmentsFitted = 0;
 
@@ -149,9 +161,9 @@ export class EphemerisCache implements Ephemeris {
       throw new RangeError(`EphemerisCache: need ${EPHEMERIS_BODIES.length} layouts, got ${layouts.length}`);
     }
     this.tables = layouts.map((l) => this.makeTable(l));
-    this.fill = opts.fill ?? (hasSegmentFitter(source) ? 'bulk' : 'nodes');
-    if (this.fill !== 'bulk' && this.fill !== 'nodes') {
-      throw new TypeError(`EphemerisCache: fill must be 'bulk' or 'nodes', got '${String(this.fill)}'`);
+    this.fill = opts.fill ?? 'auto';
+    if (this.fill !== 'bulk' && this.fill !== 'nodes' && this.fill !== 'auto') {
+      throw new TypeError(`EphemerisCache: fill must be 'auto', 'bulk' or 'nodes', got '${String(this.fill)}'`);
     }
     if (this.fill === 'bulk' && !hasSegmentFitter(source)) {
       throw new TypeError(`EphemerisCache: source '${source.name}' cannot fit segments in bulk; use fill 'nodes'`);
@@ -161,6 +173,9 @@ export class EphemerisCache implements Ephemeris {
       throw new RangeError(`EphemerisCache: fitToleranceAu must be a finite number ≥ 0, got ${this.fitToleranceAu}`);
     }
     this.fitters = this.tables.map(() => null);
+    const bulkable = hasSegmentFitter(source);
+    this.methods = this.tables.map((t) => (this.fill === 'auto'
+      ? (bulkable && t.segmentCount > CACHE_FILL_CHUNK ? 'bulk' : 'nodes') : this.fill));
     const nMax = Math.max(...layouts.map((l) => l.coefficients));
     this.nodeStates = new Float64Array(6 * nMax);
   }
@@ -218,9 +233,14 @@ export class EphemerisCache implements Ephemeris {
     return s >= t.segmentCount ? t.segmentCount - 1 : s < 0 ? 0 : s;
   }
 
+  /** How the segments of `body` are fitted in this cache. */
+  fillMethod(body: EphemerisBody): CacheFillMethod {
+    return this.methods[ephemerisBodyIndex(body)];
+  }
+
   /** Fit segment s of body b: alone ('nodes') or with its whole bulk-fill chunk ('bulk'). */
   private fitAround(b: number, s: number): void {
-    if (this.fill === 'nodes') {
+    if (this.methods[b] === 'nodes') {
       this.fitSegment(b, s);
       return;
     }
@@ -234,8 +254,12 @@ export class EphemerisCache implements Ephemeris {
     }
   }
 
-  /** The source's bulk fitter for body b, made at first use. */
-  bodyFitter(b: number): SegmentFitter {
+  /** The source's bulk fitter for `body` (planned at first use); TypeError without one. */
+  bulkFitter(body: EphemerisBody): SegmentFitter {
+    return this.bodyFitter(ephemerisBodyIndex(body));
+  }
+
+  private bodyFitter(b: number): SegmentFitter {
     let f = this.fitters[b];
     if (f === null) {
       const t = this.tables[b];

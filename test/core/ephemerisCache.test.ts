@@ -97,8 +97,10 @@ describe('Chebyshev cache over the direct series, 200-year span', () => {
     expect(nodes.fittedSegmentCount).toBe(expected);
 
     // Jupiter: 48-day segments, so 400 days hold 9 (< CACHE_FILL_CHUNK): one run fits them all.
-    const bulk = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_451_400 });
-    expect(bulk.fill).toBe('bulk');
+    const bulk = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_451_400, fill: 'bulk' });
+    expect(bulk.fillMethod('jupiter')).toBe('bulk');
+    // By default a span this short is fitted by node sampling (no set-up cost).
+    expect(createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_451_400 }).fillMethod('jupiter')).toBe('nodes');
     bulk.helioState('jupiter', 2_451_100, out);
     expect(bulk.fittedSegmentCount).toBe(Math.min(CACHE_FILL_CHUNK, Math.ceil(400 / DEFAULT_CHEBYSHEV_LAYOUTS[4].segmentDays)));
     bulk.fillAll();

@@ -4,7 +4,7 @@ import { Vsop87Ephemeris, VSOP87_DEFAULT_END_JD_TDB, VSOP87_DEFAULT_START_JD_TDB
 import {
   CACHE_FILL_CHUNK, DEFAULT_CHEBYSHEV_LAYOUTS, DEFAULT_FIT_TOLERANCE_AU, DYNAMICS_FIT_TOLERANCE_AU, EphemerisCache,
 } from '../../src/core/ephemerisCache.js';
-import type { CacheFillMethod, CacheVelocityMode } from '../../src/core/ephemerisCache.js';
+import type { CacheFillChoice, CacheFillMethod, CacheVelocityMode } from '../../src/core/ephemerisCache.js';
 import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemerisBody.js';
 import type { Ephemeris, EphemerisBody } from '../../src/core/types.js';
 import { randomDates } from './ephemerisTestDates.js';
@@ -42,7 +42,7 @@ function report(title: string, rows: Row[]): void {
   console.log(`${title}: ${text.join(', ')}`);
 }
 
-function cache(fill: CacheFillMethod, velocity: CacheVelocityMode = 'derivative', fitToleranceAu?: number): EphemerisCache {
+function cache(fill: CacheFillChoice, velocity: CacheVelocityMode = 'derivative', fitToleranceAu?: number): EphemerisCache {
   return new EphemerisCache(source, { startJdTDB: START, endJdTDB: END, fill, velocity, fitToleranceAu });
 }
 
@@ -81,7 +81,7 @@ describe('bulk cache fill against the direct series over the whole ±1 000-year 
     const rows = worst(c, source, randomDates(44, 10, START, END), PLANET_SYSTEM_BODIES);
     report('bulk fill (dynamics tolerance 1e-8 au) vs direct series', rows);
     for (const r of rows) {
-      const bound = c.bodyFitter(EPHEMERIS_BODIES.indexOf(r.body)).droppedBoundAu;
+      const bound = c.bulkFitter(r.body).droppedBoundAu;
       expect(bound).toBeLessThanOrEqual(DYNAMICS_FIT_TOLERANCE_AU);
       // The bound is a worst case over thousands of coefficients of either sign; the fit's
       // own error (≤ 3e-11 au) comes on top of it.
@@ -90,9 +90,10 @@ describe('bulk cache fill against the direct series over the whole ±1 000-year 
   });
 
   it('reports a dropped-term bound within the tolerance for every body', () => {
-    const c = cache('bulk');
-    for (let b = 0; b < EPHEMERIS_BODIES.length; b++) {
-      const f = c.bodyFitter(b);
+    const c = cache('auto');
+    for (const body of EPHEMERIS_BODIES) {
+      expect(c.fillMethod(body)).toBe('bulk'); // 'auto' over 2 000 years
+      const f = c.bulkFitter(body);
       expect(f.droppedBoundAu).toBeLessThanOrEqual(DEFAULT_FIT_TOLERANCE_AU);
       expect(f.termsKept).toBeGreaterThan(0.9 * f.termsTotal);
     }
@@ -141,7 +142,7 @@ describe('prefill and lazy filling', () => {
       helioState: (body, jd, out, offset = 0) => source.helioState(body, jd, out, offset),
     };
     expect(() => new EphemerisCache(plain, { startJdTDB: 2_451_000, endJdTDB: 2_452_000, fill: 'bulk' })).toThrow(TypeError);
-    expect(new EphemerisCache(plain, { startJdTDB: 2_451_000, endJdTDB: 2_452_000 }).fill).toBe('nodes');
+    expect(new EphemerisCache(plain, { startJdTDB: START, endJdTDB: END }).fillMethod('mars')).toBe('nodes');
     expect(() => new EphemerisCache(source, { startJdTDB: 2_451_000, endJdTDB: 2_452_000, fitToleranceAu: -1 })).toThrow(RangeError);
     const bad = 'spline' as CacheFillMethod;
     expect(() => new EphemerisCache(source, { startJdTDB: 2_451_000, endJdTDB: 2_452_000, fill: bad })).toThrow(TypeError);
