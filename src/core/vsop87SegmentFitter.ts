@@ -17,7 +17,7 @@ import type { EphemerisBody } from './types.js';
 import { ephemerisBodyIndex } from './ephemerisBody.js';
 import { chebyshevNode } from './chebyshev.js';
 import { chebyshevDerivative, chebyshevFitMatrix, chebyshevTimesLinear, matrixTimesVector } from './chebyshevAlgebra.js';
-import type { PoissonChebyshevPlan } from './poissonChebyshev.js';
+import type { PoissonChebyshevPlan, PoissonPlanOptions } from './poissonChebyshev.js';
 import { planPoissonChebyshev, poissonChunkCoefficients } from './poissonChebyshev.js';
 import type { PoissonSeries } from './poissonSeries.js';
 import { elpPoissonSeries, vsop87PoissonSeries } from './poissonSeries.js';
@@ -46,6 +46,32 @@ const MOON_TO_EMB_AU_PER_KM = 1 / ((1 + EARTH_MOON_MASS_RATIO) * KM_PER_AU);
 const GROUP = 8;
 const GROUP_SLOTS = 96;
 
+/** Plans kept per series (read-only once made), most recent last; at most PLAN_MEMO_SIZE. */
+const planMemo = new WeakMap<PoissonSeries, Map<string, PoissonChebyshevPlan>>();
+const PLAN_MEMO_SIZE = 16;
+
+/**
+ * planPoissonChebyshev, remembered: caches over the same span and layout (e.g. one per
+ * object in a batch) share the plan instead of paying 5–80 ms per body again.
+ */
+function memoPlan(series: PoissonSeries, opts: PoissonPlanOptions): PoissonChebyshevPlan {
+  let plans = planMemo.get(series);
+  if (plans === undefined) {
+    plans = new Map();
+    planMemo.set(series, plans);
+  }
+  const key = JSON.stringify([opts.levels, opts.segmentDays, opts.tMin, opts.tMax, Array.from(opts.variableWeight), opts.budget]);
+  let plan = plans.get(key);
+  if (plan === undefined) {
+    plan = planPoissonChebyshev(series, opts);
+    if (plans.size >= PLAN_MEMO_SIZE) plans.delete(plans.keys().next().value as string);
+  } else {
+    plans.delete(key); // re-inserted below as the most recent
+  }
+  plans.set(key, plan);
+  return plan;
+}
+
 /** A level's share of a chunk: coefficients, and the node matrices of each sub-position. */
 interface LevelState {
   acc: Float64Array;
@@ -71,7 +97,7 @@ class SeriesPart {
     const toT = (jd: number) => (jd - J2000_JD) / series.daysPerUnit;
     // Groups may reach past the grid's end by < GROUP segments: bound |t| there too.
     const endJd = grid.startJdTDB + (grid.segmentCount + GROUP) * grid.segmentDays;
-    this.plan = planPoissonChebyshev(series, {
+    this.plan = memoPlan(series, {
       levels: [{ group: 1, slots: n + SLOT_MARGIN }, { group: GROUP, slots: GROUP_SLOTS }],
       segmentDays: grid.segmentDays, tMin: toT(grid.startJdTDB), tMax: toT(endJd),
       variableWeight: weights, budget: budgetAu,
