@@ -7,7 +7,7 @@
  * another `source` (same interface, heliocentric J2000-ecliptic states in au and au/day).
  */
 import { GM_SUN_AU3_PER_DAY2, PLANETS, planetGmAu3PerDay2 } from './constants.js';
-import type { Ephemeris } from './types.js';
+import type { Ephemeris, EphemerisBody } from './types.js';
 import { EphemerisCache } from './ephemerisCache.js';
 import type { CacheFillChoice, CacheVelocityMode, ChebyshevLayout } from './ephemerisCache.js';
 import { Vsop87Ephemeris } from './vsop87Ephemeris.js';
@@ -20,8 +20,11 @@ export interface CreateEphemerisOptions {
   source?: Ephemeris;
   velocity?: CacheVelocityMode;
   layouts?: readonly ChebyshevLayout[];
-  /** Fit every segment now instead of at first touch (default false). */
-  eager?: boolean;
+  /**
+   * Fit every segment now instead of at first touch (default false); a list of bodies fits
+   * only theirs, e.g. PLANET_SYSTEM_BODIES for the dynamics.
+   */
+  eager?: boolean | readonly EphemerisBody[];
   /** How segments are fitted; default 'auto' (CacheFillChoice in ephemerisCache.ts). */
   fill?: CacheFillChoice;
   /**
@@ -47,6 +50,7 @@ export function createEphemeris(opts: CreateEphemerisOptions): EphemerisCache {
     fitToleranceAu: opts.fitToleranceAu,
   });
   if (opts.eager === true) cache.fillAll();
+  else if (Array.isArray(opts.eager)) cache.prefill(cache.startJdTDB, cache.endJdTDB, opts.eager);
   return cache;
 }
 

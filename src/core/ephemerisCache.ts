@@ -95,7 +95,7 @@ export const DEFAULT_FIT_TOLERANCE_AU = 1e-10;
  * ~0.01–0.1″ near J2000 and up to 1″ at ±2 000–4 000 years (Bretagnon & Francou 1988 give
  * 1″ over 4 000 years for Mercury–Mars and 2 000 years for Jupiter–Saturn; the near-J2000
  * figures from memory). Measured over J2000 ± 1 000 years: worst 5e-10 au (Neptune, 74 m),
- * for about 30% less fill time than the default (the default already meets the fill target).
+ * for about 30% less fill time than the default.
  */
 export const DYNAMICS_FIT_TOLERANCE_AU = 1e-8;
 

@@ -8,6 +8,7 @@ import type { CacheFillChoice, CacheFillMethod, CacheVelocityMode } from '../../
 import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemerisBody.js';
 import type { Ephemeris, EphemerisBody } from '../../src/core/types.js';
 import { randomDates } from './ephemerisTestDates.js';
+import { createEphemeris } from '../../src/core/ephemeris.js';
 
 // Reference for every comparison here: the direct VSOP87B/ELP series (vsop87Ephemeris.ts),
 // itself checked against the published VSOP87 check values, astronomia and astronomy-engine
@@ -134,6 +135,16 @@ describe('prefill and lazy filling', () => {
     const marsSegments = Math.ceil((end - start) / DEFAULT_CHEBYSHEV_LAYOUTS[3].segmentDays);
     c.prefill(end - 1, end + 1e6, ['mars']);
     expect(c.fittedSegmentCount).toBe(CACHE_FILL_CHUNK + (marsSegments % CACHE_FILL_CHUNK || CACHE_FILL_CHUNK));
+  });
+
+  it('createEphemeris with a list of bodies as `eager` fits exactly their segments', () => {
+    const start = 2_451_545;
+    const end = start + 20 * 365.25;
+    const eph = createEphemeris({ startJdTDB: start, endJdTDB: end, eager: PLANET_SYSTEM_BODIES });
+    const expected = PLANET_SYSTEM_BODIES.reduce(
+      (n, body) => n + Math.ceil((end - start) / DEFAULT_CHEBYSHEV_LAYOUTS[EPHEMERIS_BODIES.indexOf(body)].segmentDays), 0,
+    );
+    expect(eph.fittedSegmentCount).toBe(expected);
   });
 
   it('rejects a bulk fill over a source without one, bad tolerances, bad methods and reversed ranges', () => {
