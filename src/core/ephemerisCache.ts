@@ -30,6 +30,8 @@ import { assertInSpan, ephemerisBodyIndex, EPHEMERIS_BODIES } from './ephemerisB
 import { chebyshevFit, chebyshevNode, chebyshevValue3 } from './chebyshev.js';
 import { hasSegmentFitter } from './segmentFitter.js';
 import type { SegmentFitter } from './segmentFitter.js';
+import { assertSameTable } from './ephemerisCacheTable.js';
+import type { CacheBodyTable } from './ephemerisCacheTable.js';
 
 /** Segment layout of one body: nominal segment length (days) and coefficients per axis. */
 export interface ChebyshevLayout {
@@ -195,6 +197,39 @@ export class EphemerisCache implements Ephemeris {
       stride,
       coeffs: new Float64Array(segmentCount * stride),
       built: new Uint8Array(segmentCount),
+    };
+  }
+
+  /** A copy of the fitted segments of `body`, with what decided them (ephemerisCacheTable.ts). */
+  exportBody(body: EphemerisBody): CacheBodyTable {
+    const t = this.tables[ephemerisBodyIndex(body)];
+    return { ...this.tableHeader(body), coeffs: t.coeffs.slice(), built: t.built.slice() };
+  }
+
+  /**
+   * Take the fitted segments of another cache's exportBody (same span, layout, velocity mode,
+   * fill method, tolerance and source, else RangeError); segments already fitted here stay.
+   */
+  importBody(table: CacheBodyTable): void {
+    const b = ephemerisBodyIndex(table.body);
+    assertSameTable(this.tableHeader(table.body), table);
+    const t = this.tables[b];
+    for (let s = 0; s < t.segmentCount; s++) {
+      if (t.built[s] === 0 && table.built[s] === 1) {
+        t.coeffs.set(table.coeffs.subarray(s * t.stride, (s + 1) * t.stride), s * t.stride);
+        t.built[s] = 1;
+        this.segmentsFitted++;
+      }
+    }
+  }
+
+  private tableHeader(body: EphemerisBody): Omit<CacheBodyTable, 'coeffs' | 'built'> {
+    const b = ephemerisBodyIndex(body);
+    const t = this.tables[b];
+    return {
+      body, startJdTDB: this.startJdTDB, endJdTDB: this.endJdTDB, segmentDays: t.segmentDays,
+      segmentCount: t.segmentCount, coefficients: t.n, stride: t.stride, velocity: this.velocity,
+      fillMethod: this.methods[b], fitToleranceAu: this.fitToleranceAu, sourceName: this.source.name,
     };
   }
 

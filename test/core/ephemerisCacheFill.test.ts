@@ -147,6 +147,44 @@ describe('prefill and lazy filling', () => {
     expect(eph.fittedSegmentCount).toBe(expected);
   });
 
+  it('merges bodies fitted by separate caches (as separate threads would) into bit-identical states', () => {
+    const start = 2_451_545 - 4_000;
+    const end = 2_451_545 + 4_000;
+    const opts = { startJdTDB: start, endJdTDB: end };
+    const single = new EphemerisCache(source, opts);
+    single.prefill(start, end, ['mars', 'emb']);
+    const workerA = new EphemerisCache(source, opts);
+    workerA.prefill(start, end, ['mars']);
+    const workerB = new EphemerisCache(source, opts);
+    workerB.prefill(start, end, ['emb']);
+    const merged = new EphemerisCache(source, opts);
+    // structuredClone is what postMessage does to the tables between threads.
+    merged.importBody(structuredClone(workerA.exportBody('mars')));
+    merged.importBody(structuredClone(workerB.exportBody('emb')));
+    expect(merged.fittedSegmentCount).toBe(single.fittedSegmentCount);
+    const a = new Float64Array(6);
+    const b = new Float64Array(6);
+    let differing = 0;
+    for (const jd of randomDates(46, 50, start, end)) {
+      for (const body of ['mars', 'emb'] as const) {
+        merged.helioState(body, jd, a);
+        single.helioState(body, jd, b);
+        for (let j = 0; j < 6; j++) if (a[j] !== b[j]) differing++;
+      }
+    }
+    expect(differing).toBe(0);
+    expect(merged.fittedSegmentCount).toBe(single.fittedSegmentCount); // nothing refitted
+  });
+
+  it('refuses tables fitted under other options, naming the field', () => {
+    const opts = { startJdTDB: 2_451_000, endJdTDB: 2_455_000 };
+    const table = new EphemerisCache(source, opts).exportBody('venus');
+    const looser = new EphemerisCache(source, { ...opts, fitToleranceAu: DYNAMICS_FIT_TOLERANCE_AU });
+    expect(() => looser.importBody(table)).toThrow(/fitToleranceAu/);
+    const longer = new EphemerisCache(source, { ...opts, endJdTDB: 2_455_001 });
+    expect(() => longer.importBody(table)).toThrow(RangeError);
+  });
+
   it('rejects a bulk fill over a source without one, bad tolerances, bad methods and reversed ranges', () => {
     const plain: Ephemeris = {
       name: 'plain', startJdTDB: START, endJdTDB: END,
