@@ -59,6 +59,7 @@ describe('scan on the bundled demo catalogue', () => {
     const expected = truth.filter((t) => t.class === 'bad-row' || t.class === 'duplicate');
     expect(expected.length).toBeGreaterThan(5);
     for (const t of expected) expect(rejectedAt, `${t.designation} ${t.class}`).toContain(`${t.file}:${t.line}`);
+    for (const r of rejects as { text: string }[]) expect(r.text.length).toBeGreaterThan(0);
     expect(rejects.length).toBe(expected.length);
   });
 
