@@ -5,7 +5,8 @@
  *  - fill cost: the node-sampling fill (every node one direct evaluation) timed on 2 years
  *    and scaled, against the bulk fill (series → Chebyshev coefficients) timed on 200 and
  *    1 000 years, for the eight bodies the dynamics reads (seven planets + Earth–Moon
- *    barycentre) and for all nine, at the default and the dynamics tolerance.
+ *    barycentre) and for all nine, at the default and the dynamics tolerance, and over
+ *    worker threads (as many as the machine offers; startup included).
  * Times are wall-clock and process CPU time (the machine may be shared; CPU time is the
  * steadier figure). Figures only; nothing is asserted.
  * Usage: npx tsx scripts/bench/ephemeris.ts
@@ -17,6 +18,8 @@ import { createEphemeris } from '../../src/core/ephemeris.js';
 import { DEFAULT_FIT_TOLERANCE_AU, DYNAMICS_FIT_TOLERANCE_AU } from '../../src/core/ephemerisCache.js';
 import type { CacheFillMethod } from '../../src/core/ephemerisCache.js';
 import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemerisBody.js';
+import { prefillParallel } from '../../src/core/ephemerisParallelFill.js';
+import { availableParallelism } from 'node:os';
 import type { Ephemeris, EphemerisBody } from '../../src/core/types.js';
 
 const J2000 = 2_451_545.0;
@@ -60,6 +63,16 @@ function fillSeconds(
   return { wallS: (performance.now() - t0) / 1000, cpuS: (cpu.user + cpu.system) / 1e6 };
 }
 
+/** Wall seconds to fill 1 000 years of `bodies` over `threads` worker threads. */
+async function parallelFillSeconds(years: number, bodies: readonly EphemerisBody[], threads: number): Promise<number> {
+  const start = J2000 - (years * DAYS_PER_YEAR) / 2;
+  const end = J2000 + (years * DAYS_PER_YEAR) / 2;
+  const t0 = performance.now();
+  const cache = createEphemeris({ startJdTDB: start, endJdTDB: end });
+  await prefillParallel(cache, start, end, bodies, threads);
+  return (performance.now() - t0) / 1000;
+}
+
 function line(label: string, f: { wallS: number; cpuS: number }, extra = ''): string {
   return `  ${label.padEnd(46)} ${f.wallS.toFixed(2).padStart(7)} s wall ${f.cpuS.toFixed(2).padStart(7)} s CPU${extra}`;
 }
@@ -85,6 +98,8 @@ export async function benchEphemeris(): Promise<Record<string, number>> {
   const bulk1000 = fillSeconds(1000, EPHEMERIS_BODIES, 'bulk');
   const bulk1000Dyn = fillSeconds(1000, PLANET_SYSTEM_BODIES, 'bulk');
   const bulk1000DynLoose = fillSeconds(1000, PLANET_SYSTEM_BODIES, 'bulk', DYNAMICS_FIT_TOLERANCE_AU);
+  const threads = availableParallelism();
+  const parallel1000DynWallS = await parallelFillSeconds(1000, PLANET_SYSTEM_BODIES, threads);
 
   const figures = {
     directEvalsPerS: directPerS,
@@ -99,6 +114,8 @@ export async function benchEphemeris(): Promise<Record<string, number>> {
     bulkFill1000yPlanetSystemsCpuS: bulk1000Dyn.cpuS,
     bulkFill1000yPlanetSystemsWallS: bulk1000Dyn.wallS,
     bulkFill1000yPlanetSystemsDynamicsToleranceCpuS: bulk1000DynLoose.cpuS,
+    parallelFill1000yPlanetSystemsWallS: parallel1000DynWallS,
+    parallelFillThreads: threads,
     bulkOverNodesFillSpeedup1000y: (nodes2Dyn.cpuS * 500) / bulk1000Dyn.cpuS,
   };
   console.log('ephemeris queries (9 bodies, random dates 2000–2010):');
@@ -113,6 +130,10 @@ export async function benchEphemeris(): Promise<Record<string, number>> {
   console.log(line('bulk, 9 bodies, 1 000 years', bulk1000));
   console.log(line('bulk, 8 systems, 1 000 years', bulk1000Dyn, `   ${figures.bulkOverNodesFillSpeedup1000y.toFixed(0)}× less CPU than node sampling`));
   console.log(line(`bulk, 8 systems, 1 000 years, tolerance ${DYNAMICS_FIT_TOLERANCE_AU} au`, bulk1000DynLoose));
+  console.log(
+    `  bulk, 8 systems, 1 000 years, ${threads} worker threads   ${parallel1000DynWallS.toFixed(2).padStart(7)} s wall` +
+      `   ${(bulk1000Dyn.wallS / parallel1000DynWallS).toFixed(2)}× the one-thread wall time`,
+  );
   return figures;
 }
 

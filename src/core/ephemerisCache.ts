@@ -133,6 +133,8 @@ export class EphemerisCache implements Ephemeris {
   readonly velocity: CacheVelocityMode;
   readonly fill: CacheFillChoice;
   readonly fitToleranceAu: number;
+  /** The per-body layouts in use (a copy). */
+  readonly layouts: readonly ChebyshevLayout[];
   private readonly tables: BodyTable[];
   private readonly fitters: Array<SegmentFitter | null>;
   /** Fill method per body (resolved from `fill`). */
@@ -159,6 +161,7 @@ export class EphemerisCache implements Ephemeris {
     }
     this.name = `Chebyshev cache over ${source.name}`;
     const layouts = opts.layouts ?? DEFAULT_CHEBYSHEV_LAYOUTS;
+    this.layouts = layouts.map((l) => ({ segmentDays: l.segmentDays, coefficients: l.coefficients }));
     if (layouts.length !== EPHEMERIS_BODIES.length) {
       throw new RangeError(`EphemerisCache: need ${EPHEMERIS_BODIES.length} layouts, got ${layouts.length}`);
     }
@@ -197,6 +200,14 @@ export class EphemerisCache implements Ephemeris {
       stride,
       coeffs: new Float64Array(segmentCount * stride),
       built: new Uint8Array(segmentCount),
+    };
+  }
+
+  /** Options that rebuild an empty cache with the same segments (e.g. in another thread). */
+  get options(): EphemerisCacheOptions {
+    return {
+      startJdTDB: this.startJdTDB, endJdTDB: this.endJdTDB, velocity: this.velocity,
+      layouts: this.layouts.map((l) => ({ ...l })), fill: this.fill, fitToleranceAu: this.fitToleranceAu,
     };
   }
 

@@ -12,6 +12,7 @@ export * from './segmentFitter.js';
 export * from './vsop87SegmentFitter.js';
 export * from './ephemerisCache.js';
 export * from './ephemerisCacheTable.js';
+export * from './ephemerisParallelFill.js';
 export * from './ephemeris.js';
 export * from './gaussRadauSpacings.js';
 export * from './gaussRadau.js';
