@@ -10,19 +10,21 @@
  * give cos(φ_m + ω x) = cos φ_m cos(ω x) − sin φ_m sin(ω x) as a Chebyshev series whose
  * coefficients are g_j · cos φ_m (j even) or g_j · sin φ_m (j odd), with g_j fixed by A, ω and
  * the Bessel values J_j(ω) (besselJ.ts). From one segment to the next only φ_m moves, so
- * cos φ_m and sin φ_m advance by a rotation (the angle-addition recurrence, e.g. Numerical
- * Recipes 3rd ed. §5.4, eq. 5.4.6), restarted from Math.cos/Math.sin at every chunk so the
- * rounding drift stays at a few ulps per step. For quartic phases (ELP/MPP02) the rotation
- * angle itself rotates by the second difference of the phase (exact for a quadratic; the
- * cubic remainder is bounded below in `PhaseNotes`). Loop order: terms outer, segments and
- * coefficients inner, so one term's constants stay in registers.
+ * cos φ_m and sin φ_m advance by a rotation (the angle-addition recurrence; Numerical Recipes
+ * 3rd ed., section on recurrence relations, from memory), restarted from Math.cos/Math.sin
+ * at every chunk so the rounding drift stays at a few ulps per step. For quartic phases
+ * (ELP/MPP02) the rotation angle itself rotates by the second difference of the phase (exact
+ * for a quadratic; the cubic remainder is bounded below in `PhaseNotes`). Loop order: terms
+ * outer, segments and coefficients inner, so one term's constants stay in registers.
+ * Long-period terms may be expanded on groups of consecutive segments instead (levels), which
+ * costs one rotation per group; the caller evaluates each group's series on its segments.
  *
  * PhaseNotes (quartic phases; ELP/MPP02 has |φ2| ≤ 1e-3 rad/cy², |φ3| ≤ 1.5e-6 rad/cy³,
- * measured from the packed series): the neglected curvature inside a 16-day segment is
- * ≤ |φ''| h² / 2 ≈ 5e-11 rad, the use of one ω per chunk ≤ |φ''| (chunk/2) h ≈ 1e-8 rad, and
- * the cubic drift of the recurrence over 64 segments ≈ |φ'''| Δ³ 64³/6 ≈ 4e-11 rad; times
- * the Moon's largest term (0.11 rad of longitude ≈ 4e4 km) divided by 82.3 for the
- * Earth–Moon barycentre that is ≤ 1e-8 km.
+ * measured from the packed series; figures for 16-day segments in groups of 8, 64 per
+ * chunk): the neglected curvature inside a 128-day group is ≤ |φ''| h²/2 ≈ 3e-9 rad; taking
+ * ω at the chunk's centre ≤ |φ''| (chunk/2) h ≈ 5e-8 rad; the cubic drift of the recurrence
+ * over a chunk ≈ |φ'''| Δ³ S³/6 ≈ 4e-11 rad. Times the Moon's largest term (0.11 rad of
+ * longitude ≈ 4e4 km) divided by 82.3 for the Earth–Moon barycentre: ≤ 3e-5 km (2e-13 au).
  */
 import { besselJSequence } from './besselJ.js';
 import type { PoissonSeries } from './poissonSeries.js';
@@ -60,8 +62,8 @@ export interface PoissonChebyshevPlan {
 export interface PoissonPlanOptions {
   /**
    * Grouping levels, the first with group 1 (the cache's own segments). A term goes to the
-   * level where its work per cache segment, (2 + m/2) / group for m kept coefficients (two
-   * coefficient updates cost about as much as one rotation step; measured), is least, among
+   * level where its work per cache segment, (2 + m/2) / group for m kept coefficients (a
+   * rotation step counted as two coefficient-pair updates; an estimate), is least, among
    * the levels whose slots hold all its non-negligible coefficients.
    */
   levels: ReadonlyArray<{ group: number; slots: number }>;
@@ -229,8 +231,9 @@ function jacobiAngerSign(j: number): number {
  * g_j = A (2 − δ_j0) s_j J_j(ω0) for every kept term, at ω0 = φ'(tRef) h; for quartic phases
  * also dg_j/dω from J'_j = (J_{j−1} − J_{j+1}) / 2 (A&S 9.1.27; J_{−1} = −J_1), so a chunk
  * can move ω to its own φ' by one multiply-add per coefficient. The second-order remainder
- * is ≤ |A| Δω² with Δω ≤ max|φ''| |t − tRef| h (|J''_j| ≤ 1): for ELP/MPP02 on 128-day
- * groups over ±10 centuries, Δω ≤ 3.5e-5 rad and the remainder ≤ 6e-7 km at the barycentre.
+ * in value is ≤ |A| Δω²/2 (|∂²/∂ω² cos(φ + ωx)| ≤ x² ≤ 1) with Δω ≤ max|φ''| |t − tRef| h:
+ * for ELP/MPP02 on 128-day groups over ±10 centuries, Δω ≤ 3.5e-5 rad and the remainder
+ * ≤ 3e-7 km at the barycentre (4e4 km × Δω²/2 / 82.3).
  */
 function termFactors(
   s: PoissonSeries, levels: PoissonLevel[], level: Uint8Array, kept: Int32Array, maxSlots: number, tRef: number,
