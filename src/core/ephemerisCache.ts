@@ -5,9 +5,9 @@
  *
  * Filling. Sources that can (the direct VSOP87/ELP series) fit segments in bulk
  * (segmentFitter.ts, vsop87SegmentFitter.ts): the series' own Chebyshev coefficients, a few
- * multiply-adds per term and segment instead of a cosine per term and node; measured 44×
+ * multiply-adds per term and segment instead of a cosine per term and node; measured ≈ 45×
  * less CPU than sampling the series at the nodes (scripts/bench/ephemeris.ts: 1 000 years of
- * the eight planet systems in ≈ 6 s on one core instead of ≈ 330 s). Other sources are
+ * the eight planet systems in 5–6 s on one core instead of 250–330 s). Other sources are
  * sampled at the nodes ('nodes', also available for the series as the reference path).
  * Segments are fitted lazily at first touch, in runs of CACHE_FILL_CHUNK segments with
  * 'bulk' (a run of 64 Mercury segments costs ≈ 8 ms, one segment by node sampling ≈ 6 ms;
