@@ -1,17 +1,18 @@
 import { readFileSync } from 'node:fs';
-import { join } from 'node:path';
+import { basename, join } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { ROOT, runCli, tempDir } from './cliHarness.js';
 
 // Real data: copies of the shared open samples of the one-line orbit and comet export
-// formats (provenance and notice in test/fixtures/orbit-export/ and comet-export/).
-const ORBITS = join(ROOT, 'test/fixtures/orbit-export/orbits-export-sample.txt');
-const COMETS = join(ROOT, 'test/fixtures/comet-export/comets-export-sample.txt');
+// formats (provenance and notice in test/fixtures/orbit-export/ and comet-export/), stored
+// gzip-compressed; the scan command reads the .gz files as they are (gzip by magic bytes).
+const ORBITS = join(ROOT, 'test/fixtures/orbit-export/orbits-export-sample.txt.gz');
+const COMETS = join(ROOT, 'test/fixtures/comet-export/comets-export-sample.txt.gz');
 
 interface Cand { designation: string; class: string; details: { T: number } }
 let out = '';
-let summary: { rows: { read: number; accepted: number; rejected: number }; files: { rows: { read: number; accepted: number; rejected: number } }[] };
+let summary: { rows: { read: number; accepted: number; rejected: number }; files: { file: string; rows: { read: number; accepted: number; rejected: number } }[] };
 let candidates: Cand[] = [];
 
 beforeAll(() => {
@@ -30,11 +31,14 @@ describe('scan on real export samples', () => {
     expect(summary.rows.rejected).toBe(1);
     expect(summary.rows.read).toBe(summary.rows.accepted + summary.rows.rejected);
     for (const f of summary.files) expect(f.rows.read).toBe(f.rows.accepted + f.rows.rejected);
+    // the files are named as given: the stored .gz samples, read without unpacking first
+    expect(summary.files.map((f) => basename(f.file))).toEqual(['orbits-export-sample.txt.gz', 'comets-export-sample.txt.gz']);
   });
 
   it('every rejected row carries its line, reason and raw text', () => {
-    const rejects = parse(readFileSync(join(out, 'rejects.csv')), { columns: true }) as { line: string; reason: string; text: string }[];
+    const rejects = parse(readFileSync(join(out, 'rejects.csv')), { columns: true }) as { file: string; line: string; reason: string; text: string }[];
     expect(rejects.length).toBe(summary.rows.rejected);
+    expect([basename(rejects[0].file), rejects[0].line]).toEqual(['orbits-export-sample.txt.gz', '178']);
     for (const r of rejects) {
       expect(Number(r.line)).toBeGreaterThan(0);
       expect(r.reason.length).toBeGreaterThan(5);

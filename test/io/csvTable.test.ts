@@ -5,7 +5,7 @@
  * The elements of test/fixtures/csv/ceres-eu5.csv are the real sample lines' values, so
  * the CSV reader must agree with the one-line export reader on them.
  */
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -13,7 +13,7 @@ import {
   cellJd, emptyOrbitRow, mapColumns, parseColumnMapping, parseOrbitExportLine, readOrbitFile, sniffDelimiter,
   UnreadableInputError, type InputError, type OrbitRow, type ReadOrbitOptions,
 } from '../../src/io/index.js';
-import { isoToJd } from './fixtureCases.js';
+import { isoToJd, readFixtureText } from './fixtureCases.js';
 
 const FIX = new URL('../fixtures/', import.meta.url);
 const dir = mkdtempSync(join(tmpdir(), 'wayward-csv-'));
@@ -73,7 +73,7 @@ describe('values', () => {
     const { rows, rejects, summary } = await read(new URL('csv/ceres-eu5.csv', FIX).pathname);
     expect(rejects).toEqual([]);
     expect(summary).toMatchObject({ format: 'csv', rows: 2, rejected: 0, linesRead: 2, skipped: 1 });
-    const sample = readFileSync(new URL('orbit-export/orbits-export-sample.txt', FIX), 'latin1').split('\n');
+    const sample = readFixtureText(new URL('orbit-export/orbits-export-sample.txt.gz', FIX)).split('\n');
     const ref = emptyOrbitRow();
     for (const [k, line] of [sample[0], sample.find((l) => l.startsWith('K19E05U'))!].entries()) {
       parseOrbitExportLine(line, ref, 'sample', 1);

@@ -3,17 +3,17 @@
  * column layouts (test/fixtures/{orbit,comet}-export/cases), every line of the real samples
  * read or rejected with a reason, and writer round trips against the real lines.
  */
-import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
   emptyOrbitRow, formatCometExportLine, formatOrbitExportLine, InputError, parseCometExportLine,
   parseOrbitExportLine, type OrbitRow,
 } from '../../src/io/index.js';
-import { loadCases, runCase } from './fixtureCases.js';
+import { loadCases, readFixtureText, runCase } from './fixtureCases.js';
 
 const FIX = new URL('../fixtures/', import.meta.url);
+// the real samples are stored gzip-compressed (test/fixtures/{orbit,comet}-export/README.md)
 const sampleLines = (rel: string): string[] => {
-  const lines = readFileSync(new URL(rel, FIX), 'latin1').split('\n');
+  const lines = readFixtureText(new URL(rel, FIX)).split('\n');
   if (lines.at(-1) === '') lines.pop();
   return lines;
 };
@@ -51,19 +51,19 @@ function account(lines: string[], parse: typeof parseOrbitExportLine, file: stri
 
 describe('real samples: every line read or rejected with a reason', () => {
   it('orbit export sample', () => {
-    const lines = sampleLines('orbit-export/orbits-export-sample.txt');
-    const r = account(lines, parseOrbitExportLine, 'orbits-export-sample.txt');
+    const lines = sampleLines('orbit-export/orbits-export-sample.txt.gz');
+    const r = account(lines, parseOrbitExportLine, 'orbits-export-sample.txt.gz');
     expect(r.rows + r.skipped + r.rejected.length).toBe(lines.length);
     expect(r.rows).toBe(258);
     expect(r.skipped).toBe(1); // the blank separator line
     expect(r.rejected.map((e) => e.message)).toEqual([
-      'orbits-export-sample.txt:178:1: blank packed designation (columns 1–7)',
+      'orbits-export-sample.txt.gz:178:1: blank packed designation (columns 1–7)',
     ]);
   });
 
   it('comet export sample', () => {
-    const lines = sampleLines('comet-export/comets-export-sample.txt');
-    const r = account(lines, parseCometExportLine, 'comets-export-sample.txt');
+    const lines = sampleLines('comet-export/comets-export-sample.txt.gz');
+    const r = account(lines, parseCometExportLine, 'comets-export-sample.txt.gz');
     expect(r.rows).toBe(100);
     expect(r.rejected).toEqual([]);
   });
@@ -85,7 +85,7 @@ describe('writers reproduce the real lines', () => {
     let exact = 0;
     let total = 0;
     const mask = (s: string) => s.slice(0, 142) + s.slice(165);
-    sampleLines('orbit-export/orbits-export-sample.txt').forEach((line, k) => {
+    sampleLines('orbit-export/orbits-export-sample.txt.gz').forEach((line, k) => {
       try {
         if (parseOrbitExportLine(line, row, 'x', k + 1) !== 'row') return;
       } catch {
@@ -107,7 +107,7 @@ describe('writers reproduce the real lines', () => {
 
   it('comet export: byte-identical', () => {
     const row = emptyOrbitRow();
-    const lines = sampleLines('comet-export/comets-export-sample.txt');
+    const lines = sampleLines('comet-export/comets-export-sample.txt.gz');
     for (const [k, line] of lines.entries()) {
       parseCometExportLine(line, row, 'x', k + 1);
       expect(formatCometExportLine(row)).toBe(line.trimEnd());
@@ -116,7 +116,7 @@ describe('writers reproduce the real lines', () => {
 
   it('refuses to shift columns: a value too wide for its field is a RangeError', () => {
     const row = emptyOrbitRow();
-    parseOrbitExportLine(sampleLines('orbit-export/orbits-export-sample.txt')[0], row, 'x', 1);
+    parseOrbitExportLine(sampleLines('orbit-export/orbits-export-sample.txt.gz')[0], row, 'x', 1);
     row.nObs = 123_456;
     expect(() => formatOrbitExportLine(row)).toThrow(/nObs = 123456 does not fit in 5 columns/);
     row.nObs = 10;

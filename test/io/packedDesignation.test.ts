@@ -3,15 +3,16 @@
  * - worked examples of the published description of the packed designation forms
  *   (marked "from memory" where recalled rather than read),
  * - the real sample lines in test/fixtures/orbit-export and test/fixtures/comet-export
+ *   (stored gzip-compressed, read through gunzipSync)
  *   (packed columns 1–7 against the readable designation written on the same line),
  * - property-based round trips (fast-check) over the whole number range and provisional space.
  */
-import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   MAX_PACKED_NUMBER, PackedFormError, packDesignation, packNumber, unpackDesignation, unpackNumber,
 } from '../../src/io/index.js';
+import { readFixtureText } from './fixtureCases.js';
 
 const FIXTURES = new URL('../fixtures/', import.meta.url);
 
@@ -142,7 +143,7 @@ describe('comet designations', () => {
 /** Real sample lines, fixed-width: packed columns against the readable columns. */
 describe('real sample lines', () => {
   it('orbit export: packed 1–7 unpacks to the readable designation 167–194', () => {
-    const lines = readFileSync(new URL('orbit-export/orbits-export-sample.txt', FIXTURES), 'latin1').split('\n');
+    const lines = readFixtureText(new URL('orbit-export/orbits-export-sample.txt.gz', FIXTURES)).split('\n');
     let checked = 0;
     for (const line of lines) {
       const packed = line.slice(0, 7).trim();
@@ -158,7 +159,7 @@ describe('real sample lines', () => {
   });
 
   it('comet export: packed 1–12 unpacks to the designation in 103–158', () => {
-    const lines = readFileSync(new URL('comet-export/comets-export-sample.txt', FIXTURES), 'latin1').split('\n');
+    const lines = readFixtureText(new URL('comet-export/comets-export-sample.txt.gz', FIXTURES)).split('\n');
     let checked = 0;
     for (const line of lines) {
       if (line.trim() === '') continue;

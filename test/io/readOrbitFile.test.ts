@@ -2,21 +2,28 @@
  * readOrbitFile end to end: format detection on the real samples, the header block of the
  * real export file (its notice text before the dashed line), gzip, truncated lines, and the
  * accounting invariant read = accepted + rejected under random garbage (fast-check).
+ * The real samples are stored gzip-compressed, byte for byte unchanged; the SHA-256 of their
+ * uncompressed text is recorded in test/fixtures/{orbit,comet}-export/README.md and checked here.
  */
+import { createHash } from 'node:crypto';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { gzipSync } from 'node:zlib';
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
 import {
   detectFormat, readOrbitFile, UnreadableInputError, type InputError, type ReadOrbitOptions,
 } from '../../src/io/index.js';
+import { readFixtureBytes, readFixtureText } from './fixtureCases.js';
 
 const FIX = new URL('../fixtures/', import.meta.url);
-const ORBITS = readFileSync(new URL('orbit-export/orbits-export-sample.txt', FIX), 'latin1');
+const ORBITS_GZ = new URL('orbit-export/orbits-export-sample.txt.gz', FIX);
+const COMETS_GZ = new URL('comet-export/comets-export-sample.txt.gz', FIX);
+const ORBITS = readFixtureText(ORBITS_GZ);
 const NOTICE = readFileSync(new URL('orbit-export/orbits-export-sample.NOTICE.txt', FIX), 'latin1');
-const COMETS = readFileSync(new URL('comet-export/comets-export-sample.txt', FIX), 'latin1');
+const COMETS = readFixtureText(COMETS_GZ);
 const dir = mkdtempSync(join(tmpdir(), 'wayward-read-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
@@ -35,6 +42,20 @@ async function read(path: string, options: ReadOrbitOptions = {}) {
 }
 
 describe('real samples', () => {
+  it('stored gzip-compressed, unchanged: uncompressed SHA-256 as recorded in the fixture READMEs', () => {
+    const sha = (u: URL): string => createHash('sha256').update(readFixtureBytes(u)).digest('hex');
+    expect(sha(ORBITS_GZ)).toBe('7744c45243d4ad40aaec8a38ca91c7e29485dd03a33f024d58b00a5871412ffd');
+    expect(sha(COMETS_GZ)).toBe('b57d0f438888b9749baf59487247821d6c1db649ccb98cbf397d27a3c2674ed1');
+  });
+
+  it('the stored .gz samples read directly, gunzipped transparently (magic bytes 1f 8b)', async () => {
+    const orbits = await read(fileURLToPath(ORBITS_GZ));
+    expect(orbits.summary).toMatchObject({ format: 'orbit-export', rows: 258, rejected: 1, linesRead: 259, skipped: 1, gzip: true });
+    expect(orbits.rejects[0].message).toBe(`${fileURLToPath(ORBITS_GZ)}:178:1: blank packed designation (columns 1–7)`);
+    const comets = await read(fileURLToPath(COMETS_GZ));
+    expect(comets.summary).toMatchObject({ format: 'comet-export', rows: 100, rejected: 0, linesRead: 100, gzip: true });
+  });
+
   it('orbit export with its original header block (notice text ending in a dashed line)', async () => {
     const p = temp(NOTICE + ORBITS);
     const { designations, rejects, summary } = await read(p);
