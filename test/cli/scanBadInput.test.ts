@@ -4,10 +4,10 @@ import { gzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 import { runCli, tempDir } from './cliHarness.js';
 
-// Two real lines of the one-line orbit export format (first lines of
+// Two real lines of the one-line orbit export format (lines 1 and 17 of
 // /work/shared/data/orbits-export-sample.txt; provenance in test/fixtures/orbit-export/).
 const CERES = '00001    3.34  0.15 K2669 274.41935   73.29420   80.24863   10.58803  0.0796923  0.21430445   2.7655526  0 MPO980521  7297 126 1801-2026 0.83 M-v 30k Veres      4000      (1) Ceres              20260103';
-const PALLAS = '00002    4.12  0.15 K2669 254.24964  310.96993  172.88662   34.93279  0.2307001  0.21383960   2.7695590  0 MPO980521  9062 123 1804-2025 0.77 M-v 28k MPCORBFIT  4000      (2) Pallas             20251214';
+const THETIS = '00017    7.91  0.15 K2669 243.07058  136.16115  125.49572    5.59611  0.1308313  0.25344485   2.4729409  0 MPO980521 10807  98 1852-2026 0.57 M-v 3Ek Veres      0000     (17) Thetis             20260407';
 
 function summaryOf(out: string) {
   return JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
@@ -17,7 +17,7 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
   it('missing file: one line naming it, exit 1, other files still scanned', () => {
     const dir = tempDir();
     const good = join(dir, 'good.txt');
-    writeFileSync(good, `${CERES}\n${PALLAS}\n`);
+    writeFileSync(good, `${CERES}\n${THETIS}\n`);
     const out = join(dir, 'out');
     const r = runCli(['scan', join(dir, 'nope.txt'), good, '--out', out, '--quiet']);
     expect(r.status).toBe(1);
@@ -48,7 +48,7 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
 
   it('truncated lines, CRLF endings and gzip: bad rows rejected with file and line, good rows kept', () => {
     const dir = tempDir();
-    const text = `${CERES}\r\n${PALLAS.slice(0, 60)}\r\n${PALLAS}\r\n`;
+    const text = `${CERES}\r\n${THETIS.slice(0, 60)}\r\n${THETIS}\r\n`;
     writeFileSync(join(dir, 'mixed.txt.gz'), gzipSync(Buffer.from(text)));
     const out = join(dir, 'o');
     const r = runCli(['scan', join(dir, 'mixed.txt.gz'), '--out', out, '--quiet']);
