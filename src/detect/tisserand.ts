@@ -26,7 +26,7 @@
  * falseAlarm: the empirical tail fraction of the same-catalogue screened population that
  * is at least as far to that side (empiricalTail.ts).
  */
-import { PLANET_MEAN_A_AU, planetGmAu3PerDay2, GM_SUN_AU3_PER_DAY2, DEG_PER_RAD } from '../core/constants.js';
+import { PLANET_MEAN_A_AU, PLANETS, planetGmAu3PerDay2, GM_SUN_AU3_PER_DAY2, DEG_PER_RAD } from '../core/constants.js';
 import type { PlanetName } from '../core/constants.js';
 import { tisserandParameter } from '../core/tisserand.js';
 import { KIND_COMET, qualityNames, type Catalogue } from '../clean/types.js';
@@ -48,11 +48,14 @@ export function coorbitalHalfWidth(planet: PlanetName): number {
   return Math.sqrt((8 * mu) / 3);
 }
 
+/** coorbitalHalfWidth of every planet, computed once (tisserandZone runs once a row). */
+const HALF_WIDTH = Object.fromEntries(PLANETS.map((p) => [p, coorbitalHalfWidth(p)])) as Record<PlanetName, number>;
+
 /** Dynamical zone of a body relative to the planet (see the file comment). */
 export function tisserandZone(planet: PlanetName, a: number, q: number, e: number, iRad: number): TisserandZone {
   const aP = PLANET_MEAN_A_AU[planet];
   if (e >= 1) return 'unbound';
-  if (e < 0.3 && Math.abs(a / aP - 1) < coorbitalHalfWidth(planet)) return 'coorbital';
+  if (e < 0.3 && Math.abs(a / aP - 1) < HALF_WIDTH[planet]) return 'coorbital';
   if (planet === 'jupiter' && a >= 3.7 && a <= 4.2 && e < 0.3 && iRad * DEG_PER_RAD < 20) return 'hilda';
   if (q > aP) return 'exterior';
   return a * (1 + e) > aP ? 'crossing' : 'interior';
