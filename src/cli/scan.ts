@@ -5,6 +5,7 @@
 import { mkdir } from 'node:fs/promises';
 import { join, relative } from 'node:path';
 import { Command, Option } from 'commander';
+import { DEFAULT_QUALITY, DEFAULT_VALIDITY } from '../clean/thresholds.js';
 import type { PlanetName } from '../core/constants.js';
 import type { Progress } from '../core/progress.js';
 import { DETECTORS, detectorById } from '../detect/registry.js';
@@ -91,6 +92,7 @@ export async function runScan(opts: ScanOptions, progress?: Progress): Promise<S
   const options = {
     detectors: opts.detectors, planet: opts.planet,
     tisserand: detOpts.tisserand, inputFormat: opts.inputFormat ?? 'auto', columns: opts.columns ?? {},
+    validity: DEFAULT_VALIDITY, quality: DEFAULT_QUALITY,
   };
   const base = {
     version: packageVersion(), files: loaded.files, catalogue: loaded.catalogue, rejects: loaded.rejects,
