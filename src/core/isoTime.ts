@@ -6,8 +6,8 @@
  *   2026-06-09T12:00      hours and minutes (a space may replace the T)
  *   2026-06-09T12:00:00.5 seconds with a fraction
  * optionally followed by 'Z' (UTC) or a time-scale word (' UTC', ' TAI', ' TT', ' TDB'; the
- * word form is common practice in astronomy, not ISO). Seconds may be 60 (a leap second);
- * whether that day has one is checked where the scale is known (time.ts).
+ * word form is common practice in astronomy, not ISO). Seconds may be 60 (a leap second) at
+ * 23:59 only; whether that day has one is checked where the scale is known (time.ts).
  */
 import type { TimeScale } from './types.js';
 import { calendarToJd } from './julian.js';
@@ -62,6 +62,11 @@ export function parseIsoDateTime(text: string): ParsedDateTime {
     if (hour > 23) throw new TimeFormatError(text, `hour ${hour} is not 0..23`);
     if (minute > 59) throw new TimeFormatError(text, `minute ${minute} is not 0..59`);
     if (second >= 61) throw new TimeFormatError(text, `second ${second} is not below 61`);
+    // A leap second is inserted as 23:59:60 at the end of a UTC day (ITU-R Recommendation
+    // TF.460-6; from memory); second 60 at any other minute would silently become the next one.
+    if (second >= 60 && (hour !== 23 || minute !== 59)) {
+      throw new TimeFormatError(text, `second ${second} is allowed only at 23:59 (a leap second)`);
+    }
     secondsOfDay = hour * 3600 + minute * 60 + second;
   }
   const scale: TimeScale | null = m[8] === 'Z' ? 'UTC' : ((m[9] as TimeScale | undefined) ?? null);

@@ -173,7 +173,10 @@ export class Instant {
     const p2 = (n: number) => String(n).padStart(2, '0');
     const whole = Math.floor(secondsTicks / scale10);
     const fracText = fractionDigits > 0 ? '.' + String(secondsTicks - whole * scale10).padStart(fractionDigits, '0') : '';
-    const date = `${String(c.year).padStart(4, '0')}-${p2(c.month)}-${p2(Math.round(c.day))}`;
+    // Years before 1 (astronomical numbering, 0 = 1 BC) as a minus sign and four digits,
+    // the expanded year form of ISO 8601 (from memory), which parse() reads back.
+    const year = c.year < 0 ? '-' + String(-c.year).padStart(4, '0') : String(c.year).padStart(4, '0');
+    const date = `${year}-${p2(c.month)}-${p2(Math.round(c.day))}`;
     const clock = `${p2(Math.floor(minutes / 60))}:${p2(minutes % 60)}:${p2(whole)}${fracText}`;
     return `${date}T${clock}${this.scale === 'UTC' ? 'Z' : ' ' + this.scale}`;
   }

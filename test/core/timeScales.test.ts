@@ -97,11 +97,14 @@ describe('UTC → TAI → TT → TDB chain (erfa.dtf2d, utctai, taitt, dtdb)', (
     // Same instant, different labels: the JD difference is the scale offset; the interval is 0.
     const t = Instant.parse('2026-06-09T12:00:00 TAI');
     const tt = t.to('TT');
-    expect(diffS(tt.jd1, tt.jd2, t.jd1, t.jd2)).toBeCloseTo(TT_MINUS_TAI_S, 6);
+    // 32.184 s written out from the resolution, not taken from the code under test.
+    expect(diffS(tt.jd1, tt.jd2, t.jd1, t.jd2)).toBeCloseTo(32.184, 6);
     expect(tt.secondsSince(t)).toBeCloseTo(0, 9);
     const u = Instant.parse('2026-06-09T12:00:00Z');
     const ut = u.to('TT');
-    expect(diffS(ut.jd1, ut.jd2, u.jd1, u.jd2)).toBeCloseTo(37 + TT_MINUS_TAI_S, 6);
+    // TAI − UTC = 37 s since 2017 Jan 1 (IERS Bulletin C 52).
+    expect(diffS(ut.jd1, ut.jd2, u.jd1, u.jd2)).toBeCloseTo(37 + 32.184, 6);
+    expect(TT_MINUS_TAI_S).toBe(32.184);
   });
 });
 
@@ -134,6 +137,28 @@ describe('ISO 8601 parsing and Instant', () => {
     expect(() => parseIsoDateTime('2026-02-30')).toThrow("Bad date-time '2026-02-30': day 30 is not 1..28");
     // A leap second only where the IERS put one.
     expect(() => Instant.parse('2026-06-30T23:59:60Z')).toThrow(/without a leap second/);
+  });
+
+  it('second 60 only at 23:59, the one place a leap second is inserted (ITU-R TF.460-6; from memory)', () => {
+    // Before this check, 12:00:60 on a leap-second day (or any day) was read as 12:01:00.
+    expect(() => Instant.parse('2016-12-31T12:00:60Z')).toThrow(
+      "Bad date-time '2016-12-31T12:00:60Z': second 60 is allowed only at 23:59 (a leap second)",
+    );
+    expect(() => parseIsoDateTime('2017-03-01T23:58:60.5')).toThrow(TimeFormatError);
+    // The leap second of IERS Bulletin C 52 itself still parses, one second before midnight.
+    const leap = Instant.parse('2016-12-31T23:59:60Z');
+    expect(Instant.parse('2017-01-01T00:00:00Z').secondsSince(leap)).toBeCloseTo(1, 6);
+  });
+
+  it('years before 1 print with a sign and four digits and read back (Meeus p. 62 table, from memory)', () => {
+    // Meeus 1998 ch. 7, p. 62: −123 Dec 31.0 = JD 1676496.5; −1000 Jul 12.5 = JD 1356001.0.
+    // Before the fix the first printed as '-123-12-31…', which parse() refused.
+    const a = Instant.fromJd(1676496.5, 'TT');
+    expect(a.toIso(0)).toBe('-0123-12-31T00:00:00 TT');
+    expect(Instant.parse(a.toIso(0)).jd).toBe(1676496.5);
+    const b = Instant.fromJd(1356001.0, 'TT');
+    expect(b.toIso(0)).toBe('-1000-07-12T12:00:00 TT');
+    expect(Instant.parse(b.toIso(0)).jd).toBe(1356001.0);
   });
 
   it('calendar with fractional day → JD TT, the readers\' helper (Meeus ch. 7 + IERS)', () => {
