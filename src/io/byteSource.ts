@@ -38,8 +38,11 @@ export function fileErrorReason(err: unknown): string {
   return REASONS[code] ?? `cannot read (${code || (err as Error)?.message || String(err)})`;
 }
 
-/** The raw chunks of `path` ('-' = stdin), checked up front so errors name the file. */
-async function rawStream(path: string): Promise<AsyncIterable<Buffer>> {
+/**
+ * The raw chunks of `path` ('-' = stdin), checked up front so errors name the file. A file
+ * stream is returned as a Readable so that an early exit can destroy it (closing the file).
+ */
+async function rawStream(path: string): Promise<Readable> {
   if (path === '-') return process.stdin;
   try {
     const st = await fsp.stat(path);
@@ -73,6 +76,8 @@ async function* gunzipped(raw: AsyncIterable<Buffer>, path: string): AsyncGenera
   } catch (err) {
     if (err instanceof UnreadableInputError) throw err;
     throw new UnreadableInputError(path, `corrupt gzip data (${(err as Error).message})`);
+  } finally {
+    input.destroy(); // a no-op once drained; on an early exit it stops pulling from the file
   }
 }
 
@@ -84,26 +89,35 @@ function checkNotBinary(chunk: Buffer, path: string): void {
 /**
  * Decoded chunks of `path`; `info` is filled as the source is drained (complete when the
  * iteration ends). The first chunk is probed for gzip magic and then for NUL bytes.
+ * However the iteration ends (drained, a binary probe, a consumer that throws or breaks),
+ * the file is closed: an early exit would otherwise leave the file stream suspended inside
+ * `hashed`, its descriptor open until garbage collection.
  */
 export async function* openByteSource(path: string, info: ByteSourceInfo): AsyncGenerator<Buffer> {
   const hash = createHash('sha256');
-  const raw = hashed(await rawStream(path), hash, info, path);
-  const first = await raw.next();
-  if (!first.done) {
-    const head: Buffer = first.value;
-    info.gzip = head.length >= 2 && head[0] === 0x1f && head[1] === 0x8b;
-    const all = (async function* () {
-      yield head;
-      yield* raw;
-    })();
-    let probed = false;
-    for await (const chunk of info.gzip ? gunzipped(all, path) : all) {
-      if (!probed) {
-        checkNotBinary(chunk, path);
-        probed = true;
+  const source = await rawStream(path);
+  const raw = hashed(source, hash, info, path);
+  try {
+    const first = await raw.next();
+    if (!first.done) {
+      const head: Buffer = first.value;
+      info.gzip = head.length >= 2 && head[0] === 0x1f && head[1] === 0x8b;
+      const all = (async function* () {
+        yield head;
+        yield* raw;
+      })();
+      let probed = false;
+      for await (const chunk of info.gzip ? gunzipped(all, path) : all) {
+        if (!probed) {
+          checkNotBinary(chunk, path);
+          probed = true;
+        }
+        yield chunk;
       }
-      yield chunk;
     }
+  } finally {
+    // never stdin: it belongs to the process; destroying a drained file stream is a no-op
+    if (source !== process.stdin) source.destroy();
   }
   info.sha256 = hash.digest('hex');
 }

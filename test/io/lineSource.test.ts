@@ -11,6 +11,7 @@ import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { afterAll, describe, expect, it } from 'vitest';
 import { forEachLine, UnreadableInputError } from '../../src/io/index.js';
+import { CAN_LIST_OPEN_FILES, closedWithin } from './openFiles.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'wayward-lines-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -57,6 +58,17 @@ describe('whole-file problems', () => {
   it('binary file (NUL bytes in the first chunk)', async () => {
     const p = file('data.bin', Buffer.from([0x50, 0x4b, 0x03, 0x04, 0x00, 0x00, 0x41, 0x0a]));
     expect(await fatal(p)).toBe(`${p}: binary content (NUL byte at offset 4), not a text file`);
+  });
+
+  it.runIf(CAN_LIST_OPEN_FILES)('the file is closed after a fatal probe or a consumer that throws', async () => {
+    const bin = file('closed.bin', Buffer.from([0x41, 0x00, 0x0a]));
+    await fatal(bin);
+    expect(await closedWithin(bin)).toBe(0);
+    const boom = new Error('consumer failed');
+    for (const p of [file('closed.txt', 'one\ntwo\n'), file('closed.gz', gzipSync('one\ntwo\n'))]) {
+      await expect(forEachLine(p, () => { throw boom; })).rejects.toBe(boom);
+      expect(await closedWithin(p), p).toBe(0);
+    }
   });
 
   it('corrupt gzip', async () => {

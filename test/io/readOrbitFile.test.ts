@@ -17,6 +17,7 @@ import {
   detectFormat, readOrbitFile, UnreadableInputError, type InputError, type ReadOrbitOptions,
 } from '../../src/io/index.js';
 import { readFixtureBytes, readFixtureText } from './fixtureCases.js';
+import { CAN_LIST_OPEN_FILES, closedWithin } from './openFiles.js';
 
 const FIX = new URL('../fixtures/', import.meta.url);
 const ORBITS_GZ = new URL('orbit-export/orbits-export-sample.txt.gz', FIX);
@@ -83,7 +84,9 @@ describe('real samples', () => {
 
   it('an exception from the row callback reaches the caller unchanged (and the file is closed)', async () => {
     const boom = new TypeError('consumer failed');
-    await expect(readOrbitFile(temp(ORBITS), {}, () => { throw boom; }, () => {})).rejects.toBe(boom);
+    const p = temp(ORBITS);
+    await expect(readOrbitFile(p, {}, () => { throw boom; }, () => {})).rejects.toBe(boom);
+    if (CAN_LIST_OPEN_FILES) expect(await closedWithin(p)).toBe(0);
   });
 
   it('empty file: zero rows, no error', async () => {
