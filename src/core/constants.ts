@@ -132,3 +132,4 @@ export const SOLAR_IRRADIANCE_1AU_W_PER_M2 = 1361;
 export const DEG_PER_RAD = 180 / Math.PI;
 export const RAD_PER_DEG = Math.PI / 180;
 export const ARCSEC_PER_RAD = DEG_PER_RAD * 3600;
+export const RAD_PER_ARCSEC = RAD_PER_DEG / 3600;

@@ -2,10 +2,8 @@
  * Earth rotation angle and Greenwich mean sidereal time. Times are two-part Julian dates
  * (any split: jd1 + jd2) so the fraction of the day keeps full precision.
  */
-import { DAYS_PER_JULIAN_CENTURY, J2000_JD, RAD_PER_DEG } from './constants.js';
+import { DAYS_PER_JULIAN_CENTURY, J2000_JD, RAD_PER_ARCSEC } from './constants.js';
 import { TWO_PI, wrapTwoPi } from './math.js';
-
-const RAD_PER_ARCSEC = RAD_PER_DEG / 3600;
 
 /**
  * Earth rotation angle θ (rad, in [0, 2π)) at UT1.

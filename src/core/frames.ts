@@ -4,7 +4,7 @@
  * obliquity ε0 = 84 381.406″ (IAU 2006, Capitaine et al. 2003; constants.ts).
  *   equatorial = R1(−ε0) · ecliptic:  y_eq = y cos ε0 − z sin ε0,  z_eq = y sin ε0 + z cos ε0
  * The ~23 mas frame bias between the J2000 mean equator and the ICRF is left out
- * (0.11 µrad: 17 m at 1 au).
+ * (0.11 µrad: about 17 km at 1 au, i.e. 23 mas in direction as seen from the Sun).
  *
  * All functions work in place on caller-owned Float64Array buffers.
  */

@@ -8,9 +8,7 @@
  *   θ_A =              2004.191903″ t − 0.4294934″ t² − 0.04182264″ t³ − 0.000007089″ t⁴ − 0.0000001274″ t⁵
  * t in Julian centuries of TT from J2000. Frame bias is not included.
  */
-import { DAYS_PER_JULIAN_CENTURY, J2000_JD, RAD_PER_DEG } from './constants.js';
-
-const RAD_PER_ARCSEC = RAD_PER_DEG / 3600;
+import { DAYS_PER_JULIAN_CENTURY, J2000_JD, RAD_PER_ARCSEC } from './constants.js';
 
 /**
  * Write the 3×3 precession matrix P (row-major) at the TT date into out[offset..offset+8].
