@@ -7,6 +7,7 @@
  * 103–158 ('Halley' from '1P/Halley', 'Hale-Bopp' from 'C/1995 O1 (Hale-Bopp)').
  */
 import { calendarToJd } from '../core/julian.js';
+import { isCalendarDay } from './calendarDay.js';
 import { COMET_COLUMNS as C, COMET_ORBIT_TYPES } from './cometExportLayout.js';
 import { fieldText } from './fixedField.js';
 import { columnsOf, failAt, isSeparatorLine, optionalNumber, requiredNumber, type Field } from './fixedFieldRead.js';
@@ -42,7 +43,7 @@ function readPerihelion(line: string, row: OrbitRow, file: string, lineNo: numbe
   const year = requiredNumber(line, C.tpYear, 'perihelion year', file, lineNo);
   const month = requiredNumber(line, C.tpMonth, 'perihelion month', file, lineNo);
   const day = requiredNumber(line, C.tpDay, 'perihelion day', file, lineNo);
-  if (!Number.isInteger(year) || !Number.isInteger(month) || month < 1 || month > 12 || day < 1 || day >= 32) {
+  if (!isCalendarDay(year, month, day)) {
     failAt(file, lineNo, line, C.tpYear, `perihelion date is not a calendar date: '${fieldText(line, C.tpYear[0], C.tpDay[1])}' (columns 15–29)`);
   }
   row.tpJdTT = calendarToJd(year, month, day);
@@ -57,8 +58,8 @@ function readEpoch(line: string, row: OrbitRow, file: string, lineNo: number): v
   const m = /^(\d{4})(\d{2})(\d{2})$/.exec(text);
   const month = m ? Number(m[2]) : 0;
   const day = m ? Number(m[3]) : 0;
-  if (!m || month < 1 || month > 12 || day < 1 || day > 31) {
-    failAt(file, lineNo, line, f, `epoch is not YYYYMMDD: '${text}' (columns 82–89)`);
+  if (!m || !isCalendarDay(Number(m[1]), month, day)) {
+    failAt(file, lineNo, line, f, `epoch is not a YYYYMMDD date: '${text}' (columns 82–89)`);
   }
   row.epochJdTT = calendarToJd(Number(m[1]), month, day);
 }

@@ -11,6 +11,7 @@
  */
 import { MJD_OFFSET } from '../core/constants.js';
 import { calendarToJd } from '../core/julian.js';
+import { isCalendarDay } from './calendarDay.js';
 import { PackedFormError } from './errors.js';
 import { unpackEpochJd } from './packedEpoch.js';
 import { unpackNumber } from './packedNumber.js';
@@ -29,7 +30,7 @@ export function cellNumber(text: string): number {
 function calendar(y: string, mo: string, d: string, h = '0', mi = '0', s = '0', text = ''): number {
   const month = Number(mo);
   const day = Number(d);
-  if (month < 1 || month > 12 || day < 1 || day >= 32 || Number(h) > 24 || Number(mi) > 59 || Number(s) >= 61) {
+  if (!isCalendarDay(Number(y), month, day) || Number(h) > 24 || Number(mi) > 59 || Number(s) >= 61) {
     throw new PackedFormError('not a calendar date', text);
   }
   return calendarToJd(Number(y), month, day + (Number(h) + Number(mi) / 60 + Number(s) / 3600) / 24);

@@ -1,6 +1,7 @@
 export * from './types.js';
 export * from './errors.js';
 export * from './base62.js';
+export * from './calendarDay.js';
 export * from './fixedField.js';
 export * from './fixedFieldRead.js';
 export * from './packedNumber.js';

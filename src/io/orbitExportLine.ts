@@ -13,6 +13,7 @@
  */
 import { GAUSS_K, RAD_PER_DEG } from '../core/constants.js';
 import { calendarToJd } from '../core/julian.js';
+import { isCalendarDay } from './calendarDay.js';
 import { PackedFormError } from './errors.js';
 import { fieldText, isBlankField, parseDigits } from './fixedField.js';
 import { columnsOf, failAt, isSeparatorLine, optionalNumber, requiredNumber } from './fixedFieldRead.js';
@@ -90,8 +91,8 @@ function readLastObs(line: string, row: OrbitRow, file: string, lineNo: number):
   const year = parseDigits(line, a, a + 4);
   const month = parseDigits(line, a + 4, a + 6);
   const day = parseDigits(line, a + 6, a + 8);
-  if (year < 0 || month < 1 || month > 12 || day < 1 || day > 31 || !isBlankField(line, b, line.length)) {
-    failAt(file, lineNo, line, C.lastObs, `date of last observation is not YYYYMMDD: '${fieldText(line, a, line.length)}' (${columnsOf(C.lastObs)})`);
+  if (year < 0 || !isCalendarDay(year, month, day) || !isBlankField(line, b, line.length)) {
+    failAt(file, lineNo, line, C.lastObs, `date of last observation is not a YYYYMMDD date: '${fieldText(line, a, line.length)}' (${columnsOf(C.lastObs)})`);
   }
   row.lastObsJdTT = calendarToJd(year, month, day);
 }

@@ -8,16 +8,9 @@
  */
 import { calendarToJd, jdToCalendar } from '../core/julian.js';
 import { base62Encode, base62Value } from './base62.js';
+import { daysInMonth } from './calendarDay.js';
 import { PackedFormError } from './errors.js';
 import { packCenturyYear, unpackCenturyYear } from './packedProvisional.js';
-
-const DAYS_IN_MONTH = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
-
-/** Days in a month, February by the Gregorian leap-year rule (common practice). */
-function daysInMonth(year: number, month: number): number {
-  if (month === 2) return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28;
-  return DAYS_IN_MONTH[month - 1];
-}
 
 /**
  * Julian date (at 0h) of a packed 5-character date; PackedFormError naming the bad part
