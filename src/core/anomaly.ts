@@ -19,8 +19,18 @@ export function meanFromHyperbolic(hyperbolicAnomaly: number, e: number): number
   return (e - 1) * hyperbolicAnomaly + e * sinhXMinusX(hyperbolicAnomaly);
 }
 
+// Misuse guards: outside its conic the square roots below give NaN (or, at e = 1, a wrong
+// finite angle) that would otherwise flow on silently.
+function checkElliptic(name: string, e: number): void {
+  if (!(e >= 0 && e < 1)) throw new RangeError(`${name}: eccentricity ${e} outside [0, 1)`);
+}
+function checkHyperbolic(name: string, e: number): void {
+  if (!(e > 1)) throw new RangeError(`${name}: eccentricity ${e} outside (1, ∞)`);
+}
+
 /** ν from E: tan(ν/2) = √((1+e)/(1−e)) tan(E/2). Danby 1988 ch. 6. */
 export function trueFromEccentric(eccentricAnomalyRad: number, e: number): number {
+  checkElliptic('trueFromEccentric', e);
   const turns = Math.round(eccentricAnomalyRad / (2 * Math.PI)) * 2 * Math.PI;
   const h = 0.5 * (eccentricAnomalyRad - turns);
   return 2 * Math.atan2(Math.sqrt(1 + e) * Math.sin(h), Math.sqrt(1 - e) * Math.cos(h)) + turns;
@@ -28,6 +38,7 @@ export function trueFromEccentric(eccentricAnomalyRad: number, e: number): numbe
 
 /** E from ν (elliptic), same revolution. */
 export function eccentricFromTrue(trueAnomalyRad: number, e: number): number {
+  checkElliptic('eccentricFromTrue', e);
   const turns = Math.round(trueAnomalyRad / (2 * Math.PI)) * 2 * Math.PI;
   const h = 0.5 * (trueAnomalyRad - turns);
   return 2 * Math.atan2(Math.sqrt(1 - e) * Math.sin(h), Math.sqrt(1 + e) * Math.cos(h)) + turns;
@@ -35,11 +46,13 @@ export function eccentricFromTrue(trueAnomalyRad: number, e: number): number {
 
 /** ν from H: tan(ν/2) = √((e+1)/(e−1)) tanh(H/2). Danby 1988 ch. 6. */
 export function trueFromHyperbolic(hyperbolicAnomaly: number, e: number): number {
+  checkHyperbolic('trueFromHyperbolic', e);
   return 2 * Math.atan(Math.sqrt((e + 1) / (e - 1)) * Math.tanh(0.5 * hyperbolicAnomaly));
 }
 
 /** H from ν (|ν| below the asymptote angle acos(−1/e), else RangeError). */
 export function hyperbolicFromTrue(trueAnomalyRad: number, e: number): number {
+  checkHyperbolic('hyperbolicFromTrue', e);
   const h = 0.5 * trueAnomalyRad;
   const t = (Math.sqrt(e - 1) * Math.sin(h)) / (Math.sqrt(e + 1) * Math.cos(h));
   if (!(Math.abs(t) < 1)) {
@@ -52,14 +65,14 @@ export function hyperbolicFromTrue(trueAnomalyRad: number, e: number): number {
 export function trueFromMean(meanAnomalyRad: number, e: number): number {
   if (e < 1) return trueFromEccentric(solveKeplerElliptic(meanAnomalyRad, e), e);
   if (e > 1) return trueFromHyperbolic(solveKeplerHyperbolic(meanAnomalyRad, e), e);
-  throw new RangeError('trueFromMean: e = 1 has no mean anomaly; use trueAnomalyFromPerihelionTime');
+  throw new RangeError(`trueFromMean: e=${e} has no mean anomaly (e = 1: use trueAnomalyFromPerihelionTime)`);
 }
 
 /** M from ν for e < 1 or e > 1. */
 export function meanFromTrue(trueAnomalyRad: number, e: number): number {
   if (e < 1) return meanFromEccentric(eccentricFromTrue(trueAnomalyRad, e), e);
   if (e > 1) return meanFromHyperbolic(hyperbolicFromTrue(trueAnomalyRad, e), e);
-  throw new RangeError('meanFromTrue: e = 1 has no mean anomaly; use perihelionTimeOffsetDays');
+  throw new RangeError(`meanFromTrue: e=${e} has no mean anomaly (e = 1: use perihelionTimeOffsetDays)`);
 }
 
 function checkConic(name: string, qAu: number, e: number, mu: number): void {

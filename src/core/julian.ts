@@ -9,6 +9,10 @@ export function calendarToJd(year: number, month: number, day: number): number {
   if (!Number.isFinite(year) || !Number.isFinite(month) || !Number.isFinite(day)) {
     throw new RangeError(`calendarToJd: non-finite date ${year}-${month}-${day}`);
   }
+  // Eq. 7.1 folds month 13 into January of the next year without a word: refuse it.
+  if (!Number.isInteger(year) || !Number.isInteger(month) || month < 1 || month > 12) {
+    throw new RangeError(`calendarToJd: year must be an integer and month an integer 1..12: ${year}-${month}-${day}`);
+  }
   let y = year;
   let m = month;
   if (m <= 2) {

@@ -95,5 +95,9 @@ describe('Julian dates (Meeus ch. 7)', () => {
   it('refuses non-finite input with RangeError', () => {
     expect(() => calendarToJd(2000, NaN, 1)).toThrow(RangeError);
     expect(() => jdToCalendar(-1)).toThrow(RangeError);
+    // Month 13 used to fold silently into January of the next year (eq. 7.1 allows it).
+    expect(() => calendarToJd(2020, 13, 1)).toThrow(/month an integer 1\.\.12/);
+    expect(() => calendarToJd(2020, 0, 1)).toThrow(RangeError);
+    expect(() => calendarToJd(2020.5, 6, 1)).toThrow(RangeError);
   });
 });

@@ -155,6 +155,19 @@ describe('anomaly conversions', () => {
     );
   });
 
+  it('refuses an eccentricity outside the conic with RangeError instead of returning NaN', () => {
+    // Before the guards trueFromEccentric(1, 1.2) and eccentricFromTrue(1, 1.5) returned NaN
+    // and trueFromEccentric(1, 1) a finite wrong angle.
+    expect(() => trueFromEccentric(1, 1.2)).toThrow('trueFromEccentric: eccentricity 1.2 outside [0, 1)');
+    expect(() => trueFromEccentric(1, 1)).toThrow(RangeError);
+    expect(() => eccentricFromTrue(1, 1.5)).toThrow(RangeError);
+    expect(() => eccentricFromTrue(1, -0.1)).toThrow(RangeError);
+    expect(() => trueFromHyperbolic(1, 0.5)).toThrow('trueFromHyperbolic: eccentricity 0.5 outside (1, ∞)');
+    expect(() => hyperbolicFromTrue(0.1, 0.5)).toThrow(/eccentricity 0.5 outside/);
+    expect(() => meanFromTrue(0.1, NaN)).toThrow('meanFromTrue: e=NaN has no mean anomaly');
+    expect(() => trueFromMean(0.1, 1)).toThrow(/use trueAnomalyFromPerihelionTime/);
+  });
+
   it('perihelion time ↔ mean anomaly: n = k at a = 1 au, the Gaussian year of 365.2568983 d (IAU 1976; common practice)', () => {
     expect(meanMotionRadPerDay(1)).toBe(GAUSS_K);
     expect((2 * Math.PI) / meanMotionRadPerDay(1)).toBeCloseTo(365.2568983, 6);
