@@ -1,3 +1,5 @@
+// Tisserand parameter against Murray & Dermott 1999 eq. 3.49 (the a-form) and published T_J
+// values of known bodies (recalled, marked "from memory" at each check).
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { tisserandParameter } from '../../src/core/tisserand.js';
@@ -11,7 +13,7 @@ function tisserandAForm(aP: number, a: number, e: number, iRad: number): number 
 }
 
 describe('Tisserand parameter w.r.t. Jupiter', () => {
-  it('2P/Encke: T_J ≈ 3.025 (published value; Levison 1996 bands)', () => {
+  it('2P/Encke: T_J ≈ 3.025 (published value, from memory; above 3, as Levison 1996 places Encke-type comets)', () => {
     // Elements of 2P/Encke: a = 2.215 au, e = 0.8483, i = 11.78° (from memory).
     const a = 2.215, e = 0.8483;
     const t = tisserandParameter(aJ, a * (1 - e), e, 11.78 * RAD_PER_DEG);
@@ -19,7 +21,7 @@ describe('Tisserand parameter w.r.t. Jupiter', () => {
     expect(Math.abs(t - 3.025)).toBeLessThan(0.005);
   });
 
-  it('67P/Churyumov–Gerasimenko: T_J ≈ 2.744 (published value)', () => {
+  it('67P/Churyumov–Gerasimenko: T_J ≈ 2.744 (published value, from memory)', () => {
     // Elements: a = 3.4628 au, e = 0.6410, i = 7.04° (from memory).
     const a = 3.4628, e = 0.641;
     const t = tisserandParameter(aJ, a * (1 - e), e, 7.04 * RAD_PER_DEG);
