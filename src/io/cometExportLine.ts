@@ -2,7 +2,7 @@
  * Parser of one line of the one-line comet orbit export format (published column layout of
  * the one-line comet orbit export format; columns in ./cometExportLayout.ts). The row gets
  * kind 'comet', the perihelion time and distance; mean anomaly and mean motion are NaN;
- * a = q / (1 − e) when e < 1 (NaN otherwise). The designation is the canonical readable
+ * a = q / (1 − e) when e < 1 and q > 0 (NaN otherwise; ./semimajorAxis.ts). The designation is the canonical readable
  * form of the packed columns 1–12 ('1P', 'C/1995 O1'); the name is taken from columns
  * 103–158 ('Halley' from '1P/Halley', 'Hale-Bopp' from 'C/1995 O1 (Hale-Bopp)').
  */
@@ -12,6 +12,7 @@ import { COMET_COLUMNS as C, COMET_ORBIT_TYPES } from './cometExportLayout.js';
 import { fieldText } from './fixedField.js';
 import { columnsOf, failAt, isSeparatorLine, optionalNumber, requiredNumber, type Field } from './fixedFieldRead.js';
 import { unpackComet } from './packedComet.js';
+import { semimajorAxisFromPerihelion } from './semimajorAxis.js';
 import type { LineOutcome, OrbitRow } from './types.js';
 
 /** Columns 1–12 and 103–158: packed and readable designation, name. */
@@ -93,7 +94,7 @@ export function parseCometExportLine(line: string, row: OrbitRow, file: string, 
   row.periDeg = requiredNumber(line, C.peri, 'argument of perihelion', file, lineNo);
   row.nodeDeg = requiredNumber(line, C.node, 'longitude of the ascending node', file, lineNo);
   row.iDeg = requiredNumber(line, C.incl, 'inclination', file, lineNo);
-  row.aAu = row.e < 1 ? row.qAu / (1 - row.e) : NaN;
+  row.aAu = semimajorAxisFromPerihelion(row.qAu, row.e);
   readEpoch(line, row, file, lineNo);
   row.H = optionalNumber(line, C.H, 'absolute magnitude', file, lineNo);
   row.G = optionalNumber(line, C.G, 'slope parameter', file, lineNo);

@@ -3,15 +3,15 @@
  * readers of ./csvValues.ts. Every field of the scratch row is assigned. Angles are taken
  * in degrees. Derived values, each only where the file does not give it:
  * - a = q / (1 − e) for e < 1; else a = (k / n)^(2/3) from a mean motion n (deg/day),
- *   Kepler's third law in the Gaussian system (GAUSS_K; Gauss 1809, Theoria Motus, from memory);
+ *   Kepler's third law in the Gaussian system (both in ./semimajorAxis.ts);
  * - epoch = tp when the file gives a perihelion time and no epoch (elements referred to it);
  * - arcDays = last_obs − first_obs when both are full dates.
  * kind = 'comet' for comet designations ('1P', 'C/1995 O1'), else 'asteroid'.
  */
-import { GAUSS_K, RAD_PER_DEG } from '../core/constants.js';
 import type { ColumnIndex, CsvField } from './columnMap.js';
 import { cellDesignation, cellJd, cellNumber, cellYear } from './csvValues.js';
 import { PackedFormError } from './errors.js';
+import { semimajorAxisFromMeanMotion, semimajorAxisFromPerihelion } from './semimajorAxis.js';
 import { InputError, type OrbitRow } from './types.js';
 
 /** Where a record came from, for error messages. */
@@ -82,10 +82,8 @@ export function parseCsvRecord(record: readonly string[], index: ColumnIndex, ct
   row.qAu = cell(record, index, 'q', ctx, cellNumber, NaN);
   row.meanMotionDegPerDay = cell(record, index, 'n', ctx, cellNumber, NaN);
   row.aAu = cell(record, index, 'a', ctx, cellNumber, NaN);
-  if (Number.isNaN(row.aAu) && row.qAu > 0 && row.e < 1) row.aAu = row.qAu / (1 - row.e);
-  if (Number.isNaN(row.aAu) && row.meanMotionDegPerDay > 0) {
-    row.aAu = Math.cbrt((GAUSS_K / (row.meanMotionDegPerDay * RAD_PER_DEG)) ** 2);
-  }
+  if (Number.isNaN(row.aAu)) row.aAu = semimajorAxisFromPerihelion(row.qAu, row.e);
+  if (Number.isNaN(row.aAu)) row.aAu = semimajorAxisFromMeanMotion(row.meanMotionDegPerDay);
   if (Number.isNaN(row.aAu) && Number.isNaN(row.qAu)) required(NaN, index.a >= 0 ? 'a' : 'q', index, ctx);
   row.H = cell(record, index, 'H', ctx, cellNumber, NaN);
   row.G = cell(record, index, 'G', ctx, cellNumber, NaN);

@@ -9,6 +9,7 @@ export * from './packedProvisional.js';
 export * from './packedComet.js';
 export * from './packedDesignation.js';
 export * from './packedEpoch.js';
+export * from './semimajorAxis.js';
 export * from './orbitExportLayout.js';
 export * from './orbitExportFormat.js';
 export * from './cometExportLayout.js';

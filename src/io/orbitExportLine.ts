@@ -6,18 +6,19 @@
  * file reader's business (./detectFormat.ts, ./readOrbitFile.ts). Every field of the
  * scratch row is assigned, so the row needs no reset between lines. A bad data line throws InputError (file, line, column).
  *
- * Missing semimajor axis: computed from the mean daily motion n by Kepler's third law in
- * the Gaussian system, n = k a^(-3/2) (k = GAUSS_K in rad/day, massless body; Gauss 1809,
- * Theoria Motus, book I art. 1–6, from memory), i.e. a = (k / n)^(2/3) with n in rad/day.
- * Arc as first–last years: arcDays = (last − first) × 365.25, good to about a year.
+ * Missing semimajor axis: computed from the mean daily motion n by Kepler's third law
+ * (./semimajorAxis.ts).
+ * Arc as first–last years: arcDays = (last − first) × 365.25 (the Julian year), good to
+ * about a year.
  */
-import { GAUSS_K, RAD_PER_DEG } from '../core/constants.js';
+import { DAYS_PER_JULIAN_YEAR } from '../core/constants.js';
 import { calendarToJd } from '../core/julian.js';
 import { isCalendarDay } from './calendarDay.js';
 import { PackedFormError } from './errors.js';
 import { fieldText, isBlankField, parseDigits } from './fixedField.js';
 import { columnsOf, failAt, isSeparatorLine, optionalNumber, requiredNumber } from './fixedFieldRead.js';
 import { ORBIT_COLUMNS as C } from './orbitExportLayout.js';
+import { semimajorAxisFromMeanMotion } from './semimajorAxis.js';
 import { unpackDesignation } from './packedDesignation.js';
 import { unpackEpochJd } from './packedEpoch.js';
 import { unpackNumber } from './packedNumber.js';
@@ -74,7 +75,7 @@ function readArc(line: string, row: OrbitRow, file: string, lineNo: number): voi
   if (first >= 0 && last >= 0) {
     row.firstObsYear = first;
     row.lastObsYear = last;
-    row.arcDays = (last - first) * 365.25;
+    row.arcDays = (last - first) * DAYS_PER_JULIAN_YEAR;
     return;
   }
   const text = fieldText(line, a, b);
@@ -124,11 +125,10 @@ function readElements(line: string, row: OrbitRow, file: string, lineNo: number)
   row.meanMotionDegPerDay = optionalNumber(line, C.n, 'mean daily motion', file, lineNo);
   row.aAu = optionalNumber(line, C.a, 'semimajor axis', file, lineNo);
   if (Number.isNaN(row.aAu)) {
-    const n = row.meanMotionDegPerDay;
-    if (!(n > 0)) {
+    row.aAu = semimajorAxisFromMeanMotion(row.meanMotionDegPerDay);
+    if (Number.isNaN(row.aAu)) {
       failAt(file, lineNo, line, C.a, `missing semimajor axis and no positive mean daily motion to derive it (${columnsOf(C.n)}, ${columnsOf(C.a)})`);
     }
-    row.aAu = Math.cbrt((GAUSS_K / (n * RAD_PER_DEG)) ** 2); // a = (k/n)^(2/3)
   }
 }
 
