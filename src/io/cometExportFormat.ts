@@ -1,12 +1,15 @@
 /**
  * Writer of the one-line comet orbit export format (published column layout of the
  * one-line comet orbit export format; columns in ./cometExportLayout.ts). The perihelion
- * date is written to 1e-4 day (8.6 s) as the layout allows; trailing blanks are trimmed.
+ * date is written to 1e-4 day (8.6 s) as the layout allows; the epoch, a whole day, must
+ * fall at 0h (RangeError otherwise, as in the orbit export writer); trailing blanks are
+ * trimmed.
  */
 import { jdToCalendar } from '../core/julian.js';
 import type { OrbitRow } from './types.js';
 import { fixedDecimal, fixedText } from './fixedField.js';
 import { packDesignation } from './packedDesignation.js';
+import { calendarDayAt0h } from './packedEpoch.js';
 
 const two = (v: number): string => String(v).padStart(2, '0');
 
@@ -26,10 +29,11 @@ function perihelionColumns(tpJdTT: number): string {
   return `${d.year} ${two(d.month)} ${fixedDecimal(d.day, 4, 7, 'perihelion day')}`;
 }
 
+/** Columns 82–89: epoch YYYYMMDD at 0h TT; blank when the row has none. */
 function epochColumns(epochJdTT: number): string {
-  if (!Number.isFinite(epochJdTT)) return ' '.repeat(8);
-  const d = jdToCalendar(epochJdTT + 1e-9); // guards a 0h epoch a rounding below midnight
-  return `${d.year}${two(d.month)}${two(Math.floor(d.day))}`;
+  if (Number.isNaN(epochJdTT)) return ' '.repeat(8);
+  const d = calendarDayAt0h(epochJdTT, 'formatCometExportLine', 'the epoch field');
+  return `${d.year}${two(d.month)}${two(d.day)}`;
 }
 
 /** Readable designation and name: `1P/Halley` for numbered comets, `C/1995 O1 (Hale-Bopp)` else. */
@@ -53,7 +57,7 @@ export function formatCometExportLine(row: OrbitRow): string {
     fixedDecimal(row.H, 1, 4, 'H'), ' ',
     fixedDecimal(row.G, 1, 4, 'G'), '  ',
     fixedText(readableText(row, packed), 56, 'designation and name'), ' ',
-    row.reference, // last field: real references ('MPEC 2026-K60') run past column 168
+    row.reference, // last field: real references (a circular's citation) run past column 168
   ];
   return parts.join('').trimEnd();
 }

@@ -6,7 +6,7 @@
  * The date is at 0h of the time scale the file uses for epochs (TT); returned as a Julian
  * date through core/julian.ts (Meeus ch. 7).
  */
-import { calendarToJd, jdToCalendar } from '../core/julian.js';
+import { calendarToJd, jdToCalendar, type CalendarDate } from '../core/julian.js';
 import { base62Encode, base62Value } from './base62.js';
 import { daysInMonth } from './calendarDay.js';
 import { PackedFormError } from './errors.js';
@@ -40,14 +40,24 @@ export function packDate(year: number, month: number, day: number): string {
 }
 
 /**
+ * Calendar date, whole day, of a Julian date that falls at 0h (within 1e-6 day, ~0.09 s);
+ * RangeError `WHO: JD … is not at 0h; FORM carries whole days` otherwise. For the writers
+ * of whole-day date fields, which must not drop a fraction of a day silently.
+ */
+export function calendarDayAt0h(jd: number, who: string, form: string): CalendarDate {
+  const z = Math.round(jd + 0.5) - 0.5;
+  if (!Number.isFinite(jd) || Math.abs(jd - z) > 1e-6) {
+    throw new RangeError(`${who}: JD ${jd} is not at 0h; ${form} carries whole days`);
+  }
+  const d = jdToCalendar(z);
+  return { year: d.year, month: d.month, day: Math.round(d.day) };
+}
+
+/**
  * Packed form of a Julian date that falls at 0h (within 1e-6 day, ~0.09 s); RangeError
  * otherwise, since the form carries whole days only.
  */
 export function packEpochJd(jd: number): string {
-  const z = Math.round(jd + 0.5) - 0.5;
-  if (!Number.isFinite(jd) || Math.abs(jd - z) > 1e-6) {
-    throw new RangeError(`packEpochJd: JD ${jd} is not at 0h; the packed date form carries whole days`);
-  }
-  const d = jdToCalendar(z);
-  return packDate(d.year, d.month, Math.round(d.day));
+  const d = calendarDayAt0h(jd, 'packEpochJd', 'the packed date form');
+  return packDate(d.year, d.month, d.day);
 }

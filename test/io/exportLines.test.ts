@@ -123,4 +123,15 @@ describe('writers reproduce the real lines', () => {
     row.epochJdTT += 0.25;
     expect(() => formatOrbitExportLine(row)).toThrow(RangeError);
   });
+
+  it('comet export: an epoch not at 0h is a RangeError, not a fraction of a day dropped', () => {
+    const row = emptyOrbitRow();
+    parseCometExportLine(sampleLines('comet-export/comets-export-sample.txt.gz')[0], row, 'x', 1);
+    const atZeroH = row.epochJdTT;
+    row.epochJdTT = atZeroH + 0.25;
+    expect(() => formatCometExportLine(row)).toThrow(new RangeError(
+      `formatCometExportLine: JD ${atZeroH + 0.25} is not at 0h; the epoch field carries whole days`));
+    row.epochJdTT = atZeroH + 1e-7; // within the 1e-6 day (0.09 s) the form tolerates
+    expect(formatCometExportLine(row).slice(81, 89)).toBe(sampleLines('comet-export/comets-export-sample.txt.gz')[0].slice(81, 89));
+  });
 });
