@@ -2,24 +2,19 @@
  * `wayward propagate`: one body's orbit carried to another date, two-body (default) or with
  * the Sun, eight planets and the Sun's 1PN term (--nbody). Prints the heliocentric J2000
  * ecliptic state, the osculating elements and, with --distances, the heliocentric and
- * geocentric distances. The command parses and validates; runPropagate does the work and
- * returns the text, so tests call it directly.
+ * geocentric distances. The command parses and validates, finds the elements and formats the
+ * answer; the physics is core's propagateOrbit. runPropagate returns the text, so tests call
+ * it directly.
  *
  * Time scales: dates without a scale are TT (as catalogue epochs are); 'Z'/UTC, TAI and TDB
  * in the text are honoured; a bare number is a Julian date in TT. Dynamics run in TDB.
  */
 import { Command, InvalidArgumentError, Option } from 'commander';
-import { DEG_PER_RAD, GM_SUN_AU3_PER_DAY2, PLANETS, RAD_PER_DEG } from '../core/constants.js';
+import { DEG_PER_RAD, RAD_PER_DEG } from '../core/constants.js';
 import { Instant } from '../core/time.js';
 import { TimeFormatError } from '../core/isoTime.js';
-import { createEphemeris } from '../core/ephemeris.js';
-import { Vsop87Ephemeris } from '../core/vsop87Ephemeris.js';
-import { propagateTwoBody } from '../core/universal.js';
-import {
-  perihelionElementsToState, semimajorElementsToState, stateToPerihelionElements, stateToSemimajorElements,
-} from '../core/twoBody.js';
-import { propagateTestBodies } from '../core/propagateTestBodies.js';
-import type { Ephemeris } from '../core/types.js';
+import { EphemerisSpanError, propagateOrbit } from '../core/propagateOrbit.js';
+import type { OrbitElements, OrbitPropagation } from '../core/propagateOrbit.js';
 import { loadCatalogue } from './loadCatalogue.js';
 import { parseOutputFormat } from './optionParsers.js';
 
@@ -121,16 +116,12 @@ export function parseElements(value: string): ElementsSpec {
   return { form: 'semimajor', aAu, e, iDeg, nodeDeg, periDeg, meanAnomalyDeg: num('m'), epochJdTDB: parseDateToJdTDB(got.get('epoch')!) };
 }
 
-/** Heliocentric state at the elements' epoch. */
-function stateAtEpoch(el: ElementsSpec, out: Float64Array): void {
-  const mu = GM_SUN_AU3_PER_DAY2;
-  if (el.form === 'perihelion') {
-    perihelionElementsToState(el.qAu, el.e, el.iDeg * RAD_PER_DEG, el.nodeDeg * RAD_PER_DEG, el.periDeg * RAD_PER_DEG,
-      el.tpJdTDB, el.epochJdTDB, mu, out);
-  } else {
-    semimajorElementsToState(el.aAu, el.e, el.iDeg * RAD_PER_DEG, el.nodeDeg * RAD_PER_DEG, el.periDeg * RAD_PER_DEG,
-      el.meanAnomalyDeg * RAD_PER_DEG, mu, out);
-  }
+/** The command's elements (degrees) as the core takes them (radians). */
+function toOrbitElements(el: ElementsSpec): OrbitElements {
+  const angles = { iRad: el.iDeg * RAD_PER_DEG, nodeRad: el.nodeDeg * RAD_PER_DEG, periRad: el.periDeg * RAD_PER_DEG };
+  return el.form === 'perihelion'
+    ? { form: 'perihelion', qAu: el.qAu, e: el.e, ...angles, tpJdTDB: el.tpJdTDB, epochJdTDB: el.epochJdTDB }
+    : { form: 'semimajor', aAu: el.aAu, e: el.e, ...angles, meanAnomalyRad: el.meanAnomalyDeg * RAD_PER_DEG, epochJdTDB: el.epochJdTDB };
 }
 
 function normaliseDesignation(s: string): string {
@@ -162,17 +153,6 @@ async function elementsFromCatalogue(designation: string, files: string[]): Prom
   return { label: cat.designation[k], el };
 }
 
-/** A cached ephemeris over [lo, hi] (JD TDB) with one day of margin, or a usage error. */
-function ephemerisFor(lo: number, hi: number): Ephemeris {
-  const src = new Vsop87Ephemeris();
-  const start = lo - 1, end = hi + 1;
-  if (start < src.startJdTDB || end > src.endJdTDB) {
-    throw new PropagateUsageError(`dates JD ${lo.toFixed(1)}–${hi.toFixed(1)} lie outside the planetary ephemeris span `
-      + `JD ${src.startJdTDB}–${src.endJdTDB}`);
-  }
-  return createEphemeris({ startJdTDB: start, endJdTDB: end, source: src });
-}
-
 export interface PropagateResult {
   label: string;
   model: string;
@@ -185,7 +165,10 @@ export interface PropagateResult {
   steps: number | null; // integrator steps (N-body only)
 }
 
-/** Propagate one body as the options say. Throws PropagateUsageError / PropagateInputError. */
+/**
+ * Propagate one body as the options say: the elements from the options or the catalogue,
+ * the physics in core (propagateOrbit.ts). Throws PropagateUsageError / PropagateInputError.
+ */
 export async function propagateOne(opts: PropagateOptions): Promise<PropagateResult> {
   if ((opts.elements === undefined) === (opts.designation === undefined)) {
     throw new PropagateUsageError('give either --elements or a designation with --catalogue');
@@ -197,46 +180,24 @@ export async function propagateOne(opts: PropagateOptions): Promise<PropagateRes
     if (!opts.catalogue || opts.catalogue.length === 0) throw new PropagateUsageError('a designation needs --catalogue FILE');
     ({ label, el } = await elementsFromCatalogue(opts.designation!, opts.catalogue));
   }
-  const s0 = new Float64Array(6);
-  stateAtEpoch(el, s0);
-  const state = new Float64Array(6);
-  const lo = Math.min(el.epochJdTDB, opts.toJdTDB), hi = Math.max(el.epochJdTDB, opts.toJdTDB);
-  let eph: Ephemeris | null = null;
-  let steps: number | null = null;
-  let model = 'two-body (Sun only, universal variables)';
-  if (opts.nbody) {
-    eph = ephemerisFor(lo, hi);
-    const stats = propagateTestBodies({
-      epochJdTDB: el.epochJdTDB, states: s0,
-      forces: { planets: PLANETS, ephemeris: eph, relativity: opts.relativity },
-    }, opts.toJdTDB, state);
-    steps = stats.steps;
-    model = `N-body: Sun + 8 planets (VSOP87B)${opts.relativity ? ' + solar 1PN' : ''}, Gauss–Radau 15th order`;
-  } else {
-    propagateTwoBody(s0, opts.toJdTDB - el.epochJdTDB, GM_SUN_AU3_PER_DAY2, state);
+  let orbit: OrbitPropagation;
+  try {
+    orbit = propagateOrbit(toOrbitElements(el), opts);
+  } catch (err) {
+    if (err instanceof EphemerisSpanError) throw new PropagateUsageError(err.message);
+    throw err;
   }
-  const pe = new Float64Array(6);
-  stateToPerihelionElements(state, opts.toJdTDB, GM_SUN_AU3_PER_DAY2, pe);
-  let semimajor: PropagateResult['semimajor'] = null;
-  if (pe[1] < 1) {
-    const se = new Float64Array(6);
-    stateToSemimajorElements(state, GM_SUN_AU3_PER_DAY2, se);
-    semimajor = { aAu: se[0], meanAnomalyDeg: se[5] * DEG_PER_RAD };
-  }
-  let distances: PropagateResult['distances'] = null;
-  if (opts.distances) {
-    eph ??= ephemerisFor(opts.toJdTDB, opts.toJdTDB);
-    const earth = new Float64Array(6);
-    eph.helioState('earth', opts.toJdTDB, earth, 0);
-    distances = {
-      heliocentricAu: Math.hypot(state[0], state[1], state[2]),
-      geocentricAu: Math.hypot(state[0] - earth[0], state[1] - earth[1], state[2] - earth[2]),
-    };
-  }
+  const pe = orbit.perihelion;
   return {
-    label, model, epochJdTDB: el.epochJdTDB, toJdTDB: opts.toJdTDB, state: Array.from(state),
+    label,
+    model: opts.nbody
+      ? `N-body: Sun + 8 planets (VSOP87B)${opts.relativity ? ' + solar 1PN' : ''}, Gauss–Radau 15th order`
+      : 'two-body (Sun only, universal variables)',
+    epochJdTDB: el.epochJdTDB, toJdTDB: opts.toJdTDB, state: Array.from(orbit.state),
     perihelion: { qAu: pe[0], e: pe[1], iDeg: pe[2] * DEG_PER_RAD, nodeDeg: pe[3] * DEG_PER_RAD, periDeg: pe[4] * DEG_PER_RAD, tpJdTDB: pe[5] },
-    semimajor, distances, steps,
+    semimajor: orbit.semimajor && { aAu: orbit.semimajor.aAu, meanAnomalyDeg: orbit.semimajor.meanAnomalyRad * DEG_PER_RAD },
+    distances: opts.distances ? { heliocentricAu: orbit.heliocentricAu, geocentricAu: orbit.geocentricAu } : null,
+    steps: opts.nbody ? orbit.steps : null,
   };
 }
 
