@@ -18,6 +18,7 @@ export * from './gaussRadauSpacings.js';
 export * from './gaussRadau.js';
 export * from './forces/index.js';
 export * from './propagateTestBodies.js';
+export * from './propagateOrbit.js';
 export * from './leapSeconds.js';
 export * from './timeScales.js';
 export * from './isoTime.js';
