@@ -3,21 +3,21 @@
  * orbits, and Barker's equation for parabolic ones.
  *
  * Method: Danby's fourth-order Newton correction (Danby & Burkardt 1983, Celest. Mech. 31,
- * 95; also Danby 1988 ch. 6 — references from memory) inside a bracket that shrinks at every step, with a
- * bisection fall-back whenever a step leaves the bracket, so convergence is guaranteed for
- * every e (steps that leave the bracket or fail to halve the step before last are replaced by
- * bisection, as in the "rtsafe" scheme of Press et al., Numerical Recipes). Near e = 1 and small anomalies the equation is evaluated as
+ * 95; also Danby 1988 ch. 6 — references from memory) inside a bracket that shrinks at every
+ * step, with bisection whenever a step leaves the bracket or fails to halve the step before
+ * last ("rtsafe", Press et al., Numerical Recipes), so convergence is guaranteed for every e;
+ * the step itself is safeguardedStep.ts, shared with universal.ts. Near e = 1 and small
+ * anomalies the equation is evaluated as
  *   E − e sin E = (1 − e) E + e (E − sin E)   (and the hyperbolic analogue)
  * with E − sin E from its series, so the anomaly keeps full relative precision.
  * Tolerance: |ΔE| ≤ 4ε |E| + 1e-322 rad (ε = 2.2e-16), i.e. a position error below 1e-15 × a,
  * or a fourth-order step below 1e-7 |E| (its error is of order (1e-7)⁴ |E|: the rounding floor).
  */
 import { TWO_PI } from './math.js';
+import { DONE, HI, initBracket, LO, safeguardedStep, STEP } from './safeguardedStep.js';
 
-const EPS = Number.EPSILON;
 const DEFAULT_MAX_ITERATIONS = 100;
-/** Absolute floor of the anomaly tolerance (rad): a few subnormal ulps, so subnormal M still converge. */
-const TINY = 1e-322;
+const BRACKET = new Float64Array(5); // safeguardedStep state, reset by every solve
 
 /**
  * An iterative anomaly solver that stopped without converging. Carries its last state:
@@ -110,39 +110,17 @@ export function solveKeplerElliptic(meanAnomalyRad: number, e: number, maxIterat
   const sign = mr < 0 ? -1 : 1;
   const m = Math.abs(mr); // (0, π]
   // E − M = e sin E ∈ [0, e] on [0, π].
-  let lo = m;
-  let hi = Math.min(m + e, Math.PI);
+  initBracket(BRACKET, m, Math.min(m + e, Math.PI));
   let x = m < 0.5 && e > 0.5 ? cubicStarter(e / 6, 1 - e, m) : m + 0.85 * e * Math.sin(m);
-  if (!(x >= lo && x <= hi)) x = 0.5 * (lo + hi);
-  let step = hi - lo;
-  let stepOld = step;
+  if (!(x >= BRACKET[LO] && x <= BRACKET[HI])) x = 0.5 * (BRACKET[LO] + BRACKET[HI]);
   for (let it = 1; it <= maxIterations; it++) {
-    const s = Math.sin(x);
     const half = Math.sin(0.5 * x);
     const f = (1 - e) * x + e * xMinusSinX(x) - m;
     const fp = 1 - e + 2 * e * half * half; // 1 − e cos E
-    const fpp = e * s;
-    const fppp = e * Math.cos(x);
-    if (f === 0) return sign * x + turns;
-    if (f < 0) lo = x;
-    else hi = x;
-    const d1 = -f / fp;
-    const d2 = -f / (fp + 0.5 * d1 * fpp);
-    const d3 = -f / (fp + 0.5 * d2 * fpp + (d2 * d2 * fppp) / 6);
-    // Far from the root the quartic correction can crawl: take the Newton step instead.
-    const d = Math.abs(d3) < 0.5 * Math.abs(d1) || d3 * d1 < 0 ? d1 : d3;
-    let next = x + d;
-    const inside = next >= lo && next <= hi;
-    // An in-bracket fourth-order step this small leaves an error of order step⁴: done.
-    if (inside && d === d3 && Math.abs(d3) <= 1e-7 * x) return sign * next + turns;
-    // Bisect when the step leaves the bracket or does not halve the step before last.
-    if (!inside || Math.abs(d) > 0.5 * Math.abs(stepOld)) next = 0.5 * (lo + hi);
-    stepOld = step;
-    step = next - x;
-    x = next;
-    if (Math.abs(step) <= 4 * EPS * x + TINY || hi - lo <= 4 * EPS * x + TINY) return sign * x + turns;
+    x = safeguardedStep(x, f, fp, e * Math.sin(x), e * Math.cos(x), BRACKET, 0);
+    if (BRACKET[DONE]) return sign * x + turns;
   }
-  throw new KeplerConvergenceError('elliptic', e, meanAnomalyRad, sign * x + turns, step, maxIterations);
+  throw new KeplerConvergenceError('elliptic', e, meanAnomalyRad, sign * x + turns, BRACKET[STEP], maxIterations);
 }
 
 /** Hyperbolic anomaly H from mean anomaly M = e sinh H − H (e > 1), any M. */
@@ -152,39 +130,17 @@ export function solveKeplerHyperbolic(meanAnomalyRad: number, e: number, maxIter
   const sign = meanAnomalyRad < 0 ? -1 : 1;
   const m = Math.abs(meanAnomalyRad);
   // Bracket: e sinh H − H ≥ max((e − 1) sinh H, e H³/6) for H ≥ 0.
-  let lo = 0;
-  let hi = Math.min(Math.asinh(m / (e - 1)), Math.cbrt((6 * m) / e));
+  initBracket(BRACKET, 0, Math.min(Math.asinh(m / (e - 1)), Math.cbrt((6 * m) / e)));
   let x = m < 1 ? cubicStarter(e / 6, e - 1, m) : Math.log((2 * m) / e + 1.8); // large-M starter ln(2M/e + 1.8) (Danby 1988 ch. 6, from memory)
-  if (!(x >= lo && x <= hi)) x = 0.5 * (lo + hi);
-  let step = hi - lo;
-  let stepOld = step;
+  if (!(x >= BRACKET[LO] && x <= BRACKET[HI])) x = 0.5 * (BRACKET[LO] + BRACKET[HI]);
   for (let it = 1; it <= maxIterations; it++) {
-    const sh = Math.sinh(x);
     const halfSh = Math.sinh(0.5 * x);
     const f = (e - 1) * x + e * sinhXMinusX(x) - m;
     const fp = e - 1 + 2 * e * halfSh * halfSh; // e cosh H − 1
-    const fpp = e * sh;
-    const fppp = e * Math.cosh(x);
-    if (f === 0) return sign * x;
-    if (f < 0) lo = x;
-    else hi = x;
-    const d1 = -f / fp;
-    const d2 = -f / (fp + 0.5 * d1 * fpp);
-    const d3 = -f / (fp + 0.5 * d2 * fpp + (d2 * d2 * fppp) / 6);
-    // Far from the root the quartic correction can crawl: take the Newton step instead.
-    const d = Math.abs(d3) < 0.5 * Math.abs(d1) || d3 * d1 < 0 ? d1 : d3;
-    let next = x + d;
-    const inside = next >= lo && next <= hi;
-    // An in-bracket fourth-order step this small leaves an error of order step⁴: done.
-    if (inside && d === d3 && Math.abs(d3) <= 1e-7 * x) return sign * next;
-    // Bisect when the step leaves the bracket or does not halve the step before last.
-    if (!inside || Math.abs(d) > 0.5 * Math.abs(stepOld)) next = 0.5 * (lo + hi);
-    stepOld = step;
-    step = next - x;
-    x = next;
-    if (Math.abs(step) <= 4 * EPS * x + TINY || hi - lo <= 4 * EPS * x + TINY) return sign * x;
+    x = safeguardedStep(x, f, fp, e * Math.sinh(x), e * Math.cosh(x), BRACKET, 0);
+    if (BRACKET[DONE]) return sign * x;
   }
-  throw new KeplerConvergenceError('hyperbolic', e, meanAnomalyRad, sign * x, step, maxIterations);
+  throw new KeplerConvergenceError('hyperbolic', e, meanAnomalyRad, sign * x, BRACKET[STEP], maxIterations);
 }
 
 /**

@@ -7,7 +7,7 @@
  *   f′ = r = r0 c0 + η0 s c1 + μ s² c2,   f″ = η0 c0 + ζ0 s c1,   f‴ = ζ0 c0 − β η0 s c1
  *   f = 1 − (μ/r0) s² c2,  g = r0 s c1 + η0 s² c2,  ḟ = −(μ/(r r0)) s c1,  ġ = 1 − (μ/r) s² c2
  * Solver: Danby's quartic Newton correction inside a bracket (f(s) increases with s since
- * f′ = r > 0), bisection when a step leaves it or stalls. Elliptic orbits first reduce t − t0 modulo
+ * f′ = r > 0), bisection when a step leaves it or stalls (safeguardedStep.ts). Elliptic orbits first reduce t − t0 modulo
  * the period, which bounds s by ±2π/√β. Tolerance: a time residual at the rounding level
  * of the terms of f (8ε of them: for t − t0 = 1000 d about 2e-12 d, micrometres of
  * position), or |Δs| ≤ 4ε|s|, or a fourth-order step below 1e-7 |s| (which leaves an error
@@ -17,10 +17,12 @@
 import { GM_SUN_AU3_PER_DAY2 } from './constants.js';
 import { KeplerConvergenceError } from './kepler.js';
 import { stumpffInto } from './stumpff.js';
+import { DONE, initBracket, safeguardedStep, STEP } from './safeguardedStep.js';
 
 const EPS = Number.EPSILON;
 const MAX_ITERATIONS = 200;
 const C = new Float64Array(4); // Stumpff scratch, rewritten on every use
+const BRACKET = new Float64Array(5); // safeguardedStep state, reset by every solve
 
 /**
  * Propagate the state (x, y, z, vx, vy, vz) at stateIn[inOffset..] by dtDays under the
@@ -91,9 +93,8 @@ function kepler(s: number, dt: number, r0: number, eta0: number, zeta0: number, 
 }
 
 /**
- * Root s of the universal Kepler equation inside [lo, hi] (either may be infinite).
- * Safeguards as in the "rtsafe" scheme (Press et al., Numerical Recipes, 3rd ed. §9.4):
- * bisect when a step leaves the bracket or does not halve the step before last.
+ * Root s of the universal Kepler equation inside [lo, hi] (either may be infinite), by the
+ * safeguarded quartic step of safeguardedStep.ts.
  */
 function solveUniversal(
   dt: number, r0: number, eta0: number, zeta0: number, beta: number, mu: number, lo: number, hi: number, h2: number,
@@ -117,42 +118,17 @@ function solveUniversal(
       if (Math.abs(F[0]) < fLin || Number.isNaN(fLin)) s = sLog;
     }
   }
-  let step = hi - lo;
-  let stepOld = step;
+  initBracket(BRACKET, lo, hi);
+  const expandFrom = Math.abs(dt / r0);
   for (let it = 1; it <= MAX_ITERATIONS; it++) {
     kepler(s, dt, r0, eta0, zeta0, beta, mu);
-    const f = F[0], fp = F[1], fpp = F[2], fppp = F[3];
+    const f = F[0];
     if (f === 0 || Math.abs(f) <= 8 * EPS * F[4]) return s;
-    if (Number.isNaN(f)) {
-      // cosh/sinh overflowed: |s| is far too large on that side.
-      if (s > 0) hi = s;
-      else lo = s;
-    } else if (f < 0) lo = s;
-    else hi = s;
-    const d1 = -f / fp;
-    const d2 = -f / (fp + 0.5 * d1 * fpp);
-    const d3 = -f / (fp + 0.5 * d2 * fpp + (d2 * d2 * fppp) / 6);
-    // Far from the root the quartic correction can shrink the step to a crawl (large f″, f‴
-    // across perihelion); then take the Newton step, which at worst overshoots and closes
-    // the bracket.
-    const d = Math.abs(d3) < 0.5 * Math.abs(d1) || d3 * d1 < 0 ? d1 : d3;
-    let next = s + d;
-    const inside = next >= lo && next <= hi;
-    // An in-bracket fourth-order step this small leaves an error of order step⁴: done.
-    if (inside && d === d3 && Math.abs(d3) <= 1e-7 * Math.abs(s)) return next;
-    const finite = Number.isFinite(lo) && Number.isFinite(hi);
-    if (!inside || (finite && Math.abs(d) > 0.5 * Math.abs(stepOld))) {
-      // Bisect, or expand towards the open side.
-      if (finite) next = 0.5 * (lo + hi);
-      else if (Number.isFinite(lo)) next = lo > 0 ? 2 * lo : Math.abs(dt / r0);
-      else next = hi < 0 ? 2 * hi : -Math.abs(dt / r0);
-    }
-    stepOld = step;
-    step = next - s;
-    s = next;
-    if (Math.abs(step) <= 4 * EPS * Math.abs(s) + 1e-322 || hi - lo <= 4 * EPS * Math.abs(s) + 1e-322) return s;
+    // A NaN f means cosh/sinh overflowed: |s| is far too large on that side.
+    s = safeguardedStep(s, f, F[1], F[2], F[3], BRACKET, expandFrom);
+    if (BRACKET[DONE]) return s;
   }
   // e² = 1 − β h²/μ² (energy and angular momentum; Danby 1988 §6.9).
   const e = Math.sqrt(Math.max(0, 1 - (beta * h2) / (mu * mu)));
-  throw new KeplerConvergenceError('universal', e, dt, s, step, MAX_ITERATIONS);
+  throw new KeplerConvergenceError('universal', e, dt, s, BRACKET[STEP], MAX_ITERATIONS);
 }
