@@ -1,9 +1,12 @@
 /**
  * Which CSV/TSV header names carry which orbit field. Names are matched case-insensitively,
- * with one exception: the pair `Omega` / `omega` (node / argument of perihelion) differs
- * only by case, so a header whose lowercase form is `omega` is the node when its first
- * letter is uppercase (`Omega`, `OMEGA`) and the argument of perihelion when lowercase
- * (`omega`). Unambiguous alternatives: `om`/`node`/`raan` = node, `w`/`peri`/`argp` = peri.
+ * with two exceptions where the trade's symbols differ only by case (common practice):
+ * - `Omega` / `omega` (node / argument of perihelion): a header whose lowercase form is
+ *   `omega` is the node when its first letter is uppercase (`Omega`, `OMEGA`) and the
+ *   argument of perihelion when lowercase (`omega`). Unambiguous alternatives:
+ *   `om`/`node`/`raan` = node, `w`/`peri`/`argp` = peri.
+ * - `q` / `Q` (perihelion / aphelion distance): only a lowercase `q` is the perihelion
+ *   distance; `Q` is the aphelion distance, which no orbit field takes.
  *
  * Designation: the first header present in the order designation > desig > full_name >
  * pdes > name. An explicit designation column is what the user meant; `full_name` carries
@@ -63,8 +66,14 @@ export function checkColumnMapping(mapping: ColumnMapping): void {
   }
 }
 
-/** The field a header spelled `omega` in any case belongs to (first letter decides). */
-function caseSensitiveField(header: string): CsvField | undefined {
+/**
+ * The field of a header told apart by case (see the file comment): `omega` in any case →
+ * node or peri by its first letter; `q` → q; `Q` → null (aphelion distance: no field);
+ * undefined for every other header (matched case-insensitively).
+ */
+function caseSensitiveField(header: string): CsvField | null | undefined {
+  if (header === 'q') return 'q';
+  if (header === 'Q') return null;
   if (header.toLowerCase() !== 'omega') return undefined;
   return header[0] === 'O' ? 'node' : 'peri';
 }
@@ -104,7 +113,8 @@ function findHeader(headers: readonly string[], field: CsvField, used: Set<numbe
     for (let k = 0; k < headers.length; k++) {
       if (used.has(k)) continue;
       const h = headers[k];
-      if (caseSensitiveField(h) === field || (caseSensitiveField(h) === undefined && h.toLowerCase() === name)) return k;
+      const byCase = caseSensitiveField(h);
+      if (byCase === field || (byCase === undefined && h.toLowerCase() === name)) return k;
     }
   }
   for (let k = 0; k < headers.length; k++) if (!used.has(k) && caseSensitiveField(headers[k]) === field) return k;

@@ -46,6 +46,12 @@ describe('header and delimiter', () => {
     expect([index.peri, index.node, index.e, index.i]).toEqual([1, 2, 3, 4]);
   });
 
+  it('takes q (perihelion distance), never Q (aphelion distance; the trade\'s symbols, common practice)', () => {
+    expect(mapColumns(['designation', 'a', 'e', 'Q']).index.q).toBe(-1);
+    expect(mapColumns(['designation', 'Q', 'q']).index.q).toBe(2);
+    expect(mapColumns(['designation', 'Q_AU']).index.q).toBe(1); // an unambiguous name stays case-insensitive
+  });
+
   it('prefers designation > desig > full_name > pdes > name; a spare name column is the name', () => {
     expect(mapColumns(['name', 'pdes', 'full_name']).index.designation).toBe(2);
     expect(mapColumns(['name', 'pdes', 'full_name']).index.name).toBe(0);
