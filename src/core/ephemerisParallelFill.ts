@@ -9,17 +9,13 @@
  * rule; Graham 1969, SIAM J. Appl. Math. 17, 416), with the relative costs measured for the
  * bulk fill over 1 000 years (scripts/bench/ephemeris.ts), per body in EPHEMERIS_BODIES order.
  */
-import { Worker } from 'node:worker_threads';
 import { availableParallelism } from 'node:os';
-import { createRequire } from 'node:module';
-import { pathToFileURL } from 'node:url';
-import { readFileSync } from 'node:fs';
-import { dirname, join } from 'node:path';
 import type { EphemerisCache } from './ephemerisCache.js';
 import type { CacheFillJob } from './ephemerisFillWorker.js';
 import type { CacheBodyTable } from './ephemerisCacheTable.js';
 import { EPHEMERIS_BODIES, ephemerisBodyIndex } from './ephemerisBody.js';
 import { Vsop87Ephemeris } from './vsop87Ephemeris.js';
+import { startSiblingWorker } from './moduleWorker.js';
 import type { EphemerisBody } from './types.js';
 
 /** Relative bulk-fill cost per span, EPHEMERIS_BODIES order (measured CPU seconds per 1 000 years × 10). */
@@ -39,30 +35,9 @@ export function assignBodies(bodies: readonly EphemerisBody[], threads: number):
   return groups.filter((g) => g.length > 0);
 }
 
-/**
- * Start the worker. From compiled JavaScript it is ephemerisFillWorker.js beside this file;
- * when this module runs from its TypeScript source (tests, tsx scripts) the worker first
- * registers the tsx loader (a development dependency), as workers do not inherit loaders.
- */
-function startWorker(job: CacheFillJob): Worker {
-  const here = import.meta.url;
-  if (!here.endsWith('.ts')) return new Worker(new URL('./ephemerisFillWorker.js', here), { workerData: job });
-  const loader = tsxLoaderUrl(here);
-  const entry = new URL('./ephemerisFillWorker.ts', here).href;
-  const code = `import { register } from ${JSON.stringify(loader)}; register(); await import(${JSON.stringify(entry)});`;
-  return new Worker(new URL(`data:text/javascript,${encodeURIComponent(code)}`), { workerData: job });
-}
-
-/** URL of tsx's ESM register API, from its package.json exports map ('./esm/api' → import). */
-function tsxLoaderUrl(from: string): string {
-  const packageJson = createRequire(from).resolve('tsx/package.json');
-  const exportsMap = JSON.parse(readFileSync(packageJson, 'utf8')).exports['./esm/api'];
-  return pathToFileURL(join(dirname(packageJson), exportsMap.import.default)).href;
-}
-
 function runJob(job: CacheFillJob): Promise<CacheBodyTable[]> {
   return new Promise((resolve, reject) => {
-    const worker = startWorker(job);
+    const worker = startSiblingWorker(import.meta.url, 'ephemerisFillWorker', job);
     let done = false;
     worker.once('message', (tables: CacheBodyTable[]) => {
       done = true;
