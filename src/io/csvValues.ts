@@ -27,13 +27,19 @@ export function cellNumber(text: string): number {
   return Number(text);
 }
 
+/**
+ * Julian date of a calendar date and time of day. Hour 24 only as 24:00:00, the end of the
+ * day (ISO 8601, from memory); 24:30 is bad data, not the next day's 00:30.
+ */
 function calendar(y: string, mo: string, d: string, h = '0', mi = '0', s = '0', text = ''): number {
   const month = Number(mo);
   const day = Number(d);
-  if (!isCalendarDay(Number(y), month, day) || Number(h) > 24 || Number(mi) > 59 || Number(s) >= 61) {
+  const [hour, minute, second] = [Number(h), Number(mi), Number(s)];
+  const endOfDay = hour === 24 && minute === 0 && second === 0;
+  if (!isCalendarDay(Number(y), month, day) || (hour > 23 && !endOfDay) || minute > 59 || second >= 61) {
     throw new PackedFormError('not a calendar date', text);
   }
-  return calendarToJd(Number(y), month, day + (Number(h) + Number(mi) / 60 + Number(s) / 3600) / 24);
+  return calendarToJd(Number(y), month, day + (hour + minute / 60 + second / 3600) / 24);
 }
 
 /** Julian date of a date cell (see the file comment); NaN when empty. */

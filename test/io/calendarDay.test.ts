@@ -7,6 +7,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { cellJd, daysInMonth, isCalendarDay } from '../../src/io/index.js';
+import { isoToJd } from './fixtureCases.js';
 
 /** Day-of-month survives Date.UTC: the ECMA-262 reference check. */
 function dateAgrees(year: number, month: number, day: number): boolean {
@@ -39,8 +40,12 @@ describe('calendar days', () => {
     expect(daysInMonth(2024, 2)).toBe(29);
   });
 
-  it.each(['2026-02-30', '2023-02-29', '2026-04-31T00:00:00Z', '20260631', '2026-02-29.5'])(
+  it.each(['2026-02-30', '2023-02-29', '2026-04-31T00:00:00Z', '20260631', '2026-02-29.5', '2026-06-09T24:30:00'])(
     'CSV date cell %j is bad data, not next month (rolling over is what calendarToJd does)', (text) => {
       expect(() => cellJd(text)).toThrow('not a calendar date');
     });
+
+  it('CSV time 24:00:00 is the end of the day (ISO 8601, from memory): the next day at 0h by astronomy-engine', () => {
+    expect(cellJd('2026-06-09T24:00:00')).toBe(isoToJd('2026-06-10'));
+  });
 });
