@@ -23,8 +23,5 @@ export const COMET_COLUMNS = {
   readable: [102, 158], // 103–158 designation and name
   reference: [159, 168], // 160–168 reference (real lines run longer: read to the end)
 } as const satisfies Record<string, readonly [number, number]>;
-
-/** A data line must reach at least the end of the inclination field. */
-export const COMET_MIN_DATA_LENGTH = COMET_COLUMNS.incl[1];
 /** Orbit type letters of the format. */
 export const COMET_ORBIT_TYPES = 'CPDXIA';

@@ -28,8 +28,3 @@ export const ORBIT_COLUMNS = {
   readable: [166, 194], // 167–194 readable designation
   lastObs: [194, 202], // 195–202 date of last observation, YYYYMMDD
 } as const satisfies Record<string, readonly [number, number]>;
-
-/** A data line must reach at least the end of the inclination … semimajor-axis block. */
-export const ORBIT_MIN_DATA_LENGTH = ORBIT_COLUMNS.n[1];
-/** Lines from the layout: full length with every field written. */
-export const ORBIT_LINE_LENGTH = 202;

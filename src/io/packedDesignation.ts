@@ -44,8 +44,3 @@ export function packDesignation(readable: string): string {
   if (out === '') throw new PackedFormError('designation in no packable form', readable);
   return out;
 }
-
-/** Minor-planet number of a packed designation, NaN for any unnumbered form. */
-export function numberOfPackedDesignation(packed: string): number {
-  return unpackNumber(packed);
-}
