@@ -20,9 +20,10 @@ import type { CacheFillMethod } from '../../src/core/ephemerisCache.js';
 import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemerisBody.js';
 import { prefillParallel } from '../../src/core/ephemerisParallelFill.js';
 import { availableParallelism } from 'node:os';
+import { J2000_JD } from '../../src/core/constants.js';
 import type { Ephemeris, EphemerisBody } from '../../src/core/types.js';
 
-const J2000 = 2_451_545.0;
+const J2000 = J2000_JD;
 const START_JD = J2000; // 2000
 const END_JD = START_JD + 3_652.5; // 2010
 const DAYS_PER_YEAR = 365.25;
