@@ -20,11 +20,16 @@ import type { OrbitRow } from './types.js';
 
 const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
 
-/** A decimal number, NaN for an empty cell; throws PackedFormError when not a number. */
+/**
+ * A decimal number, NaN for an empty cell; throws PackedFormError when not a number, or
+ * when it overflows a double ('1e999' would otherwise be Infinity in a column).
+ */
 export function cellNumber(text: string): number {
   if (text === '') return NaN;
   if (!NUMBER.test(text)) throw new PackedFormError('not a number', text);
-  return Number(text);
+  const v = Number(text);
+  if (!Number.isFinite(v)) throw new PackedFormError('not a finite number', text);
+  return v;
 }
 
 /**

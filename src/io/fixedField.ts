@@ -27,8 +27,8 @@ export function fieldText(line: string, start: number, end: number): string {
 }
 
 /**
- * Number in columns [start, end) of `line`; NaN when blank or not a number (tell the two
- * apart with isBlankField on the NaN path only).
+ * Number in columns [start, end) of `line`; NaN when blank or not a finite number (tell
+ * the two apart with isBlankField on the NaN path only).
  */
 export function parseFixedNumber(line: string, start: number, end: number): number {
   const stop = end < line.length ? end : line.length;
@@ -67,7 +67,8 @@ function slowNumber(line: string, start: number, stop: number): number {
   const text = line.slice(start, stop).trim();
   // Number() accepts '0x..', 'Infinity' and '' which are not numbers in these formats
   if (!/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(text)) return NaN;
-  return Number(text);
+  const v = Number(text);
+  return Number.isFinite(v) ? v : NaN; // '1e999' overflows to Infinity: not a value either
 }
 
 /**

@@ -179,4 +179,11 @@ describe('bad rows and bad headers', () => {
     const { rejects } = await read(p);
     expect(rejects.map((e) => e.message)).toEqual([`${p}:2: column 'i' (field 5): not a number: 'three'`]);
   });
+
+  it('a number that overflows a double (IEEE 754: 1e999 → Infinity) is a bad cell, not Infinity', async () => {
+    const p = temp('overflow.csv', [header, 'X,2461200.5,0.1,1e999,3,40,50,60'].join('\n') + '\n');
+    const { rows, rejects } = await read(p);
+    expect(rows).toEqual([]);
+    expect(rejects.map((e) => e.message)).toEqual([`${p}:2: column 'a' (field 4): not a finite number: '1e999'`]);
+  });
 });
