@@ -15,21 +15,29 @@ export function acosClamped(x: number): number {
   return Math.acos(x > 1 ? 1 : x < -1 ? -1 : x);
 }
 
-/** Angle wrapped into [0, 2π). */
+/**
+ * Angle wrapped into [0, 2π). A remainder just below 0 (above −1e-16 rad) would round to 2π
+ * when 2π is added; it is returned as 0, the same direction inside the range.
+ */
 export function wrapTwoPi(rad: number): number {
   const r = rad % TWO_PI;
-  return r < 0 ? r + TWO_PI : r;
+  if (!(r < 0)) return r;
+  const w = r + TWO_PI;
+  return w < TWO_PI ? w : 0;
 }
 
-/** Angle wrapped into [-π, π). */
+/** Angle wrapped into [-π, π); an angle already in that range comes back unchanged (exactly). */
 export function wrapPi(rad: number): number {
+  if (rad >= -Math.PI && rad < Math.PI) return rad;
   return wrapTwoPi(rad + Math.PI) - Math.PI;
 }
 
-/** Degrees wrapped into [0, 360). */
+/** Degrees wrapped into [0, 360) (a remainder just below 0 gives 0, as in wrapTwoPi). */
 export function wrapDeg360(deg: number): number {
   const r = deg % 360;
-  return r < 0 ? r + 360 : r;
+  if (!(r < 0)) return r;
+  const w = r + 360;
+  return w < 360 ? w : 0;
 }
 
 /** Neumaier's compensated sum (Neumaier 1974, ZAMM 54, 39). */
