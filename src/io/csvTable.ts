@@ -1,8 +1,8 @@
 /**
  * CSV/TSV tables with a header row, streamed through csv-parse. Lines come from the line
  * source (so gzip, stdin and hashing work as for every format) and are written to the
- * parser in one batch per chunk. The delimiter is sniffed from the header line: the most
- * frequent of comma, tab and semicolon outside double quotes (comma on a tie).
+ * parser in one batch per chunk. The delimiter is sniffed from the header line
+ * (./csvDelimiter.ts).
  *
  * Accounting: every non-blank line after the header ends up in exactly one accepted record
  * or one rejection. csv-parse runs with relax_column_count (a row with the wrong number of
@@ -19,22 +19,10 @@ import { once } from 'node:events';
 import { finished } from 'node:stream/promises';
 import { parse, type Options, type Parser } from 'csv-parse';
 import { checkColumnMapping, mapColumns, missingRequired, type ColumnIndex, type ColumnMapping } from './columnMap.js';
+import { sniffDelimiter } from './csvDelimiter.js';
 import { parseCsvRecord, type RecordContext } from './csvRecord.js';
 import { UnreadableInputError } from './errors.js';
 import { InputError, type OrbitRow } from './types.js';
-
-/** Delimiter of a header line: the most frequent of , \t ; outside quotes (',' on ties). */
-export function sniffDelimiter(headerLine: string): string {
-  const counts: Record<string, number> = { ',': 0, '\t': 0, ';': 0 };
-  let quoted = false;
-  for (const ch of headerLine) {
-    if (ch === '"') quoted = !quoted;
-    else if (!quoted && ch in counts) counts[ch]++;
-  }
-  let best = ',';
-  for (const d of ['\t', ';']) if (counts[d] > counts[best]) best = d;
-  return best;
-}
 
 export interface CsvCounts {
   rows: number;

@@ -19,6 +19,7 @@ export * from './cometExportLine.js';
 export * from './byteSource.js';
 export * from './lineSource.js';
 export * from './columnMap.js';
+export * from './csvDelimiter.js';
 export * from './csvValues.js';
 export * from './csvRecord.js';
 export * from './csvTable.js';
