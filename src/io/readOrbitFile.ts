@@ -41,23 +41,22 @@ export interface ReadOrbitSummary {
 }
 
 type Sink = (text: string, lineNo: number) => void;
+type LineParser = typeof parseOrbitExportLine;
+type Counts = { rows: number; rejected: number; skipped: number };
 
-/** Reads `path` ('-' = stdin); see the file comment. */
-export async function readOrbitFile(
+/**
+ * Sink of a fixed-width format: each line parsed into the scratch `row`, then counted as a
+ * row (handed to `onRow`), a skip, or a reject (its InputError handed to `onReject`).
+ */
+function fixedWidthSink(
+  parse: LineParser,
   path: string,
-  options: ReadOrbitOptions,
+  row: OrbitRow,
+  counts: Counts,
   onRow: (row: OrbitRow, lineNo: number, text: string) => void,
   onReject: (err: InputError) => void,
-): Promise<ReadOrbitSummary> {
-  const row = emptyOrbitRow();
-  const counts = { rows: 0, rejected: 0, skipped: 0 };
-  let format: InputFormat | undefined = options.format;
-  let sink: Sink | null = null;
-  let csv: CsvTableReader | null = null;
-  const heldTexts: string[] = [];
-  const heldNos: number[] = [];
-
-  const fixedSink = (parse: typeof parseOrbitExportLine): Sink => (text, lineNo) => {
+): Sink {
+  return (text, lineNo) => {
     let outcome;
     try {
       outcome = parse(text, row, path, lineNo);
@@ -73,6 +72,22 @@ export async function readOrbitFile(
       onRow(row, lineNo, text);
     }
   };
+}
+
+/** Reads `path` ('-' = stdin); see the file comment. */
+export async function readOrbitFile(
+  path: string,
+  options: ReadOrbitOptions,
+  onRow: (row: OrbitRow, lineNo: number, text: string) => void,
+  onReject: (err: InputError) => void,
+): Promise<ReadOrbitSummary> {
+  const row = emptyOrbitRow();
+  const counts: Counts = { rows: 0, rejected: 0, skipped: 0 };
+  let format: InputFormat | undefined = options.format;
+  let sink: Sink | null = null;
+  let csv: CsvTableReader | null = null;
+  const heldTexts: string[] = [];
+  const heldNos: number[] = [];
 
   const decide = (): void => {
     const header = format === 'csv' ? 0 : headerBlockLength(heldTexts);
@@ -82,7 +97,8 @@ export async function readOrbitFile(
       const reader = csv;
       sink = (text, lineNo) => reader.pushLine(text, lineNo);
     } else {
-      sink = fixedSink(format === 'orbit-export' ? parseOrbitExportLine : parseCometExportLine);
+      const parse = format === 'orbit-export' ? parseOrbitExportLine : parseCometExportLine;
+      sink = fixedWidthSink(parse, path, row, counts, onRow, onReject);
     }
     counts.skipped += header;
     for (let k = header; k < heldTexts.length; k++) sink(heldTexts[k], heldNos[k]);
