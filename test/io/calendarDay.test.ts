@@ -1,8 +1,8 @@
 /**
- * Calendar-day checks against the JavaScript Date object (ECMA-262 §21.4.1: a proleptic
- * Gregorian calendar; Date.UTC rolls a day past a month's end into the next month, so a
- * day is valid exactly when it survives the round trip), over 1583–2199 where the readers'
- * calendar is Gregorian; and the Julian leap rule before 1583 (common practice).
+ * Calendar-day checks against the JavaScript Date object (ECMA-262 §21.4, from memory: a
+ * proleptic Gregorian calendar; Date.UTC rolls a day past a month's end into the next
+ * month, so a day is valid exactly when it survives the round trip), over 1583–2199 where
+ * the readers' calendar is Gregorian; and the Julian leap rule before 1583 (common practice).
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
