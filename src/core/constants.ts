@@ -11,7 +11,7 @@ export const KM_PER_AU = M_PER_AU / 1000;
 export const SECONDS_PER_DAY = 86_400;
 /** Days per Julian year. IAU definition of the Julian year. */
 export const DAYS_PER_JULIAN_YEAR = 365.25;
-/** Days per Julian century. */
+/** Days per Julian century: 100 Julian years (IAU definition of the Julian year). */
 export const DAYS_PER_JULIAN_CENTURY = 36_525;
 /** Julian date of the J2000.0 epoch (2000 Jan 1.5 TT). IAU 1976/1994. */
 export const J2000_JD = 2_451_545.0;
@@ -56,7 +56,8 @@ export const PLANETS: readonly PlanetName[] = [
  * GM of each planet system in km^3/s^2 (planet with its moons; for 'earth' the Earth–Moon
  * system). Folkner et al. 2014, IPN Progress Report 42-196 (DE430/431), Table 8.
  * Values transcribed from memory of that table; the mass ratios below derive from them and
- * agree with the ratios the same report lists to the digits shown (checked in tests).
+ * agree with the IAU 2009 best-estimate ratios (Luzum et al. 2011) to 1e-7, Mercury to 2e-5
+ * (test/core/constants.test.ts).
  */
 export const PLANET_GM_DE430_KM3_PER_S2: Readonly<Record<PlanetName, number>> = {
   mercury: 22_031.78,
