@@ -219,7 +219,8 @@ export class GaussRadauIntegrator {
   private predict(dt: number): void {
     const q = this.dtDone === 0 ? 0 : dt / this.dtDone;
     if (this.dtDone === 0 || Math.abs(q) > 20) {
-      // First step, or a prediction too far out to trust: start from zero.
+      // First step, or a prediction too far out to trust (past 20 × the last step: this
+      // project's own limit, not from the papers): start from zero.
       this.b.fill(0);
       this.e.fill(0);
       this.g.fill(0);
