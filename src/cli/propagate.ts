@@ -99,6 +99,11 @@ export function parseElements(value: string): ElementsSpec {
   const perihelionForm = got.has('q');
   if (perihelionForm === got.has('a')) throw new InvalidArgumentError('give either q (with tp) or a (with M and epoch), not both or neither');
   need(perihelionForm ? ['q', 'e', 'i', 'node', 'peri', 'tp'] : ['a', 'e', 'i', 'node', 'peri', 'm', 'epoch']);
+  // An element of the other form would be silently ignored: refuse it instead.
+  const foreign = perihelionForm ? 'm' : 'tp';
+  if (got.has(foreign)) {
+    throw new InvalidArgumentError(perihelionForm ? 'M goes with a (and epoch), not with q and tp' : 'tp goes with q, not with a, M and epoch');
+  }
   const e = num('e'), iDeg = num('i'), nodeDeg = num('node'), periDeg = num('peri');
   if (e < 0) throw new InvalidArgumentError(`e=${e} must be ≥ 0`);
   if (iDeg < 0 || iDeg > 180) throw new InvalidArgumentError(`i=${iDeg}° must be within 0–180°`);

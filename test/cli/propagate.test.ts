@@ -114,6 +114,9 @@ describe('propagate: bad input is refused at the boundary', () => {
     expect(() => parseElements('a=Infinity,e=0.1,i=1,node=1,peri=1,M=1,epoch=2461200.5')).toThrow(InvalidArgumentError);
     expect(() => parseElements('a=2.7,e=0.1,i=1,node=1,peri=1')).toThrow(/elements lack M, epoch/);
     expect(() => parseElements('a=2.7,q=2,e=0.1,i=1,node=1,peri=1,M=1,epoch=1')).toThrow(/either q/);
+    // An element of the other form is refused, not silently ignored.
+    expect(() => parseElements('q=1,e=0.1,i=1,node=1,peri=1,tp=2461200.5,M=30')).toThrow(/M goes with a/);
+    expect(() => parseElements('a=2.7,e=0.1,i=1,node=1,peri=1,M=1,epoch=2461200.5,tp=2461000.5')).toThrow(/tp goes with q/);
     expect(() => parseElements('a=-2.7,e=0.1,i=1,node=1,peri=1,M=1,epoch=2461200.5')).toThrow(/must be > 0/);
     expect(() => parseElements('q=1,e=-0.1,i=1,node=1,peri=1,tp=2461200.5')).toThrow(/e=-0.1 must be ≥ 0/);
     expect(() => parseElements('q=1,e=0.1,i=200,node=1,peri=1,tp=2461200.5')).toThrow(/0–180/);
