@@ -18,7 +18,13 @@
  * velocities match numerical differences to 3e-3 km/day.
  */
 import elpData from 'astronomia/data/elpMppDe';
-import { J2000_JD, DAYS_PER_JULIAN_CENTURY, ARCSEC_PER_RAD } from './constants.js';
+import { J2000_JD, DAYS_PER_JULIAN_CENTURY, ARCSEC_PER_RAD, EARTH_MOON_MASS_RATIO, KM_PER_AU } from './constants.js';
+
+/**
+ * The Earth–Moon barycentre lies geocentric Moon / (1 + M_earth/M_moon) from the geocentre
+ * (definition of the centre of mass; common practice): au of EMB offset per km of the Moon's.
+ */
+export const MOON_TO_EMB_AU_PER_KM = 1 / ((1 + EARTH_MOON_MASS_RATIO) * KM_PER_AU);
 
 /** Powers of T present in the ELP/MPP02 series (α = 0..3). */
 const BLOCKS = 4;

@@ -9,12 +9,12 @@
  * Earth and the ELP Moon do not cancel exactly: the EMB keeps a ~2e-9 au (≈ 300 m) residual
  * with monthly periods, far below VSOP87's accuracy against modern ephemerides.
  */
-import { EARTH_MOON_MASS_RATIO, J2000_JD, KM_PER_AU } from './constants.js';
+import { J2000_JD } from './constants.js';
 import type { PlanetName } from './constants.js';
 import type { Ephemeris, EphemerisBody } from './types.js';
 import { assertInSpan, ephemerisBodyIndex } from './ephemerisBody.js';
 import { DAYS_PER_JULIAN_MILLENNIUM, vsop87HelioState } from './vsop87.js';
-import { elpGeocentricMoonState } from './elpMoon.js';
+import { elpGeocentricMoonState, MOON_TO_EMB_AU_PER_KM } from './elpMoon.js';
 import type { SegmentFitter, SegmentFitterOptions, SegmentFitterSource, SegmentGrid } from './segmentFitter.js';
 import { Vsop87SegmentFitter } from './vsop87SegmentFitter.js';
 
@@ -27,8 +27,6 @@ import { Vsop87SegmentFitter } from './vsop87SegmentFitter.js';
 export const VSOP87_DEFAULT_START_JD_TDB = J2000_JD - DAYS_PER_JULIAN_MILLENNIUM;
 export const VSOP87_DEFAULT_END_JD_TDB = J2000_JD + DAYS_PER_JULIAN_MILLENNIUM;
 
-/** Moon-to-EMB lever: the EMB lies Moon/(1 + M_earth/M_moon) from the geocentre (au per km). */
-const MOON_TO_EMB_AU_PER_KM = 1 / ((1 + EARTH_MOON_MASS_RATIO) * KM_PER_AU);
 
 export interface Vsop87EphemerisOptions {
   startJdTDB?: number;

@@ -11,7 +11,7 @@
  * interpolant of x, y, z (NR §5.8), as in the node-sampling path. The series coefficients
  * are kept to SLOT_MARGIN more than n, so their own truncation stays below the interpolant's.
  */
-import { ARCSEC_PER_RAD, EARTH_MOON_MASS_RATIO, J2000_JD, KM_PER_AU } from './constants.js';
+import { ARCSEC_PER_RAD, J2000_JD } from './constants.js';
 import type { PlanetName } from './constants.js';
 import type { EphemerisBody } from './types.js';
 import { ephemerisBodyIndex } from './ephemerisBody.js';
@@ -22,7 +22,7 @@ import { planPoissonChebyshev, poissonChunkCoefficients } from './poissonChebysh
 import type { PoissonSeries } from './poissonSeries.js';
 import { elpPoissonSeries, vsop87PoissonSeries } from './poissonSeries.js';
 import { sphericalToRectangularState } from './vsop87.js';
-import { elpMoonStateFromSums } from './elpMoon.js';
+import { elpMoonStateFromSums, MOON_TO_EMB_AU_PER_KM } from './elpMoon.js';
 import type { SegmentFitter, SegmentFitterOptions, SegmentGrid } from './segmentFitter.js';
 
 /** Series coefficients kept beyond the n of the cache (truncation margin; measured, see tests). */
@@ -32,8 +32,6 @@ const SLOT_MARGIN = 8;
  * multiple of GROUP, and runs start at multiples of it in the cache.
  */
 export const SEGMENT_FITTER_CHUNK = 64;
-/** EMB = Earth + geocentric Moon / (1 + M_earth/M_moon); au per km of the Moon's offset. */
-const MOON_TO_EMB_AU_PER_KM = 1 / ((1 + EARTH_MOON_MASS_RATIO) * KM_PER_AU);
 
 /**
  * Grouping levels (poissonChebyshev.ts): the cache's own segments with n + SLOT_MARGIN
