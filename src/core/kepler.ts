@@ -45,7 +45,7 @@ export class KeplerConvergenceError extends Error {
 /** x − sin x without cancellation for small |x| (series below 0.5; Taylor, common practice). */
 export function xMinusSinX(x: number): number {
   if (Math.abs(x) >= 0.5) return x - Math.sin(x);
-  // x³/3! − x⁵/5! + … ; 10 terms: the first left out, 0.5^20/23!, is 1e-29 of x³/6.
+  // x³/3! − x⁵/5! + … ; 10 terms: the first left out, x²³/23!, is below 0.5²⁰·6/23! ≈ 2e-28 of x³/6.
   const x2 = x * x;
   return x * x2 * seriesSinRemainder(x2);
 }
