@@ -182,7 +182,13 @@ export class Instant {
   }
 }
 
-/** TAI → UTC by fixed-point iteration on utcFractionToTai (as SOFA taiutc does); 3 passes. */
+/** TAI residual (s) below which the TAI → UTC iteration has converged: 1 ns (common practice). */
+const TAI_TO_UTC_TOLERANCE_S = 1e-9;
+
+/**
+ * TAI → UTC by fixed-point iteration on utcFractionToTai (as SOFA taiutc does); 3 passes,
+ * then the result is checked and a residual above 1 ns fails loudly with the state.
+ */
 function taiToUtc(tai: Instant): Instant {
   let mid = tai.jd1;
   // First guess from TAI−UTC at the TAI date (clamped into the table); the loop corrects it.
@@ -193,5 +199,12 @@ function taiToUtc(tai: Instant): Instant {
     frac = u.jd2 + (target - utcFractionToTai(u.jd1, u.jd2)) * (SECONDS_PER_DAY / utcDayLengthSeconds(u.jd1));
     mid = u.jd1;
   }
-  return Instant.fromJdParts(mid, frac, 'UTC');
+  const utc = Instant.fromJdParts(mid, frac, 'UTC');
+  const residualS = (tai.jd1 - utc.jd1 + tai.jd2 - utcFractionToTai(utc.jd1, utc.jd2)) * SECONDS_PER_DAY;
+  if (!(Math.abs(residualS) <= TAI_TO_UTC_TOLERANCE_S)) {
+    throw new Error(
+      `TAI → UTC did not converge: TAI ${tai.jd1} + ${tai.jd2}, UTC ${utc.jd1} + ${utc.jd2}, residual ${residualS} s after 3 passes`,
+    );
+  }
+  return utc;
 }
