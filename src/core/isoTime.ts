@@ -1,6 +1,6 @@
 /**
- * Parsing of ISO 8601 calendar date-times (the extended format, ISO 8601-1:2019 §5.4) as the
- * readers and the command line meet them:
+ * Parsing of ISO 8601 calendar date-times (the extended format, ISO 8601-1:2019 §5.4; section
+ * from memory) as the readers and the command line meet them:
  *   2026-06-09            date, 0h
  *   2026-06-09.25         date with a fractional day
  *   2026-06-09T12:00      hours and minutes (a space may replace the T)

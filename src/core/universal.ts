@@ -102,7 +102,7 @@ function solveUniversal(
   if (dt === 0) return 0;
   // Starter: s ≈ dt / r0 (first order in dt). On a hyperbola f can grow like e^{√−β |s|}:
   // then s from f ≈ ±½ e^{√−β |s|} (r0 α ± η0 √α + μ)/α^{3/2}, α = −β, the logarithmic
-  // guess Vallado 2013 (Algorithm 8) uses; whichever leaves the smaller |f| is kept.
+  // guess Vallado 2013 (Algorithm 8; from memory) uses; the one leaving the smaller |f| is kept.
   let s = dt / r0;
   if (!(s >= lo && s <= hi)) s = 0.5 * (lo + hi);
   if (beta < 0) {
