@@ -13,7 +13,7 @@
  * Tolerance: |ΔE| ≤ 4ε |E| + 1e-322 rad (ε = 2.2e-16), i.e. a position error below 1e-15 × a,
  * or a fourth-order step below 1e-7 |E| (its error is of order (1e-7)⁴ |E|: the rounding floor).
  */
-import { TWO_PI } from './math.js';
+import { INV_FACTORIAL, TWO_PI } from './math.js';
 import { DONE, HI, initBracket, LO, safeguardedStep, STEP } from './safeguardedStep.js';
 
 const DEFAULT_MAX_ITERATIONS = 100;
@@ -56,15 +56,8 @@ export function sinhXMinusX(x: number): number {
   return x * x * x * seriesSinhRemainder(x * x);
 }
 
-// Σ_{j≥0} (∓x2)^j / (2j+3)!  for the two series above.
-const INV_ODD_FACT = new Float64Array(10);
-{
-  let f = 1;
-  for (let n = 1; n <= 21; n++) {
-    f *= n;
-    if (n >= 3 && n % 2 === 1) INV_ODD_FACT[(n - 3) / 2] = 1 / f;
-  }
-}
+// Σ_{j≥0} (∓x2)^j / (2j+3)!  for the two series above; INV_ODD_FACT[j] = 1/(2j+3)!.
+const INV_ODD_FACT = Float64Array.from({ length: 10 }, (_, j) => INV_FACTORIAL[2 * j + 3]);
 function seriesSinRemainder(x2: number): number {
   let s = INV_ODD_FACT[9];
   for (let j = 8; j >= 0; j--) s = INV_ODD_FACT[j] - x2 * s;

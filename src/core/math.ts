@@ -73,6 +73,22 @@ export function medianSorted(sorted: ArrayLike<number>): number {
   return n % 2 ? sorted[h] : 0.5 * (sorted[h - 1] + sorted[h]);
 }
 
+/**
+ * INV_FACTORIAL[n] = 1/n! for n = 0..21: the coefficients of the series in stumpff.ts and
+ * kepler.ts. The running product 1·2·…·n is exact in a double up to 22! (the odd part of n!
+ * stays below 2^53), so each entry carries the single rounding of 1/n!.
+ */
+export const INV_FACTORIAL: Float64Array = (() => {
+  const t = new Float64Array(22);
+  let f = 1;
+  t[0] = 1;
+  for (let n = 1; n < t.length; n++) {
+    f *= n;
+    t[n] = 1 / f;
+  }
+  return t;
+})();
+
 /** Euclidean norm of a 3-vector stored at offset `o` of `v`. */
 export function norm3(v: ArrayLike<number>, o = 0): number {
   return Math.hypot(v[o], v[o + 1], v[o + 2]);

@@ -7,6 +7,7 @@
  * For |x| ≤ 1 the series for c2 and c3 are summed (the closed forms cancel there) and c0, c1
  * follow from the recurrence; elsewhere the closed forms lose at most one digit.
  */
+import { INV_FACTORIAL } from './math.js';
 
 /**
  * Series terms kept for |x| ≤ 1: the first terms left out are x⁹/20! ≈ 4e-19 (c2 ≈ 0.5) and
@@ -14,16 +15,8 @@
  */
 const TERMS = 9;
 /** INV_FACT_C2[j] = 1/(2j+2)!, INV_FACT_C3[j] = 1/(2j+3)!. */
-const INV_FACT_C2 = new Float64Array(TERMS);
-const INV_FACT_C3 = new Float64Array(TERMS);
-{
-  let f = 1; // running factorial
-  for (let n = 1; n <= 2 * TERMS + 1; n++) {
-    f *= n;
-    if (n >= 2 && n % 2 === 0) INV_FACT_C2[(n - 2) / 2] = 1 / f;
-    if (n >= 3 && n % 2 === 1) INV_FACT_C3[(n - 3) / 2] = 1 / f;
-  }
-}
+const INV_FACT_C2 = Float64Array.from({ length: TERMS }, (_, j) => INV_FACTORIAL[2 * j + 2]);
+const INV_FACT_C3 = Float64Array.from({ length: TERMS }, (_, j) => INV_FACTORIAL[2 * j + 3]);
 
 /** Write c0(x), c1(x), c2(x), c3(x) into out[offset..offset+3]. */
 export function stumpffInto(x: number, out: Float64Array, offset = 0): void {

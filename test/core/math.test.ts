@@ -5,7 +5,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { all, create, median } from 'mathjs';
 import {
-  acosClamped, asinClamped, meanVariance, medianSorted, norm3, sumCompensated, TWO_PI, wrapDeg360, wrapPi, wrapTwoPi,
+  acosClamped, asinClamped, INV_FACTORIAL, meanVariance, medianSorted, norm3, sumCompensated, TWO_PI, wrapDeg360, wrapPi,
+  wrapTwoPi,
 } from '../../src/core/math.js';
 
 const big = create(all, { number: 'BigNumber', precision: 120 });
@@ -136,5 +137,14 @@ describe('norm3', () => {
   it('(2, 3, 6) has length 7 and (1, 4, 8) length 9 (Pythagorean quadruples, common practice), at any offset', () => {
     expect(norm3([2, 3, 6])).toBe(7);
     expect(norm3(new Float64Array([0, 0, 1, 4, 8]), 2)).toBe(9);
+  });
+});
+
+describe('inverse factorials', () => {
+  it('1/n! for n = 0..21 is the correctly rounded value (mathjs BigNumber factorial, 120 digits)', () => {
+    for (let n = 0; n < INV_FACTORIAL.length; n++) {
+      // Number() of the 120-digit quotient is the double nearest to 1/n!.
+      expect(INV_FACTORIAL[n], `1/${n}!`).toBe(Number(big.divide(1, big.factorial(big.bignumber(n)))));
+    }
   });
 });
