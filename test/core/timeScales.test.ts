@@ -68,6 +68,19 @@ describe('UTC → TAI → TT → TDB chain (erfa.dtf2d, utctai, taitt, dtdb)', (
     console.log(`UTC/TAI/TT vs erfa: worst ${(worst * 1e6).toFixed(3)} µs over ${cases.length} instants`);
   });
 
+  it('erfa.dtf2d Julian dates read back as the same calendar day and clock seconds (1 µs)', () => {
+    let worst = 0;
+    for (const c of cases) {
+      const [y, mo, d, h, mi, s] = c.utc;
+      const back = Instant.fromJdParts(c.utcJd[0], c.utcJd[1], 'UTC').toCalendarSeconds();
+      expect([back.year, back.month, back.day], c.utc.join(' ')).toEqual([y, mo, d]);
+      const e = Math.abs(back.secondsOfDay - (h * 3600 + mi * 60 + s));
+      worst = Math.max(worst, e);
+      expect(e, c.utc.join(' ')).toBeLessThan(1e-6);
+    }
+    console.log(`toCalendarSeconds vs erfa.dtf2d: worst ${(worst * 1e6).toFixed(3)} µs (incl. 23:59:60.x)`);
+  });
+
   it('round trips back to UTC (TAI, TT and TDB → UTC), 1 µs', () => {
     let worst = 0;
     for (const c of cases) {
