@@ -6,6 +6,7 @@ import fc from 'fast-check';
 import { julian } from 'astronomia';
 import { calendarToJd, jdToCalendar } from '../../src/core/julian.js';
 import { jdToMjd, mjdToJd } from '../../src/core/readerEpochs.js';
+import { daysInMonth } from '../../src/core/isoTime.js';
 
 // Meeus p. 62 table, plus examples 7.a and 7.b. From memory of the book.
 const MEEUS_TABLE: ReadonlyArray<readonly [number, number, number, number]> = [
@@ -55,6 +56,14 @@ describe('Julian dates (Meeus ch. 7)', () => {
 
   it('Gregorian reform: 1582 Oct 4 (Julian) is followed by 1582 Oct 15 (Meeus ch. 7, common practice)', () => {
     expect(calendarToJd(1582, 10, 15) - calendarToJd(1582, 10, 4)).toBe(1);
+  });
+
+  it('month lengths follow the calendar of the date: Feb 1900 28 d, Feb 2000 29 d, Feb 1500 29 d (Julian rule), Oct 1582 21 d (common practice)', () => {
+    expect(daysInMonth(1900, 2)).toBe(28);
+    expect(daysInMonth(2000, 2)).toBe(29);
+    expect(daysInMonth(1500, 2)).toBe(29);
+    expect(daysInMonth(1582, 10)).toBe(21); // Oct 5–14 never happened
+    expect(daysInMonth(2026, 12)).toBe(31);
   });
 
   it('MJD 0 is 1858 Nov 17.0 (IAU 1997 Resolution B1)', () => {
