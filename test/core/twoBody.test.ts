@@ -51,7 +51,10 @@ describe('textbook examples', () => {
     expect(Math.abs(p - 11067.79)).toBeLessThan(0.01);
     expect(Math.abs(el.aAu - 36127.343)).toBeLessThan(0.01);
     expect(Math.abs(el.e - 0.832853)).toBeLessThan(5e-7);
-    expect(Math.abs(el.iRad / DEG - 87.87)).toBeLessThan(5e-4 + 1e-3); // printed to 3 decimals
+    // Printed to 3 decimals (5e-4), plus 1e-3 because this is loosened: the code gives
+    // 87.8691° from the printed 7-digit inputs, 0.0009° from the book's 87.870 (whose own
+    // working carried more digits of the state than it prints).
+    expect(Math.abs(el.iRad / DEG - 87.87)).toBeLessThan(5e-4 + 1e-3);
     expect(Math.abs(el.nodeRad / DEG - 227.89)).toBeLessThan(0.01);
     expect(Math.abs(el.periRad / DEG - 53.38)).toBeLessThan(0.01);
   });
