@@ -49,8 +49,10 @@ export class CatalogueBuilder {
   private fileIndex: Uint16Array = new Uint16Array(0);
   private source: Uint32Array = new Uint32Array(0);
   private readonly designation: string[] = [];
-  private readonly files: string[] = [];
-  private readonly fileSlot = new Map<string, number>();
+  private readonly files: string[] = []; // one entry per input, names may repeat
+  private readonly fileSlot = new Map<string, number>(); // name → its latest input
+  private readonly rejectedByFile: number[] = []; // rejects charged to each input
+  private currentFile = -1; // input of the last row offered
   size = 0;
   read = 0;
   readonly rejects: Reject[] = [];
@@ -69,9 +71,33 @@ export class CatalogueBuilder {
     return this.size;
   }
 
+  /**
+   * Start a new input: rows offered under `file` from now on are charged to it, even when
+   * an earlier input had the same name (a file listed twice is two inputs). Returns its
+   * input number, the index into Catalogue.files and rejectedIn().
+   */
+  beginFile(file: string): number {
+    const k = this.files.length;
+    if (k > 0xffff) throw new RangeError('more than 65 536 input files');
+    this.files.push(file);
+    this.rejectedByFile.push(0);
+    this.fileSlot.set(file, k);
+    this.currentFile = k;
+    return k;
+  }
+
+  /**
+   * Rows of input `k` rejected so far, superseded duplicates included (charged to the input
+   * they came from). Its accepted rows are the rows read from it minus these.
+   */
+  rejectedIn(k: number): number {
+    return this.rejectedByFile[k] ?? 0;
+  }
+
   /** Record a row the io layer could not parse (it counts as read and rejected). */
   rejectUnparsed(file: string, line: number, reason: string, text: string): void {
     this.read++;
+    this.rejectedByFile[this.fileNumber(file)]++;
     this.rejects.push({ kind: 'parse', file, line, reason, text });
   }
 
@@ -80,6 +106,7 @@ export class CatalogueBuilder {
     this.read++;
     const reason = invalidReason(row, this.validity);
     if (reason !== null) {
+      this.rejectedByFile[this.fileNumber(file)]++;
       this.rejects.push({ kind: 'invalid', file, line, reason, text });
       return false;
     }
@@ -102,6 +129,7 @@ export class CatalogueBuilder {
     if (row.epochJdTT > this.cols.epochJdTT[slot]) {
       // The new row is newer: it takes the slot; the row it replaces is reported. Its raw
       // text is no longer held (rows are not kept as text), so the reject names it instead.
+      this.rejectedByFile[this.fileIndex[slot]]++;
       this.rejects.push({
         kind: 'duplicate',
         file: keptFile,
@@ -113,6 +141,7 @@ export class CatalogueBuilder {
       this.write(slot, row, file, line);
       kept = true;
     } else {
+      this.rejectedByFile[this.fileNumber(file)]++;
       this.rejects.push({
         kind: 'duplicate', file, line, text,
         reason: `duplicate designation ${row.designation}: epoch not newer than ${keptFile}:${keptLine}, which is kept`,
@@ -145,15 +174,13 @@ export class CatalogueBuilder {
     this.source[slot] = line;
   }
 
+  /** Input number of `file`: the current input when the name matches, else by name. */
   private fileNumber(file: string): number {
-    let k = this.fileSlot.get(file);
-    if (k === undefined) {
-      k = this.files.length;
-      if (k > 0xffff) throw new RangeError('more than 65 535 input files');
-      this.files.push(file);
-      this.fileSlot.set(file, k);
-    }
-    return k;
+    const cur = this.currentFile;
+    if (cur >= 0 && this.files[cur] === file) return cur;
+    const k = this.fileSlot.get(file);
+    this.currentFile = k === undefined ? this.beginFile(file) : k;
+    return this.currentFile;
   }
 
   private grow(capacity: number): void {

@@ -57,7 +57,7 @@ export interface Catalogue {
   quality: Uint32Array; // bit flags, see QUALITY_FLAGS
   fileIndex: Uint16Array; // index into `files`
   source: Uint32Array; // 1-based line number in its input file
-  files: string[]; // input file names, as given
+  files: string[]; // input file names, one per input in the order given (a name may repeat)
 }
 
 /** Why a row was set aside: unreadable, breaking a validity rule, or a superseded duplicate. */

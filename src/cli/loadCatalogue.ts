@@ -47,6 +47,7 @@ export async function loadCatalogue(paths: readonly string[], opts: LoadOptions 
   const files: FileAccount[] = [];
   const errors: UnreadableInputError[] = [];
   for (const path of paths) {
+    builder.beginFile(path); // input number = index in `files`
     const readBefore = builder.read;
     try {
       const info = await readOrbitFile(
@@ -70,14 +71,11 @@ export async function loadCatalogue(paths: readonly string[], opts: LoadOptions 
       });
     }
   }
-  const rejects = builder.rejects;
-  const catalogue = builder.finish();
-  // Per-file rejected counts include superseded duplicates, attributed to their own file.
-  const rejectedByFile = new Map<string, number>();
-  for (const r of rejects) rejectedByFile.set(r.file, (rejectedByFile.get(r.file) ?? 0) + 1);
-  for (const f of files) {
-    f.rows.rejected = rejectedByFile.get(f.file) ?? 0;
+  // Per-input rejected counts include superseded duplicates, charged to the input they
+  // came from (by position, so a file listed twice is two inputs, each accounted for).
+  files.forEach((f, k) => {
+    f.rows.rejected = builder.rejectedIn(k);
     f.rows.accepted = f.rows.read - f.rows.rejected;
-  }
-  return { catalogue, rejects, files, errors };
+  });
+  return { catalogue: builder.finish(), rejects: builder.rejects, files, errors };
 }

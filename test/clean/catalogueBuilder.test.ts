@@ -43,6 +43,35 @@ describe('CatalogueBuilder', () => {
     expect(b.rejects[0].reason).toBe('duplicate designation 2031 QQ1: older epoch than new.txt:9, which is kept');
   });
 
+  it('charges every reject to the input it came from, a file listed twice being two inputs', () => {
+    // Invented rows. Input 0 'a' has X (old epoch) and Y; input 1 'b' has a newer X, which
+    // supersedes input 0's X; input 2 is 'a' again: both its rows are duplicates of kept rows.
+    const b = new CatalogueBuilder();
+    const read: number[] = [];
+    const offer = (file: string, rows: [string, number][]) => {
+      const before = b.read;
+      expect(b.beginFile(file)).toBe(read.length);
+      rows.forEach(([designation, epochJdTT], k) => b.add(asteroidRow({ designation, epochJdTT }), file, k + 1, designation));
+      read.push(b.read - before);
+    };
+    offer('a', [['X', 2_462_000.5], ['Y', 2_462_000.5]]);
+    offer('b', [['X', 2_463_000.5]]);
+    offer('a', [['X', 2_462_000.5], ['Y', 2_462_000.5]]);
+    const accounts = read.map((n, k) => ({ read: n, accepted: n - b.rejectedIn(k), rejected: b.rejectedIn(k) }));
+    const cat = b.finish();
+    expect(accounts).toEqual([
+      { read: 2, accepted: 1, rejected: 1 }, // its X superseded by b's
+      { read: 1, accepted: 1, rejected: 0 },
+      { read: 2, accepted: 0, rejected: 2 },
+    ]);
+    expect(cat.files).toEqual(['a', 'b', 'a']);
+    // Accepted per input, counted from the catalogue itself, agrees with the accounts.
+    const kept = [0, 0, 0];
+    for (let k = 0; k < cat.size; k++) kept[cat.fileIndex[k]]++;
+    expect(kept).toEqual(accounts.map((a) => a.accepted));
+    expect(accounts.reduce((s, a) => s + a.rejected, 0)).toBe(b.rejects.length);
+  });
+
   it('flags poor orbits without rejecting them', () => {
     const b = new CatalogueBuilder();
     b.add(asteroidRow({ nOpp: 1, arcDays: 6, nObs: 8, uncertainty: 8, lastObsJdTT: 2_455_000.5 }), 'f', 1, '');

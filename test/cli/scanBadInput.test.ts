@@ -59,6 +59,26 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     expect(rejects[1]).toContain('mixed.txt.gz,2,parse,');
   });
 
+  it('a duplicate spanning files and a file listed twice: each input accounted for on its own', () => {
+    const dir = tempDir();
+    const a = join(dir, 'a.txt');
+    const b = join(dir, 'b.txt');
+    writeFileSync(a, `${CERES}\n${THETIS}\n`);
+    // Ceres again with a later epoch (K2669 → K266A, one day on; packed-epoch letters: the
+    // day digit 10 is 'A'), so b's row supersedes a's.
+    writeFileSync(b, `${CERES.replace(' K2669 ', ' K266A ')}\n`);
+    const out = join(dir, 'o');
+    const r = runCli(['scan', a, b, a, '--out', out, '--quiet']);
+    expect(r.status).toBe(0);
+    const s = summaryOf(out);
+    expect(s.files.map((f: { rows: unknown }) => f.rows)).toEqual([
+      { read: 2, accepted: 1, rejected: 1 },
+      { read: 1, accepted: 1, rejected: 0 },
+      { read: 2, accepted: 0, rejected: 2 },
+    ]);
+    expect(s.rows).toEqual({ read: 5, accepted: 2, rejected: 3 });
+  });
+
   it('reads standard input with -', () => {
     const dir = tempDir();
     const r = runCli(['scan', '-', '--out', join(dir, 'o'), '--format', 'json'], { input: `${CERES}\n` });
