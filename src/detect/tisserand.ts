@@ -24,13 +24,13 @@
  *     bodies for Jupiter), unless includeExterior is set.
  * Score: |T − boundary| − margin, so anomalies score above 0 and boundary cases below.
  * falseAlarm: the empirical tail fraction of the same-catalogue screened population that
- * is at least as far to that side (empiricalTail.ts).
+ * is at least as far to that side, the body itself included (empiricalTail.ts).
  */
 import { PLANET_MEAN_A_AU, PLANETS, planetGmAu3PerDay2, GM_SUN_AU3_PER_DAY2, DEG_PER_RAD } from '../core/constants.js';
 import type { PlanetName } from '../core/constants.js';
 import { tisserandParameter } from '../core/tisserand.js';
 import { KIND_COMET, qualityNames, type Catalogue } from '../clean/types.js';
-import { lowerTailFraction, upperTailFraction } from './empiricalTail.js';
+import { memberLowerTailFraction, memberUpperTailFraction } from './empiricalTail.js';
 import type { Candidate, Detector, DetectorOptions, TisserandOptions } from './types.js';
 
 export const TISSERAND_DEFAULTS: Readonly<TisserandOptions> = {
@@ -101,7 +101,8 @@ export const tisserandDetector: Detector = {
       const comet = cat.kind[k] === KIND_COMET;
       const beyond = comet ? t[k] - opts.boundary : opts.boundary - t[k];
       if (!(beyond > 0)) continue;
-      const falseAlarm = comet ? upperTailFraction(sortedComet, t[k]) : lowerTailFraction(sortedAsteroid, t[k]);
+      // The body is a member of its own reference sample (it is screened and its T finite).
+      const falseAlarm = comet ? memberUpperTailFraction(sortedComet, t[k]) : memberLowerTailFraction(sortedAsteroid, t[k]);
       out.push(candidateFor(cat, k, t[k], beyond, zones[k], falseAlarm, comet, opts, comet ? sortedComet.length : sortedAsteroid.length));
     }
     progress?.end();

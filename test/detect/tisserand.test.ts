@@ -34,8 +34,11 @@ describe('Tisserand screen (synthetic catalogue of invented bodies)', () => {
     expect(a.details.T).toBeLessThan(2.95);
     expect(m.details.T).toBeGreaterThan(3.05);
     expect(a.score).toBeGreaterThan(0);
-    // The only asteroid this low in 201 screened asteroids: tail fraction (1+1)/(201+1).
-    expect(a.falseAlarm).toBeCloseTo(2 / 202, 8);
+    // The only asteroid this low in 201 screened asteroids: the plus-one rule over the 200
+    // others (Davison & Hinkley 1997, eq. 4.11) gives (1 + 0)/(200 + 1) = 1/201, and the
+    // sentence's percentage is then exactly one body of 201.
+    expect(a.falseAlarm).toBeCloseTo(1 / 201, 8);
+    expect(a.why).toContain('0.50% of 201 screened asteroid-catalogue bodies are as far');
     expect(a.why).toMatch(/^T_J = 2\.\d{3} on an asteroid-catalogue orbit \(a = 3\.400 au/);
   });
 
