@@ -8,8 +8,9 @@
  *   - asteroid-like T (above the boundary) on a body from a comet catalogue (activity on
  *     a main-belt-like orbit).
  * T is not exactly conserved (the planet's orbit is eccentric and inclined, other planets
- * perturb), so a band of ±margin around the boundary is flagged 'boundary' rather than
- * ranked high. Default margin 0.05: T_J < 3.05 is the limit used to admit asteroids on
+ * perturb), so a body on the anomalous side but within `margin` of the boundary is flagged
+ * 'boundary' rather than ranked high (the band is ±margin wide; only its anomalous half can
+ * raise a candidate, since a body on its catalogue's expected side is not one). Default margin 0.05: T_J < 3.05 is the limit used to admit asteroids on
  * cometary orbits allowing for such variation (Tancredi 2014, Icarus 234, 66; from memory).
  *
  * Zones where a low T is expected and says nothing about origin are not screened:

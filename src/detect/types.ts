@@ -24,7 +24,7 @@ export interface TisserandOptions {
   planet: PlanetName; // the perturbing planet T is taken with respect to
   boundary: number; // the asteroid/comet dividing value of T
   margin: number; // half-width of the boundary band around it
-  includeExterior: boolean; // also screen bodies with a beyond the planet's co-orbital zone
+  includeExterior: boolean; // also screen bodies whose perihelion lies beyond the planet (q > aP)
 }
 
 /** Options for every detector, one block per detector. */
