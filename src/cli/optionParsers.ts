@@ -31,6 +31,13 @@ export function parseFiniteNumber(value: string): number {
   return x;
 }
 
+/** A finite number ≥ 0 (a half-width, a tolerance). */
+export function parseNonNegativeNumber(value: string): number {
+  const x = parseFiniteNumber(value);
+  if (x < 0) throw new InvalidArgumentError(`'${value}' is negative; a value ≥ 0 is needed`);
+  return x;
+}
+
 export function parsePositiveInteger(value: string): number {
   const x = Number(value);
   if (!Number.isInteger(x) || x <= 0) throw new InvalidArgumentError(`'${value}' is not a positive integer`);

@@ -6,11 +6,12 @@ import { mkdir } from 'node:fs/promises';
 import { join, relative } from 'node:path';
 import { Command, Option } from 'commander';
 import { DEFAULT_QUALITY, DEFAULT_VALIDITY } from '../clean/thresholds.js';
+import type { Catalogue } from '../clean/types.js';
 import type { PlanetName } from '../core/constants.js';
 import type { Progress } from '../core/progress.js';
 import { DETECTORS, detectorById } from '../detect/registry.js';
 import { TISSERAND_DEFAULTS } from '../detect/tisserand.js';
-import type { Candidate, DetectorOptions } from '../detect/types.js';
+import type { Candidate, Detector, DetectorOptions } from '../detect/types.js';
 import type { InputFormat } from '../io/types.js';
 import { writeCandidatesCsv, writeCandidatesJsonl } from '../report/candidateFiles.js';
 import { rankInPlace } from '../report/rank.js';
@@ -21,8 +22,8 @@ import { writeFileAtomic } from '../report/atomicWrite.js';
 import type { ScanSummary } from '../report/types.js';
 import { loadCatalogue } from './loadCatalogue.js';
 import {
-  parseColumnMapping, parseDetectorList, parseFiniteNumber, parseInputFormat, parseOutputFormat,
-  parsePlanet, parsePositiveInteger,
+  parseColumnMapping, parseDetectorList, parseFiniteNumber, parseInputFormat, parseNonNegativeNumber,
+  parseOutputFormat, parsePlanet, parsePositiveInteger,
 } from './optionParsers.js';
 import { demoFiles, packageVersion } from './packageInfo.js';
 import { scanStdoutTable } from './scanTable.js';
@@ -52,7 +53,25 @@ function seconds(t0: bigint): number {
   return Number((Number(process.hrtime.bigint() - t0) / 1e9).toFixed(3));
 }
 
-/** Run a whole scan and write its outputs. Throws only on output failures. */
+/** Run the detectors named, in order, timing each into `timing` as `<id>Seconds`. */
+function runDetectors(
+  ids: readonly string[], cat: Catalogue, detOpts: DetectorOptions, timing: Record<string, number>, progress?: Progress,
+): { detectors: Detector[]; candidates: Candidate[] } {
+  const detectors = ids.map((id) => {
+    const d = detectorById(id);
+    if (!d) throw new RangeError(`unknown detector ${id}`);
+    return d;
+  });
+  const candidates: Candidate[] = [];
+  for (const d of detectors) {
+    const t0 = process.hrtime.bigint();
+    candidates.push(...d.run(cat, detOpts, progress));
+    timing[`${d.id}Seconds`] = seconds(t0);
+  }
+  return { detectors, candidates };
+}
+
+/** Run a whole scan and write its outputs. Throws on output failures and unknown detector ids. */
 export async function runScan(opts: ScanOptions, progress?: Progress): Promise<ScanResult> {
   const tStart = process.hrtime.bigint();
   const files = opts.files.length > 0 ? opts.files : demoFiles().map((f) => relative(process.cwd(), f) || f);
@@ -71,17 +90,7 @@ export async function runScan(opts: ScanOptions, progress?: Progress): Promise<S
       includeExterior: opts.includeExterior,
     },
   };
-  const detectors = opts.detectors.map((id) => {
-    const d = detectorById(id);
-    if (!d) throw new RangeError(`unknown detector ${id}`);
-    return d;
-  });
-  const candidates: Candidate[] = [];
-  for (const d of detectors) {
-    t0 = process.hrtime.bigint();
-    candidates.push(...d.run(loaded.catalogue, detOpts, progress));
-    timing[`${d.id}Seconds`] = seconds(t0);
-  }
+  const { detectors, candidates } = runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, progress);
   const ranked = rankInPlace(candidates, opts.detectors);
   sortRejectsInPlace(loaded.rejects, files);
   t0 = process.hrtime.bigint();
@@ -126,7 +135,7 @@ export function registerScan(program: Command): void {
     .option('-d, --detectors <list>', `comma-separated detectors (${DETECTORS.map((d) => d.id).join(', ')})`, parseDetectorList, DETECTORS.map((d) => d.id))
     .option('--planet <name>', 'planet the Tisserand parameter is taken with respect to', parsePlanet, TISSERAND_DEFAULTS.planet)
     .option('--tisserand-boundary <T>', 'asteroid/comet dividing value of T (Levison 1996)', parseFiniteNumber, TISSERAND_DEFAULTS.boundary)
-    .option('--tisserand-margin <dT>', 'half-width of the boundary band flagged rather than ranked', parseFiniteNumber, TISSERAND_DEFAULTS.margin)
+    .option('--tisserand-margin <dT>', 'half-width of the boundary band flagged rather than ranked (≥ 0)', parseNonNegativeNumber, TISSERAND_DEFAULTS.margin)
     .option('--include-exterior', 'also screen bodies whose perihelion lies beyond the planet', false)
     .addOption(new Option('--input-format <format>', 'force the input format instead of detecting it').argParser(parseInputFormat))
     .option('--columns <map>', 'CSV column mapping, e.g. designation=objname,a=semimajor', parseColumnMapping)

@@ -126,6 +126,13 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     expect(r.stderr).toContain("unknown planet 'pluto'");
   });
 
+  it('a negative boundary half-width is a usage error (it would turn boundary cases into anomalies)', () => {
+    const r = runCli(['scan', '--tisserand-margin', '-0.5']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain("'-0.5' is negative");
+    expect(runCli(['scan', '--tisserand-margin', 'abc']).status).toBe(2);
+  });
+
   it('leaves no temporary files in the output directory', () => {
     const dir = tempDir();
     writeFileSync(join(dir, 'a.txt'), `${CERES}\n`);
