@@ -9,21 +9,27 @@ export function terminalProgress(enabled: boolean): Progress {
   let stage = '';
   let total: number | undefined;
   let last = 0;
+  let shown = 0; // length of the line on screen, so end() blanks all of it
+  const show = (line: string) => {
+    process.stderr.write(`\r${line}`);
+    shown = Math.max(shown, line.length);
+  };
   return {
     start(s, t) {
       stage = s;
       total = t;
-      process.stderr.write(`\r${stage}…`);
+      show(`${stage}…`);
     },
     update(done) {
       const now = Date.now();
       if (now - last < 100) return;
       last = now;
       const pct = total ? ` ${((100 * done) / total).toFixed(0)}%` : ` ${done}`;
-      process.stderr.write(`\r${stage}${pct}   `);
+      show(`${stage}${pct}   `);
     },
     end() {
-      process.stderr.write(`\r${' '.repeat(stage.length + 8)}\r`);
+      process.stderr.write(`\r${' '.repeat(shown)}\r`);
+      shown = 0;
     },
   };
 }
