@@ -53,6 +53,9 @@ export class CatalogueBuilder {
   private readonly fileSlot = new Map<string, number>(); // name → its latest input
   private readonly rejectedByFile: number[] = []; // rejects charged to each input
   private currentFile = -1; // input of the last row offered
+  // Duplicate rejects whose reason names the row kept in `slot`: a later, newer row can
+  // take the slot, so finish() names the row finally kept (duplicates only, rare).
+  private readonly duplicateReasons: { reject: Reject; prefix: string; slot: number }[] = [];
   size = 0;
   read = 0;
   readonly rejects: Reject[] = [];
@@ -123,32 +126,35 @@ export class CatalogueBuilder {
   }
 
   private settleDuplicate(slot: number, row: OrbitRow, file: string, line: number, text: string): boolean {
-    const keptFile = this.files[this.fileIndex[slot]];
-    const keptLine = this.source[slot];
-    let kept = false;
-    if (row.epochJdTT > this.cols.epochJdTT[slot]) {
+    let reject: Reject;
+    let prefix: string;
+    const kept = row.epochJdTT > this.cols.epochJdTT[slot];
+    if (kept) {
       // The new row is newer: it takes the slot; the row it replaces is reported. Its raw
       // text is no longer held (rows are not kept as text), so the reject names it instead.
       this.rejectedByFile[this.fileIndex[slot]]++;
-      this.rejects.push({
-        kind: 'duplicate',
-        file: keptFile,
-        line: keptLine,
-        reason: `duplicate designation ${row.designation}: older epoch than ${file}:${line}, which is kept`,
+      prefix = `duplicate designation ${row.designation}: older epoch than`;
+      reject = {
+        kind: 'duplicate', file: this.files[this.fileIndex[slot]], line: this.source[slot], reason: '',
         text: `${this.designation[slot]} (epoch JD ${this.cols.epochJdTT[slot]})`,
-      });
+      };
       this.designation[slot] = row.designation;
       this.write(slot, row, file, line);
-      kept = true;
     } else {
       this.rejectedByFile[this.fileNumber(file)]++;
-      this.rejects.push({
-        kind: 'duplicate', file, line, text,
-        reason: `duplicate designation ${row.designation}: epoch not newer than ${keptFile}:${keptLine}, which is kept`,
-      });
+      prefix = `duplicate designation ${row.designation}: epoch not newer than`;
+      reject = { kind: 'duplicate', file, line, text, reason: '' };
     }
+    reject.reason = this.keptReason(prefix, slot);
+    this.rejects.push(reject);
+    this.duplicateReasons.push({ reject, prefix, slot });
     this.quality[slot] |= DUPLICATE_KEPT;
     return kept;
+  }
+
+  /** `prefix file:line, which is kept`, naming the row now in `slot`. */
+  private keptReason(prefix: string, slot: number): string {
+    return `${prefix} ${this.files[this.fileIndex[slot]]}:${this.source[slot]}, which is kept`;
   }
 
   private write(slot: number, row: OrbitRow, file: string, line: number): void {
@@ -199,9 +205,12 @@ export class CatalogueBuilder {
 
   /**
    * The finished catalogue. Columns are views of the builder's buffers, trimmed to size
-   * (no copy); the builder must not be used after.
+   * (no copy); the builder must not be used after. Duplicate rejects then name the row
+   * finally kept for their body.
    */
   finish(): Catalogue {
+    // Epochs only grow in a slot, so the row finally kept is as new as any row named before.
+    for (const d of this.duplicateReasons) d.reject.reason = this.keptReason(d.prefix, d.slot);
     const n = this.size;
     const c = this.cols;
     return {

@@ -43,6 +43,21 @@ describe('CatalogueBuilder', () => {
     expect(b.rejects[0].reason).toBe('duplicate designation 2031 QQ1: older epoch than new.txt:9, which is kept');
   });
 
+  it('duplicate rejects name the row finally kept, not one superseded later', () => {
+    const b = new CatalogueBuilder();
+    b.add(asteroidRow({ designation: '2031 QQ2', epochJdTT: 2_461_000.5 }), 'f', 1, 'first');
+    b.add(asteroidRow({ designation: '2031 QQ2', epochJdTT: 2_460_000.5 }), 'f', 2, 'oldest');
+    b.add(asteroidRow({ designation: '2031 QQ2', epochJdTT: 2_462_000.5 }), 'f', 3, 'second');
+    b.add(asteroidRow({ designation: '2031 QQ2', epochJdTT: 2_463_000.5 }), 'f', 4, 'newest');
+    const cat = b.finish();
+    expect(cat.source[0]).toBe(4);
+    expect(b.rejects.map((r) => [r.line, r.reason])).toEqual([
+      [2, 'duplicate designation 2031 QQ2: epoch not newer than f:4, which is kept'],
+      [1, 'duplicate designation 2031 QQ2: older epoch than f:4, which is kept'],
+      [3, 'duplicate designation 2031 QQ2: older epoch than f:4, which is kept'],
+    ]);
+  });
+
   it('charges every reject to the input it came from, a file listed twice being two inputs', () => {
     // Invented rows. Input 0 'a' has X (old epoch) and Y; input 1 'b' has a newer X, which
     // supersedes input 0's X; input 2 is 'a' again: both its rows are duplicates of kept rows.
