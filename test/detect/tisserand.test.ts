@@ -83,4 +83,16 @@ describe('Tisserand screen (synthetic catalogue of invented bodies)', () => {
     expect(tisserandZone('jupiter', 3.97, 3.2, 0.2, 10 * RAD_PER_DEG)).toBe('hilda');
     expect(tisserandZone('jupiter', -3, 1.2, 1.4, 0)).toBe('unbound');
   });
+
+  it('zones: edges of the co-orbital band and the interior/crossing/exterior split by q and Q = a(1 + e)', () => {
+    // Half-width from Jupiter's mass ratio μ = 1/(1047.35 + 1) (from memory), not from the code.
+    const w = Math.sqrt(8 / (3 * 1048.35));
+    const aJ = 5.202887; // Standish & Williams mean a of Jupiter (the project's constant, to 7 digits)
+    expect(tisserandZone('jupiter', aJ * (1 + 0.99 * w), aJ * 0.9, 0.1, 0)).toBe('coorbital');
+    expect(tisserandZone('jupiter', aJ * (1 - 0.99 * w), aJ * 0.9, 0.1, 0)).toBe('coorbital');
+    expect(tisserandZone('jupiter', aJ * (1 + 1.01 * w), aJ * 0.9, 0.1, 0)).toBe('crossing');
+    expect(tisserandZone('jupiter', 2.5, 2.25, 0.1, 0)).toBe('interior'); // Q = 2.75 au < aJ
+    expect(tisserandZone('jupiter', 4.5, 3.6, 0.2, 0)).toBe('crossing'); // Q = 5.4 au > aJ, outside the Hilda window in a
+    expect(tisserandZone('jupiter', 8, 6, 0.25, 0)).toBe('exterior'); // q = 6 au > aJ
+  });
 });
