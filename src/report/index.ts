@@ -4,6 +4,7 @@ export * from './csvField.js';
 export * from './rank.js';
 export * from './candidateFiles.js';
 export * from './rejectsFile.js';
+export * from './rejectCategories.js';
 export * from './summary.js';
 export * from './textTable.js';
 export * from './candidateCells.js';

@@ -5,7 +5,7 @@
  */
 import { QUALITY_FLAGS, type Catalogue, type Reject } from '../clean/types.js';
 import type { Candidate } from '../detect/types.js';
-import { rejectCategories } from './rejectsFile.js';
+import { rejectCategories } from './rejectCategories.js';
 import type { FileAccount, ScanSummary } from './types.js';
 
 export interface SummaryInput {
