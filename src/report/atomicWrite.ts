@@ -43,8 +43,14 @@ export class AtomicFileWriter {
     await fs.rename(this.tmp, this.target);
   }
 
+  /**
+   * Drop the temporary file. The stream is closed first: a stream still opening its file
+   * would otherwise create it after the removal and leave it behind.
+   */
   async abort(): Promise<void> {
+    const closed = this.stream.closed ? Promise.resolve() : once(this.stream, 'close').catch(() => undefined);
     this.stream.destroy();
+    await closed;
     await fs.rm(this.tmp, { force: true });
   }
 }
