@@ -143,7 +143,7 @@ function candidateFor(
     details: {
       planet: opts.planet,
       T: round(tValue, 6),
-      a_au: round(cat.a[k], 6),
+      a_au: Number.isFinite(cat.a[k]) ? round(cat.a[k], 6) : 'parabolic', // JSON has no Infinity
       q_au: round(cat.q[k], 6),
       e: round(cat.e[k], 7),
       i_deg: round(iDeg, 5),

@@ -96,3 +96,14 @@ describe('Tisserand screen (synthetic catalogue of invented bodies)', () => {
     expect(tisserandZone('jupiter', 8, 6, 0.25, 0)).toBe('exterior'); // q = 6 au > aJ
   });
 });
+
+describe('Tisserand details of a parabolic orbit', () => {
+  it('write the same a in JSON and CSV (no Infinity, which JSON cannot hold)', () => {
+    const b = new CatalogueBuilder();
+    b.add(asteroidRow({ designation: 'PARAB', aAu: Number.NaN, qAu: 2.5, e: 1, iDeg: 20, meanAnomalyDeg: Number.NaN, tpJdTT: 2_463_100.5 }), 'synthetic', 1, '');
+    const cat = b.finish();
+    const [c] = tisserandDetector.run(cat, { tisserand: TISSERAND_DEFAULTS });
+    expect(c.details.a_au).toBe('parabolic');
+    expect(c.details.zone).toBe('unbound');
+  });
+});
