@@ -11,6 +11,7 @@
  * steadier figure). Figures only; nothing is asserted.
  * Usage: npx tsx scripts/bench/ephemeris.ts
  */
+import { seededRandom, uniformArray } from '../../src/core/random.js';
 import { pathToFileURL } from 'node:url';
 import { performance } from 'node:perf_hooks';
 import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
@@ -28,18 +29,9 @@ const START_JD = J2000; // 2000
 const END_JD = START_JD + 3_652.5; // 2010
 const DAYS_PER_YEAR = 365.25;
 
-/** Deterministic dates (mulberry32, common practice) so runs are comparable. */
+/** Deterministic dates (seeded, src/core/random.ts) so runs are comparable. */
 function dates(seed: number, n: number): Float64Array {
-  let s = seed >>> 0;
-  const out = new Float64Array(n);
-  for (let k = 0; k < n; k++) {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    out[k] = START_JD + (((t ^ (t >>> 14)) >>> 0) / 4294967296) * (END_JD - START_JD);
-  }
-  return out;
+  return uniformArray(seededRandom(seed), n, START_JD, END_JD);
 }
 
 /** Evaluations per second of eph over the dates, cycling through the bodies. */

@@ -10,6 +10,7 @@
  * Each figure is the best of 5 runs (shared machine). Usage: npx tsx scripts/bench/parse.ts
  * [lines]. Figures only; nothing is asserted.
  */
+import { seededRandom } from '../../src/core/random.js';
 import { createReadStream, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -19,17 +20,6 @@ import * as io from '../../src/io/index.js';
 
 const N = Number(process.argv[2] ?? 200_000);
 
-/** Small deterministic generator (mulberry32, common practice) so runs are comparable. */
-function seededRandom(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function makeLines(n: number): string[] {
   const random = seededRandom(12345);

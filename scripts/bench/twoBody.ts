@@ -5,6 +5,7 @@
  * elements → state conversions per second, with their ratios. Figures only; nothing is
  * asserted. Usage: npx tsx scripts/bench/twoBody.ts
  */
+import { seededRandom, uniformArray } from '../../src/core/random.js';
 import { pathToFileURL } from 'node:url';
 import { performance } from 'node:perf_hooks';
 import { propagateTwoBody } from '../../src/core/universal.js';
@@ -14,18 +15,9 @@ import { GM_SUN_AU3_PER_DAY2 } from '../../src/core/constants.js';
 
 const N_ORBITS = 1000;
 
-/** Deterministic uniform numbers in [0, 1) (mulberry32, common practice). */
+/** Deterministic uniform numbers in [0, 1) (seeded, src/core/random.ts). */
 function uniforms(seed: number, n: number): Float64Array {
-  let s = seed >>> 0;
-  const out = new Float64Array(n);
-  for (let k = 0; k < n; k++) {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    out[k] = ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  }
-  return out;
+  return uniformArray(seededRandom(seed), n);
 }
 
 /** Perihelion elements for N_ORBITS bodies, 6 per row: q, e, i, Ω, ω, T (epoch 0). */

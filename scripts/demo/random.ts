@@ -4,23 +4,12 @@
  * Math.random, so a seed fixes the output byte for byte.
  */
 
-/** A source of uniform deviates in [0, 1). */
-export type Random = () => number;
+export type { Random } from '../../src/core/random.js';
+import { seededRandom, type Random } from '../../src/core/random.js';
 
-/**
- * mulberry32: a 32-bit state generator by Tommy Ettinger (public domain, 2017), period 2^32.
- * Good enough for demo data (not for cryptography, not for long Monte-Carlo studies).
- */
+/** The demo's generator: the project's seeded mulberry32 (src/core/random.ts). */
 export function mulberry32(seed: number): Random {
-  if (!Number.isInteger(seed)) throw new RangeError(`mulberry32: seed must be an integer, got ${seed}`);
-  let state = seed >>> 0;
-  return function next(): number {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
-  };
+  return seededRandom(seed);
 }
 
 /** Uniform deviate in [lo, hi). */

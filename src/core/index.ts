@@ -34,3 +34,4 @@ export * from './universal.js';
 export * from './twoBody.js';
 export * from './readerEpochs.js';
 export * from './stateToElements.js';
+export * from './random.js';
