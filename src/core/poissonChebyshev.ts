@@ -340,30 +340,20 @@ export function poissonChunkCoefficients(
       }
       const cd = Math.cos(step);
       const sd = Math.sin(step);
-      if (quartic) accumulateQuadraticPhase(acc, accBase, slots, count, g, gAt, m, c, sn, cd, sd, Math.cos(second), Math.sin(second));
-      else accumulateLinearPhase(acc, accBase, slots, count, g, gAt, m, c, sn, cd, sd);
+      // A linear phase is the quadratic case with a zero second step (cos 1, sin 0): the
+      // rotation of the step by it is exact, so results are bit-identical to a linear loop.
+      const cq = quartic ? Math.cos(second) : 1;
+      const sq = quartic ? Math.sin(second) : 0;
+      accumulatePhase(acc, accBase, slots, count, g, gAt, m, c, sn, cd, sd, cq, sq);
     }
   }
 }
 
-/** One term, linear phase: acc[o + j] += g_j cos φ_s (j even) or g_j sin φ_s (j odd), φ_{s+1} = φ_s + step. */
-function accumulateLinearPhase(
-  acc: Float64Array, accBase: number, slots: number, count: number, g: Float64Array, gAt: number, m: number,
-  c: number, sn: number, cd: number, sd: number,
-): void {
-  for (let seg = 0, o = accBase; seg < count; seg++, o += slots) {
-    for (let j = 0; j < m; j += 2) {
-      acc[o + j] += g[gAt + j] * c;
-      acc[o + j + 1] += g[gAt + j + 1] * sn;
-    }
-    const cNext = c * cd - sn * sd;
-    sn = sn * cd + c * sd;
-    c = cNext;
-  }
-}
-
-/** As accumulateLinearPhase, with the step itself advancing by `second` each segment. */
-function accumulateQuadraticPhase(
+/**
+ * One term: acc[o + j] += g_j cos φ_s (j even) or g_j sin φ_s (j odd), with φ_{s+1} = φ_s +
+ * step_s and the step itself advancing by `second` each segment (rotations by cd, sd and cq, sq).
+ */
+function accumulatePhase(
   acc: Float64Array, accBase: number, slots: number, count: number, g: Float64Array, gAt: number, m: number,
   c: number, sn: number, cd: number, sd: number, cq: number, sq: number,
 ): void {
