@@ -59,24 +59,27 @@ export function sampleHungaria(random: Random, out: DemoElements): void {
   randomAngles(random, out);
 }
 
-/** Mars-crossers: 1.3 < q < 1.666 au, a 1.6–3.3 au, i Rayleigh 10°. */
-export function sampleMarsCrosser(random: Random, out: DemoElements): void {
-  const a = uniform(random, 1.7, 3.3);
-  const q = uniform(random, 1.3, 1.666);
+/**
+ * Shared shape of the q-bounded samplers: a and q uniform in their ranges (in that order,
+ * which fixes the demo's random sequence), e = 1 − q/a, i Rayleigh capped at iMaxDeg.
+ */
+function sampleAQ(random: Random, out: DemoElements, aLo: number, aHi: number, qLo: number, qHi: number, iSigmaDeg: number, iMaxDeg: number): void {
+  const a = uniform(random, aLo, aHi);
+  const q = uniform(random, qLo, qHi);
   out.aAu = a;
   out.e = 1 - q / a;
-  out.iDeg = Math.min(rayleigh(random, 10), 45);
+  out.iDeg = Math.min(rayleigh(random, iSigmaDeg), iMaxDeg);
   randomAngles(random, out);
+}
+
+/** Mars-crossers: 1.3 < q < 1.666 au, a 1.6–3.3 au, i Rayleigh 10°. */
+export function sampleMarsCrosser(random: Random, out: DemoElements): void {
+  sampleAQ(random, out, 1.7, 3.3, 1.3, 1.666, 10, 45);
 }
 
 /** Apollo: a 1.0–2.8 au, q < 1.017 au (q ≥ 0.1 au), i Rayleigh 12°. */
 export function sampleApollo(random: Random, out: DemoElements): void {
-  const a = uniform(random, 1.02, 2.8);
-  const q = uniform(random, 0.1, 1.017);
-  out.aAu = a;
-  out.e = 1 - q / a;
-  out.iDeg = Math.min(rayleigh(random, 12), 70);
-  randomAngles(random, out);
+  sampleAQ(random, out, 1.02, 2.8, 0.1, 1.017, 12, 70);
 }
 
 /** Aten: a 0.6–1.0 au, Q > 0.983 au, e ≤ 0.8, i Rayleigh 12°. */
