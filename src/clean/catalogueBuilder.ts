@@ -17,7 +17,7 @@ import { invalidReason } from './validate.js';
 const DUPLICATE_KEPT = qualityBit('duplicate-kept');
 const FLOAT_COLUMNS = [
   'epochJdTT', 'a', 'q', 'e', 'i', 'node', 'peri', 'meanAnomaly', 'tpJdTT', 'H',
-  'uncertainty', 'nObs', 'arcDays',
+  'uncertainty', 'nObs', 'nOpp', 'arcDays',
 ] as const;
 type FloatColumn = (typeof FLOAT_COLUMNS)[number];
 
@@ -46,6 +46,7 @@ export class CatalogueBuilder {
   private cols!: Record<FloatColumn, Float64Array>;
   private kind: Uint8Array = new Uint8Array(0);
   private quality: Uint32Array = new Uint32Array(0);
+  private uncertaintyCode: Uint8Array = new Uint8Array(0);
   private fileIndex: Uint16Array = new Uint16Array(0);
   private source: Uint32Array = new Uint32Array(0);
   private readonly designation: string[] = [];
@@ -173,7 +174,9 @@ export class CatalogueBuilder {
     c.H[slot] = row.H;
     c.uncertainty[slot] = row.uncertainty;
     c.nObs[slot] = row.nObs;
+    c.nOpp[slot] = row.nOpp;
     c.arcDays[slot] = row.arcDays;
+    this.uncertaintyCode[slot] = row.uncertaintyCode === '' ? 0 : row.uncertaintyCode.charCodeAt(0);
     this.kind[slot] = row.kind === 'comet' ? KIND_COMET : KIND_ASTEROID;
     this.quality[slot] = qualityWord(row, this.thresholds);
     this.fileIndex[slot] = this.fileNumber(file);
@@ -198,6 +201,7 @@ export class CatalogueBuilder {
     this.cols = next;
     this.kind = resized(this.kind, capacity, this.size) as Uint8Array;
     this.quality = resized(this.quality, capacity, this.size) as Uint32Array;
+    this.uncertaintyCode = resized(this.uncertaintyCode, capacity, this.size) as Uint8Array;
     this.fileIndex = resized(this.fileIndex, capacity, this.size) as Uint16Array;
     this.source = resized(this.source, capacity, this.size) as Uint32Array;
     this.capacity = capacity;
@@ -221,7 +225,8 @@ export class CatalogueBuilder {
       a: c.a.subarray(0, n), q: c.q.subarray(0, n), e: c.e.subarray(0, n), i: c.i.subarray(0, n),
       node: c.node.subarray(0, n), peri: c.peri.subarray(0, n), meanAnomaly: c.meanAnomaly.subarray(0, n),
       tpJdTT: c.tpJdTT.subarray(0, n), H: c.H.subarray(0, n), uncertainty: c.uncertainty.subarray(0, n),
-      nObs: c.nObs.subarray(0, n), arcDays: c.arcDays.subarray(0, n),
+      uncertaintyCode: this.uncertaintyCode.subarray(0, n),
+      nObs: c.nObs.subarray(0, n), nOpp: c.nOpp.subarray(0, n), arcDays: c.arcDays.subarray(0, n),
       quality: this.quality.subarray(0, n), fileIndex: this.fileIndex.subarray(0, n),
       source: this.source.subarray(0, n), files: this.files.slice(),
     };

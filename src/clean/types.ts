@@ -52,7 +52,9 @@ export interface Catalogue {
   tpJdTT: Float64Array; // perihelion time, JD TT (derived when not given; NaN if undefined)
   H: Float64Array; // absolute magnitude; NaN where unknown
   uncertainty: Float64Array; // U 0..9; NaN where unknown
+  uncertaintyCode: Uint8Array; // char code of a letter written in place of U ('E', 'D', 'F'…); 0 when none
   nObs: Float64Array; // NaN where unknown
+  nOpp: Float64Array; // oppositions; NaN where unknown
   arcDays: Float64Array; // NaN where unknown
   quality: Uint32Array; // bit flags, see QUALITY_FLAGS
   fileIndex: Uint16Array; // index into `files`

@@ -11,13 +11,13 @@ import type { PlanetName } from '../core/constants.js';
 import type { Progress } from '../core/progress.js';
 import { DETECTORS, detectorById } from '../detect/registry.js';
 import { TISSERAND_DEFAULTS } from '../detect/tisserand.js';
-import type { Candidate, Detector, DetectorOptions } from '../detect/types.js';
+import type { Candidate, DetectorOptions } from '../detect/types.js';
 import type { InputFormat } from '../io/types.js';
 import { writeCandidatesCsv, writeCandidatesJsonl } from '../report/candidateFiles.js';
 import { rankInPlace } from '../report/rank.js';
 import { reportMarkdown } from '../report/reportMarkdown.js';
 import { sortRejectsInPlace, writeRejectsCsv } from '../report/rejectsFile.js';
-import { buildSummary } from '../report/summary.js';
+import { buildSummary, type DetectorRun } from '../report/summary.js';
 import { writeFileAtomic } from '../report/atomicWrite.js';
 import type { ScanSummary } from '../report/types.js';
 import { loadCatalogue } from './loadCatalogue.js';
@@ -53,22 +53,29 @@ function seconds(t0: bigint): number {
   return Number((Number(process.hrtime.bigint() - t0) / 1e9).toFixed(3));
 }
 
-/** Run the detectors named, in order, timing each into `timing` as `<id>Seconds`. */
-function runDetectors(
+/**
+ * Run the detectors named, in order, timing each into `timing` as `<id>Seconds`. A detector
+ * whose account does not add up to the catalogue (screened + not screened) is a defect.
+ */
+async function runDetectors(
   ids: readonly string[], cat: Catalogue, detOpts: DetectorOptions, timing: Record<string, number>, progress?: Progress,
-): { detectors: Detector[]; candidates: Candidate[] } {
-  const detectors = ids.map((id) => {
-    const d = detectorById(id);
-    if (!d) throw new RangeError(`unknown detector ${id}`);
-    return d;
-  });
+): Promise<{ runs: DetectorRun[]; candidates: Candidate[] }> {
+  const runs: DetectorRun[] = [];
   const candidates: Candidate[] = [];
-  for (const d of detectors) {
+  for (const id of ids) {
+    const detector = detectorById(id);
+    if (!detector) throw new RangeError(`unknown detector ${id}`);
     const t0 = process.hrtime.bigint();
-    candidates.push(...d.run(cat, detOpts, progress));
-    timing[`${d.id}Seconds`] = seconds(t0);
+    const { candidates: found, ...account } = await detector.run(cat, detOpts, { progress });
+    const offered = account.screened + Object.values(account.notScreened).reduce((a, b) => a + b, 0);
+    if (offered !== cat.size) {
+      throw new Error(`detector ${id} accounted for ${offered} bodies of ${cat.size} (screened ${account.screened})`);
+    }
+    candidates.push(...found);
+    runs.push({ detector, account });
+    timing[`${id}Seconds`] = seconds(t0);
   }
-  return { detectors, candidates };
+  return { runs, candidates };
 }
 
 /** Run a whole scan and write its outputs. Throws on output failures and unknown detector ids. */
@@ -90,7 +97,7 @@ export async function runScan(opts: ScanOptions, progress?: Progress): Promise<S
       includeExterior: opts.includeExterior,
     },
   };
-  const { detectors, candidates } = runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, progress);
+  const { runs, candidates } = await runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, progress);
   const ranked = rankInPlace(candidates, opts.detectors);
   sortRejectsInPlace(loaded.rejects, files);
   t0 = process.hrtime.bigint();
@@ -105,10 +112,10 @@ export async function runScan(opts: ScanOptions, progress?: Progress): Promise<S
   };
   const base = {
     version: packageVersion(), files: loaded.files, catalogue: loaded.catalogue, rejects: loaded.rejects,
-    candidates: ranked, detectors: opts.detectors, options,
+    candidates: ranked, runs, options,
   };
   const forReport = buildSummary(base);
-  await writeFileAtomic(join(opts.out, 'report.md'), reportMarkdown(forReport, ranked, detectors, loaded.catalogue));
+  await writeFileAtomic(join(opts.out, 'report.md'), reportMarkdown(forReport, ranked, runs.map((r) => r.detector), loaded.catalogue));
   timing.writeSeconds = seconds(t0);
   timing.totalSeconds = seconds(tStart);
   const summary = opts.reproducible
@@ -141,7 +148,7 @@ export function registerScan(program: Command): void {
     .option('--columns <map>', 'CSV column mapping, e.g. designation=objname,a=semimajor', parseColumnMapping)
     .option('--format <format>', "stdout: 'text' table or the summary as 'json'", parseOutputFormat, 'text')
     .option('-q, --quiet', 'print nothing on stdout but errors', false)
-    .option('--top <n>', 'candidates per detector in the stdout table', parsePositiveInteger, 5)
+    .option('--top <n>', 'rows per class of each detector in the stdout table, boundary cases likewise (all are in candidates.csv)', parsePositiveInteger, 5)
     .option('--reproducible', 'leave timings and memory out of summary.json (byte-identical reruns)', false)
     .option('--no-progress', 'no progress line on stderr (shown only on a terminal anyway)')
     .action(async (files: string[], flags: RawScanFlags) => {

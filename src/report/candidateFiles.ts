@@ -6,17 +6,24 @@ import type { Catalogue } from '../clean/types.js';
 import type { Candidate } from '../detect/types.js';
 import { AtomicFileWriter } from './atomicWrite.js';
 import { csvRecord } from './csvField.js';
+import { ORBIT_QUALITY_COLUMNS, orbitQuality } from './orbitQuality.js';
 
-/** JSON-ready record of one candidate (fixed key order; NaN false-alarm as null). */
+const orNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
+
+/** JSON-ready record of one candidate (fixed key order; NaN as null). */
 export function candidateRecord(c: Candidate, rank: number, cat: Catalogue): Record<string, unknown> {
   return {
     rank,
     designation: c.designation,
     detector: c.detector,
     class: c.class,
+    boundary: c.boundary,
     score: c.score,
-    falseAlarm: Number.isFinite(c.falseAlarm) ? c.falseAlarm : null,
+    tailFraction: orNull(c.tailFraction),
+    tailPopulation: c.tailPopulation,
+    falseAlarmProb: orNull(c.falseAlarmProb),
     flags: c.flags,
+    orbitQuality: orbitQuality(cat, c.index),
     why: c.why,
     source: { file: cat.files[cat.fileIndex[c.index]], line: cat.source[c.index] },
     details: c.details,
@@ -49,12 +56,17 @@ export async function writeCandidatesCsv(path: string, ranked: readonly Candidat
   const details = detailColumns(ranked);
   const w = new AtomicFileWriter(path);
   try {
-    const head = ['rank', 'designation', 'detector', 'class', 'score', 'false_alarm', 'flags', 'why', 'source_file', 'source_line'];
+    const head = [
+      'rank', 'designation', 'detector', 'class', 'boundary', 'score', 'tail_fraction', 'tail_population',
+      'false_alarm_prob', 'flags', ...ORBIT_QUALITY_COLUMNS.map(([, name]) => name), 'why', 'source_file', 'source_line',
+    ];
     await w.write(csvRecord([...head, ...details]) + '\n');
     for (let k = 0; k < ranked.length; k++) {
       const c = ranked[k];
+      const q = orbitQuality(cat, c.index);
       const fields: (string | number)[] = [
-        k + 1, c.designation, c.detector, c.class, c.score, c.falseAlarm, c.flags.join(';'), c.why,
+        k + 1, c.designation, c.detector, c.class, String(c.boundary), c.score, c.tailFraction, c.tailPopulation,
+        c.falseAlarmProb, c.flags.join(';'), ...ORBIT_QUALITY_COLUMNS.map(([key]) => q[key] ?? NaN), c.why,
         cat.files[cat.fileIndex[c.index]], cat.source[c.index],
       ];
       for (const key of details) fields.push(c.details[key] ?? '');

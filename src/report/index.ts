@@ -9,3 +9,4 @@ export * from './summary.js';
 export * from './textTable.js';
 export * from './candidateCells.js';
 export * from './reportMarkdown.js';
+export * from './orbitQuality.js';

@@ -1,14 +1,18 @@
 /**
  * report.md: a person's summary of the run: what went in, what was set aside and why,
- * and the strongest candidates of each detector with their caveats. No timings, so the
- * file is byte-identical for the same input.
+ * what each detector screened and what it did not (by reason), the strongest candidates of
+ * each class with their orbit quality and caveats, and the boundary cases apart. No
+ * timings, so the file is byte-identical for the same input.
  */
 import type { Catalogue } from '../clean/types.js';
 import type { Candidate, Detector } from '../detect/types.js';
-import { falseAlarmCell, flagsCell, scoreCell } from './candidateCells.js';
-import { topByClass } from './rank.js';
+import {
+  FALSE_ALARM_HEADING, TAIL_FRACTION_HEADING, falseAlarmCell, flagsCell, orbitQualityCell, scoreCell, tailFractionCell,
+} from './candidateCells.js';
+import { orbitQuality } from './orbitQuality.js';
+import { boundaryCases, topByClass } from './rank.js';
 import { markdownTable } from './textTable.js';
-import type { ScanSummary } from './types.js';
+import type { DetectorSummary, ScanSummary } from './types.js';
 
 export const SCREENING_CAVEAT =
   'These are screening candidates, not discoveries and not impact predictions. Most unusual ' +
@@ -39,14 +43,51 @@ function qualitySection(s: ScanSummary): string {
   return ['## Quality flags on accepted rows', '', markdownTable(['flag', 'rows'], rows, [false, true])].join('\n');
 }
 
-function detectorSection(d: Detector, ranked: readonly Candidate[], s: ScanSummary, top: number): string {
-  const counts = s.candidates[d.id] ?? {};
-  const countLine = Object.entries(counts).map(([cls, n]) => `${cls} ${n}`).join(', ');
-  const parts = [`## ${d.id}`, '', `${d.description}.`, '', `Candidates: ${countLine || 'none'}.`];
-  for (const [cls, best] of topByClass(ranked, d.id, top)) {
-    const rows = best.map((c, k) => [String(k + 1), c.designation, scoreCell(c), falseAlarmCell(c), flagsCell(c), c.why]);
-    parts.push('', `### ${cls} (top ${best.length} of ${counts[cls]})`, '',
-      markdownTable(['#', 'designation', 'score', 'false alarm', 'flags', 'why'], rows, [true, false, true, true, false, false]));
+/** Screened and not-screened bodies of one detector; the rows add up to the accepted total. */
+function screeningTable(d: Detector, ds: DetectorSummary): string {
+  const rows = [['screened', String(ds.screened)]];
+  for (const [reason, n] of Object.entries(ds.notScreened)) {
+    rows.push([`not screened: ${d.notScreenedReasons[reason] ?? reason} (\`${reason}\`)`, String(n)]);
+  }
+  rows.push(['**accepted bodies**', String(ds.accepted)]);
+  return markdownTable(['bodies', 'count'], rows, [false, true]);
+}
+
+function candidateTable(list: readonly Candidate[], cat: Catalogue): string {
+  const rows = list.map((c, k) => [
+    String(k + 1), c.designation, scoreCell(c), tailFractionCell(c), falseAlarmCell(c),
+    orbitQualityCell(orbitQuality(cat, c.index)), flagsCell(c), c.why,
+  ]);
+  return markdownTable(
+    ['#', 'designation', 'score', TAIL_FRACTION_HEADING, FALSE_ALARM_HEADING, 'orbit quality', 'flags', 'why'],
+    rows, [true, false, true, true, true, false, false, false],
+  );
+}
+
+/** '(top 20 of 25; all 25 in candidates.csv and candidates.jsonl)' or '(all 5)'. */
+function shownOf(shown: number, total: number): string {
+  return shown < total ? `top ${shown} of ${total}; all ${total} in candidates.csv and candidates.jsonl` : `all ${total}`;
+}
+
+function detectorSection(d: Detector, ranked: readonly Candidate[], s: ScanSummary, cat: Catalogue, top: number): string {
+  const ds = s.detectors[d.id];
+  const defs = ds.definitions;
+  const countLine = Object.entries(ds.candidates).filter(([cls]) => cls !== 'total').map(([cls, n]) => `${cls} ${n}`).join(', ');
+  const parts = [
+    `## ${d.id}`, '', `${d.description}.`, '',
+    `- **score**: ${defs.score}.`,
+    `- **${TAIL_FRACTION_HEADING}**: ${defs.tailFraction}.`,
+    `- **${FALSE_ALARM_HEADING}**: ${defs.falseAlarmProb}.`,
+    '', '### Bodies screened', '', screeningTable(d, ds), '',
+    `Candidates: ${countLine || 'none'} (total ${ds.candidates.total}, of which ${ds.boundaryCases} boundary cases).`,
+  ];
+  for (const { cls, best, total } of topByClass(ranked, d.id, top)) {
+    parts.push('', `### ${cls} (${shownOf(best.length, total)})`, '', candidateTable(best, cat));
+  }
+  const boundary = boundaryCases(ranked, d.id);
+  parts.push('', `### Boundary cases (${boundary.length === 0 ? 'none' : shownOf(Math.min(top, boundary.length), boundary.length)})`);
+  if (boundary.length > 0) {
+    parts.push('', 'Within the detector\'s band of doubt: listed for a look, not ranked as anomalies.', '', candidateTable(boundary.slice(0, top), cat));
   }
   return parts.join('\n');
 }
@@ -57,6 +98,6 @@ export function reportMarkdown(s: ScanSummary, ranked: readonly Candidate[], det
     `> ${SCREENING_CAVEAT}`,
   ].join('\n');
   const sections = [head, inputSection(s), rejectSection(s), qualitySection(s)];
-  for (const d of detectors) sections.push(detectorSection(d, ranked, s, top));
+  for (const d of detectors) sections.push(detectorSection(d, ranked, s, cat, top));
   return sections.join('\n\n') + '\n';
 }

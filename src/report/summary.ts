@@ -1,12 +1,19 @@
 /**
  * The run summary (summary.json): row accounting overall and per file, reject and quality
- * counts, candidates per detector and class, options, version and, unless a reproducible
+ * counts, per detector the bodies screened and not screened (by reason) and the candidates
+ * by class with the definitions of their numbers, options, version and, unless a reproducible
  * run was asked for, the timings and peak memory (the only parts that vary between runs).
  */
 import { QUALITY_FLAGS, type Catalogue, type Reject } from '../clean/types.js';
-import type { Candidate } from '../detect/types.js';
+import type { Candidate, Detector, ScreeningAccount } from '../detect/types.js';
 import { rejectCategories } from './rejectCategories.js';
-import type { FileAccount, ScanSummary } from './types.js';
+import type { DetectorSummary, FileAccount, ScanSummary } from './types.js';
+
+/** One detector as it ran: the detector and its screening account. */
+export interface DetectorRun {
+  detector: Detector;
+  account: ScreeningAccount;
+}
 
 export interface SummaryInput {
   version: string;
@@ -14,7 +21,7 @@ export interface SummaryInput {
   catalogue: Catalogue;
   rejects: readonly Reject[];
   candidates: readonly Candidate[];
-  detectors: string[];
+  runs: readonly DetectorRun[]; // in the order they ran
   options: Record<string, unknown>;
   timing?: Record<string, number>;
   peakRssMb?: number;
@@ -30,15 +37,38 @@ function qualityCounts(cat: Catalogue): Record<string, number> {
   return out;
 }
 
-function candidateCounts(candidates: readonly Candidate[], detectors: string[]): Record<string, Record<string, number>> {
-  const out: Record<string, Record<string, number>> = {};
-  for (const d of detectors) out[d] = {};
-  for (const c of candidates) out[c.detector][c.class] = (out[c.detector][c.class] ?? 0) + 1;
-  for (const d of detectors) {
-    const sorted = Object.entries(out[d]).sort((x, y) => (x[0] < y[0] ? -1 : 1));
-    out[d] = Object.fromEntries([...sorted, ['total', sorted.reduce((s, [, n]) => s + n, 0)]]);
+/** Candidates of one detector by class (classes sorted), then 'total'. */
+function classCounts(candidates: readonly Candidate[], detector: string): Record<string, number> {
+  const counts: Record<string, number> = {};
+  let total = 0;
+  for (const c of candidates) {
+    if (c.detector !== detector) continue;
+    counts[c.class] = (counts[c.class] ?? 0) + 1;
+    total++;
   }
-  return out;
+  const sorted = Object.entries(counts).sort((x, y) => (x[0] < y[0] ? -1 : 1));
+  return Object.fromEntries([...sorted, ['total', total]]);
+}
+
+/** The definitions of a detector's three numbers, in words, for summary.json and report.md. */
+export function numberDefinitions(d: Detector): DetectorSummary['definitions'] {
+  return {
+    score: d.scoreMeaning,
+    tailFraction: `fraction of ${d.tailMeaning} (a rank within this run, not a probability)`,
+    falseAlarmProb: d.falseAlarmModel ?? 'not given: this detector states no null model to calibrate one against',
+  };
+}
+
+function detectorSummary(run: DetectorRun, candidates: readonly Candidate[], accepted: number): DetectorSummary {
+  const id = run.detector.id;
+  return {
+    accepted,
+    screened: run.account.screened,
+    notScreened: run.account.notScreened,
+    candidates: classCounts(candidates, id),
+    boundaryCases: candidates.filter((c) => c.detector === id && c.boundary).length,
+    definitions: numberDefinitions(run.detector),
+  };
 }
 
 export function buildSummary(input: SummaryInput): ScanSummary {
@@ -57,8 +87,7 @@ export function buildSummary(input: SummaryInput): ScanSummary {
     files: input.files,
     rejects: { byKind, byReason: Object.fromEntries(rejectCategories(input.rejects)) },
     qualityFlags: qualityCounts(input.catalogue),
-    candidates: candidateCounts(input.candidates, input.detectors),
-    detectors: input.detectors,
+    detectors: Object.fromEntries(input.runs.map((r) => [r.detector.id, detectorSummary(r, input.candidates, input.catalogue.size)])),
     options: input.options,
   };
   if (input.timing) summary.timing = input.timing;

@@ -15,6 +15,16 @@ export interface FileAccount {
   error?: string; // why the file could not be read
 }
 
+/** What one detector did: bodies screened, not screened by reason, candidates by class. */
+export interface DetectorSummary {
+  accepted: number; // bodies offered to it (the catalogue size); = screened + Σ notScreened
+  screened: number;
+  notScreened: Record<string, number>; // reason id → bodies (reasons described in report.md)
+  candidates: Record<string, number>; // class → count, classes sorted, then 'total'
+  boundaryCases: number; // candidates within the detector's band of doubt (included above)
+  definitions: { score: string; tailFraction: string; falseAlarmProb: string };
+}
+
 export interface ScanSummary {
   tool: 'wayward';
   version: string;
@@ -22,8 +32,7 @@ export interface ScanSummary {
   files: FileAccount[];
   rejects: { byKind: Record<string, number>; byReason: Record<string, number> };
   qualityFlags: Record<string, number>; // accepted rows carrying each flag
-  candidates: Record<string, Record<string, number>>; // detector → class → count
-  detectors: string[];
+  detectors: Record<string, DetectorSummary>; // by id, in the order they ran
   options: Record<string, unknown>;
   timing?: Record<string, number>; // seconds per stage (omitted with --reproducible)
   resources?: { peakRssMb: number }; // omitted with --reproducible

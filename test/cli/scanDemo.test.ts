@@ -69,6 +69,96 @@ describe('scan on the bundled demo catalogue', () => {
     expect(stdout).toContain('Screening candidates only');
   });
 
+  it('accounts per detector for every accepted body: screened plus not screened by reason', () => {
+    const s = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
+    const t = s.detectors.tisserand;
+    const notScreened = Object.values(t.notScreened as Record<string, number>).reduce((a, b) => a + b, 0);
+    expect(t.screened + notScreened).toBe(s.rows.accepted);
+    expect(t.accepted).toBe(s.rows.accepted);
+    // The generator writes 308 natural Hildas (data/demo/README.md, natural population
+    // table) and plants none: the Hilda zone holds exactly them.
+    expect(t.notScreened['hilda-zone']).toBe(308);
+    // Tail fractions are over the screened bodies of one catalogue: the two populations
+    // of the candidates' tailPopulation add up to the screened count.
+    const populations = new Set(candidates.map((c) => (c as unknown as { tailPopulation: number }).tailPopulation));
+    expect([...populations].reduce((a, b) => a + b, 0)).toBe(t.screened);
+    const report = readFileSync(join(out, 'report.md'), 'utf8');
+    expect(report).toContain(`| screened | ${t.screened} |`);
+    expect(report).toContain(`| not screened: in the Hilda zone of the 3:2 resonance with Jupiter (3.7–4.2 au, e < 0.3, i < 20°) (\`hilda-zone\`) | 308 |`);
+    expect(report).toContain(`| **accepted bodies** | ${s.rows.accepted} |`);
+  });
+
+  it('keeps the tail fraction and the false-alarm probability apart, and defines both', () => {
+    const s = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
+    expect(s.detectors.tisserand.definitions.tailFraction).toContain('not a probability');
+    expect(s.detectors.tisserand.definitions.falseAlarmProb).toContain('no null model');
+    const raw = readFileSync(join(out, 'candidates.jsonl'), 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    for (const c of raw) {
+      expect(c.falseAlarmProb).toBeNull();
+      expect(c.tailFraction).toBeGreaterThan(0);
+      expect(c.tailFraction).toBeLessThanOrEqual(1);
+      expect(c).not.toHaveProperty('falseAlarm');
+    }
+    const csvHead = readFileSync(join(out, 'candidates.csv'), 'utf8').split('\n')[0].split(',');
+    expect(csvHead).toContain('tail_fraction');
+    expect(csvHead).toContain('false_alarm_prob');
+    expect(stdout).toContain('tail fraction');
+    expect(stdout).toContain('false-alarm prob.');
+  });
+
+  it('shows the boundary cases in their own section and says where all candidates are', () => {
+    const boundary = truth.filter((t) => t.class === 'boundary').map((t) => t.designation);
+    const raised = candidates.filter((c) => c.class === 'boundary').map((c) => c.designation);
+    expect(raised.length).toBeGreaterThan(0);
+    const report = readFileSync(join(out, 'report.md'), 'utf8');
+    const section = report.slice(report.indexOf('### Boundary cases'));
+    for (const d of raised) {
+      expect(boundary).toContain(d);
+      expect(section).toContain(`| ${d} |`);
+    }
+    expect(stdout).toContain(`boundary cases: all ${raised.length}`);
+    const stdoutBoundary = stdout.slice(stdout.indexOf('boundary cases:'));
+    for (const d of raised) expect(stdoutBoundary).toContain(d);
+    // 25 comet-like-T bodies are planted (truth.csv): the report shows 20 and points to the files.
+    expect(report).toContain('### comet-like-T (top 20 of 25; all 25 in candidates.csv and candidates.jsonl)');
+    expect(stdout).toContain('comet-like-T: top 5 of 25');
+    expect(stdout).toContain('candidates.csv');
+  });
+
+  it('--top N is the number of rows per class in the stdout table', () => {
+    const r = runCli(['scan', '--out', tempDir(), '--reproducible', '--top', '2']);
+    expect(r.status).toBe(0);
+    const blocks = r.stdout.split(/\n(?=comet-like-T:|asteroid-like-T:|boundary cases:|tail fraction:)/);
+    const rowsOf = (head: string) => {
+      const block = blocks.find((b) => b.startsWith(head))!;
+      return block.split('\n').slice(3).filter((l) => l.trim() !== '').length; // heading, column names, rule
+    };
+    expect(r.stdout).toContain('comet-like-T: top 2 of 25');
+    expect(rowsOf('comet-like-T:')).toBe(2);
+    expect(rowsOf('asteroid-like-T:')).toBe(2);
+    expect(rowsOf('boundary cases:')).toBe(2);
+  });
+
+  it('every candidate row carries the orbit quality it was judged with, as the input line gives it', () => {
+    const lines = readFileSync(join(ROOT, 'data/demo/orbits.txt'), 'utf8').split('\n');
+    const raw = readFileSync(join(out, 'candidates.jsonl'), 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    const fromAsteroidFile = raw.filter((c) => c.source.file.endsWith('orbits.txt'));
+    expect(fromAsteroidFile.length).toBeGreaterThan(20);
+    for (const c of fromAsteroidFile) {
+      // Whitespace tokens of the export line (independent of the fixed-column reader): after
+      // the reference come observations, oppositions and the arc ('2020-2031' or '30 days').
+      const tokens = lines[c.source.line - 1].trim().split(/\s+/);
+      const ref = tokens.findIndex((t) => t.startsWith('WWDEMO'));
+      expect(c.orbitQuality.observations, c.designation).toBe(Number(tokens[ref + 1]));
+      expect(c.orbitQuality.oppositions, c.designation).toBe(Number(tokens[ref + 2]));
+      expect(c.orbitQuality.epoch).toBe('2032-05-10.0'); // the demo's epoch (data/demo/README.md)
+      expect(c.orbitQuality.U === null || typeof c.orbitQuality.U === 'number' || /^[A-Z]$/.test(c.orbitQuality.U)).toBe(true);
+    }
+    const csv = parse(readFileSync(join(out, 'candidates.csv')), { columns: true }) as Record<string, string>[];
+    expect(csv.length).toBe(raw.length);
+    for (const row of csv) expect(Object.keys(row)).toEqual(expect.arrayContaining(['epoch_jd_tt', 'arc_days', 'oppositions', 'observations', 'U']));
+  });
+
   it('reruns byte-identically (every output file)', () => {
     const again = tempDir();
     expect(runCli(['scan', '--out', again, '--reproducible']).status).toBe(0);
