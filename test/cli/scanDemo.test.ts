@@ -8,6 +8,10 @@ import { expectEveryRowAccounted } from './rowAccounting.js';
 // The demo catalogue is invented (scripts/make-demo.ts, fixed seed); its truth table lists
 // every planted body. These checks are the "Done when" of the pipeline: the demo scan finds
 // every planted Tisserand anomaly, accounts for every row, and reruns byte-identically.
+// A pipeline test only: the generator plants bodies by T_J from the same textbook formula the
+// detector uses, so finding them checks reading, cleaning, classing and reporting, not the
+// formula. The formula is checked against T_J published for real bodies in
+// test/core/tisserand.test.ts, and the scan against real samples in scanRealSamples.test.ts.
 interface TruthRow { designation: string; file: string; line: string; class: string; detector: string }
 interface CandidateRecord { designation: string; detector: string; class: string; flags: string[]; source: { file: string; line: number } }
 

@@ -48,10 +48,13 @@ describe('scan on real export samples', () => {
     }
   });
 
-  it('raises the main-belt comet P/2013 R3 as asteroid-like (T_J ≈ 3.18; known active asteroid, from memory)', () => {
+  it('raises the active asteroid P/2013 R3 as asteroid-like (T_J 3.184 as published)', () => {
+    // T_J 3.184: the article "P/2013 R3 (Catalina–PanSTARRS)" (en.wikipedia.org), for elements
+    // of 2013; the sample's elements are of 2026, which moves T_J by under 0.001 (measured in
+    // test/core/tisserand.test.ts).
     const r3 = candidates.find((c) => c.designation.startsWith('P/2013 R3 ') || c.designation === 'P/2013 R3');
     expect(r3?.class).toBe('asteroid-like-T');
-    expect(Math.abs(r3!.details.T - 3.18)).toBeLessThan(0.01);
+    expect(Math.abs(r3!.details.T - 3.184)).toBeLessThan(0.0025);
   });
 
   it('does not raise (1) Ceres, (2) Pallas or (4) Vesta, which are asteroidal (T_J > 3)', () => {
