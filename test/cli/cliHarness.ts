@@ -1,4 +1,4 @@
-/** Runs the built command line (dist/) as a child process, as a user would. */
+/** Runs the built command line (dist/, compiled by test/setup/buildOnce.ts before the run) as a child process, as a user would. */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';

@@ -72,17 +72,26 @@ describe('propagate --nbody against astronomy-engine\'s gravity simulator', () =
     const perturbationKm = Math.hypot(...[0, 1, 2].map((k) => nb.state[k] - kep.state[k])) * KM_PER_AU;
     console.log(`Ceres 4 yr, N-body vs astronomy-engine: ${dKm.toFixed(0)} km; planetary perturbation itself `
       + `${perturbationKm.toFixed(0)} km`);
-    // Two different planetary models and integrators (the library's planets are truncated
-    // series good to ~1e-6 au); measured ~750 km against a perturbation of ~1.9e6 km.
+    // Measured 745 km against a perturbation of 1.9e6 km: the reference's own model. Its
+    // simulator moves the Sun by a barycentre shift of its series planets rather than by
+    // their pull; measured while writing this bound: given the library's planets, our
+    // integrator still differs from it by 660 km, an RK4 of the heliocentric equations with
+    // those planets agrees with ours within 1.4 km, one that moves the Sun as the library
+    // does reproduces the library within 0.2 km; its quarter-day steps add 22 km. Bound
+    // near 10× (was 0.005 × perturbation ≈ 9 500 km); the force model is checked to metres
+    // against an independent integration in test/core/propagateOrbit.test.ts.
     expect(perturbationKm).toBeGreaterThan(1e5);
-    expect(dKm).toBeLessThan(0.005 * perturbationKm);
+    expect(dKm).toBeLessThan(7500);
     // Geocentric distance against the library's Earth.
     const earth = Astronomy.RotateState(Astronomy.Rotation_EQJ_ECL(),
       Astronomy.HelioState(Astronomy.Body.Earth, Astronomy.AstroTime.FromTerrestrialTime(target - J2000_JD)));
     const geoRef = Math.hypot(nb.state[0] - earth.x, nb.state[1] - earth.y, nb.state[2] - earth.z);
     const geoErrKm = Math.abs(nb.distances!.geocentricAu - geoRef) * KM_PER_AU;
     console.log(`geocentric distance vs astronomy-engine's Earth: ${geoErrKm.toFixed(1)} km`);
-    expect(geoErrKm).toBeLessThan(5000); // the library's Earth: truncated series, ~1e-5 au at worst
+    // Measured 110.6 km: the library's Earth (a truncated series, up to 2 200 km from VSOP87B
+    // over 1900–2100) at this date. Bound near 10× (was 5 000 km); the metre-level check of the
+    // geocentric distance is in test/core/propagateOrbit.test.ts.
+    expect(geoErrKm).toBeLessThan(1200);
   });
 });
 

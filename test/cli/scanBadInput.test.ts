@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 import { runCli, tempDir } from './cliHarness.js';
+import { expectEveryRowAccounted } from './rowAccounting.js';
 
 // Two real lines of the one-line orbit export format (lines 1 and 17 of
 // /work/shared/data/orbits-export-sample.txt; provenance in test/fixtures/orbit-export/).
@@ -14,7 +15,7 @@ function summaryOf(out: string) {
 }
 
 describe('scan: bad input never stops a run, and every row is accounted for', () => {
-  it('missing file: one line naming it, exit 1, other files still scanned', () => {
+  it('missing file: one line naming it, exit 1, other files still scanned', async () => {
     const dir = tempDir();
     const good = join(dir, 'good.txt');
     writeFileSync(good, `${CERES}\n${THETIS}\n`);
@@ -27,6 +28,7 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     const s = summaryOf(out);
     expect(s.rows).toEqual({ read: 2, accepted: 2, rejected: 0 });
     expect(s.files[0].format).toBe('unreadable');
+    await expectEveryRowAccounted(out, [join(dir, 'nope.txt'), good]);
   });
 
   it('a directory and a binary file are unreadable inputs (exit 1)', () => {
@@ -46,7 +48,7 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     expect(summaryOf(join(dir, 'o')).rows).toEqual({ read: 0, accepted: 0, rejected: 0 });
   });
 
-  it('truncated lines, CRLF endings and gzip: bad rows rejected with file and line, good rows kept', () => {
+  it('truncated lines, CRLF endings and gzip: bad rows rejected with file and line, good rows kept', async () => {
     const dir = tempDir();
     const text = `${CERES}\r\n${THETIS.slice(0, 60)}\r\n${THETIS}\r\n`;
     writeFileSync(join(dir, 'mixed.txt.gz'), gzipSync(Buffer.from(text)));
@@ -57,9 +59,10 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     const rejects = readFileSync(join(out, 'rejects.csv'), 'utf8').trim().split('\n');
     expect(rejects[0]).toBe('file,line,kind,reason,text');
     expect(rejects[1]).toContain('mixed.txt.gz,2,parse,');
+    await expectEveryRowAccounted(out, [join(dir, 'mixed.txt.gz')]);
   });
 
-  it('a duplicate spanning files and a file listed twice: each input accounted for on its own', () => {
+  it('a duplicate spanning files and a file listed twice: each input accounted for on its own', async () => {
     const dir = tempDir();
     const a = join(dir, 'a.txt');
     const b = join(dir, 'b.txt');
@@ -77,6 +80,7 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
       { read: 2, accepted: 0, rejected: 2 },
     ]);
     expect(s.rows).toEqual({ read: 5, accepted: 2, rejected: 3 });
+    await expectEveryRowAccounted(out, [a, b, a]);
   });
 
   it('reads standard input with -', () => {
@@ -88,7 +92,7 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     expect(s.files[0].file).toBe('-');
   });
 
-  it('CSV with a wrong column count on one row: that row rejected, the rest kept', () => {
+  it('CSV with a wrong column count on one row: that row rejected, the rest kept', async () => {
     const dir = tempDir();
     const csv = [
       'designation,epoch,a,e,i,om,w,ma,H',
@@ -103,6 +107,7 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     expect(summaryOf(out).rows).toEqual({ read: 3, accepted: 2, rejected: 1 });
     const rejects = readFileSync(join(out, 'rejects.csv'), 'utf8');
     expect(rejects).toContain('x.csv,3,parse,');
+    await expectEveryRowAccounted(out, [join(dir, 'x.csv')]);
     // 2031 AA3 has T_J ≈ 2.6: a comet-like orbit in an asteroid table.
     const cands = readFileSync(join(out, 'candidates.csv'), 'utf8');
     expect(cands).toContain('2031 AA3,tisserand,comet-like-T');

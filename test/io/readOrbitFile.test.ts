@@ -1,7 +1,8 @@
 /**
  * readOrbitFile end to end: format detection on the real samples, the header block of the
  * real export file (its notice text before the dashed line), gzip, truncated lines, and the
- * accounting invariant read = accepted + rejected under random garbage (fast-check).
+ * accounting under random garbage (fast-check): linesRead against the data lines counted
+ * without the reader and against the rows and rejects handed to the callbacks.
  * The real samples are stored gzip-compressed, byte for byte unchanged; the SHA-256 of their
  * uncompressed text is recorded in test/fixtures/{orbit,comet}-export/README.md and checked here.
  */
@@ -16,6 +17,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import {
   detectFormat, readOrbitFile, UnreadableInputError, type InputError, type ReadOrbitOptions,
 } from '../../src/io/index.js';
+import { dataLinesOfText } from '../helpers/dataLines.js';
 import { readFixtureBytes, readFixtureText } from './fixtureCases.js';
 import { CAN_LIST_OPEN_FILES, closedWithin } from './openFiles.js';
 
@@ -55,6 +57,12 @@ describe('real samples', () => {
     expect(orbits.rejects[0].message).toBe(`${fileURLToPath(ORBITS_GZ)}:178:1: blank packed designation (columns 1–7)`);
     const comets = await read(fileURLToPath(COMETS_GZ));
     expect(comets.summary).toMatchObject({ format: 'comet-export', rows: 100, rejected: 0, linesRead: 100, gzip: true });
+    // linesRead against counts it is not computed from: the data lines of the text, counted
+    // without the reader, and the rows and rejects actually handed to the callbacks.
+    for (const [r, text] of [[orbits, ORBITS], [comets, COMETS]] as const) {
+      expect(r.summary.linesRead).toBe(dataLinesOfText(text, 'fixed-width'));
+      expect(r.designations.length + r.rejects.length).toBe(r.summary.linesRead);
+    }
   });
 
   it('orbit export with its original header block (notice text ending in a dashed line)', async () => {
@@ -64,6 +72,8 @@ describe('real samples', () => {
     expect(summary).toMatchObject({ format: 'orbit-export', rows: 258, rejected: 1, linesRead: 259 });
     expect(summary.skipped).toBe(headerLines + 1); // the header block and the blank separator
     expect(summary.lines).toBe(summary.linesRead + summary.skipped);
+    expect(summary.linesRead).toBe(dataLinesOfText(NOTICE + ORBITS, 'fixed-width'));
+    expect(designations.length + rejects.length).toBe(summary.linesRead);
     expect(designations[0]).toBe('(1) Ceres');
     expect(rejects[0].message).toBe(`${p}:${headerLines + 178}:1: blank packed designation (columns 1–7)`);
   });
@@ -120,8 +130,11 @@ describe('accounting under garbage (property-based)', () => {
       async (inserts) => {
         const lines = valid.slice();
         for (const [at, text] of inserts) lines.splice(Math.min(at, lines.length), 0, text);
-        const { summary } = await read(temp(lines.join('\n') + '\n'), { format: 'orbit-export' });
-        expect(summary.linesRead).toBe(summary.rows + summary.rejected);
+        const { designations, rejects, summary } = await read(temp(lines.join('\n') + '\n'), { format: 'orbit-export' });
+        // linesRead against independent counts: the data lines of the text (all but blank
+        // and dashed separator lines) and what reached the callbacks.
+        expect(summary.linesRead).toBe(dataLinesOfText(lines.join('\n'), 'fixed-width'));
+        expect(designations.length + rejects.length).toBe(summary.linesRead);
         expect(summary.rows + summary.rejected + summary.skipped).toBe(lines.length);
         expect(summary.rows).toBeGreaterThanOrEqual(valid.length);
       }), { numRuns: 60 });
@@ -135,7 +148,9 @@ describe('accounting under garbage (property-based)', () => {
       async (inserts) => {
         const lines = Array.from({ length: 40 }, (_, k) => good(k));
         for (const [at, text] of inserts) lines.splice(at, 0, text);
-        const { summary } = await read(temp([header, ...lines].join('\n') + '\n'), { format: 'csv' });
+        const { designations, rejects, summary } = await read(temp([header, ...lines].join('\n') + '\n'), { format: 'csv' });
+        expect(summary.linesRead).toBe(dataLinesOfText([header, ...lines].join('\n'), 'csv'));
+        expect(designations.length + rejects.length).toBe(summary.linesRead);
         expect(summary.rows + summary.rejected + summary.skipped).toBe(lines.length + 1);
         expect(summary.rows).toBeGreaterThanOrEqual(40);
       }), { numRuns: 40 });
