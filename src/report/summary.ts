@@ -5,11 +5,12 @@
  */
 import { QUALITY_FLAGS, type Catalogue, type Reject } from '../clean/types.js';
 import type { Candidate } from '../detect/types.js';
-import { rejectCategories } from './rejectCategories.js';
+import { rejectExample, rejectGroups } from './rejectCategories.js';
 import type { FileAccount, ScanSummary } from './types.js';
 
 export interface SummaryInput {
   version: string;
+  demoCatalogue?: boolean; // no files were named: the bundled demo catalogue was scanned
   files: FileAccount[];
   catalogue: Catalogue;
   rejects: readonly Reject[];
@@ -41,6 +42,15 @@ function candidateCounts(candidates: readonly Candidate[], detectors: string[]):
   return out;
 }
 
+/** Reject counts by group and the first reject of each group, verbatim (./rejectCategories.ts). */
+function rejectsByReason(rejects: readonly Reject[]): Pick<ScanSummary['rejects'], 'byReason' | 'examples'> {
+  const groups = rejectGroups(rejects);
+  return {
+    byReason: Object.fromEntries(groups.map((g) => [g.key, g.count])),
+    examples: Object.fromEntries(groups.map((g) => [g.key, rejectExample(g.example)])),
+  };
+}
+
 export function buildSummary(input: SummaryInput): ScanSummary {
   const rows = { read: 0, accepted: 0, rejected: 0 };
   for (const f of input.files) {
@@ -53,9 +63,10 @@ export function buildSummary(input: SummaryInput): ScanSummary {
   const summary: ScanSummary = {
     tool: 'wayward',
     version: input.version,
+    demoCatalogue: input.demoCatalogue ?? false,
     rows,
     files: input.files,
-    rejects: { byKind, byReason: Object.fromEntries(rejectCategories(input.rejects)) },
+    rejects: { byKind, ...rejectsByReason(input.rejects) },
     qualityFlags: qualityCounts(input.catalogue),
     candidates: candidateCounts(input.candidates, input.detectors),
     detectors: input.detectors,
