@@ -6,7 +6,8 @@
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli, tempDir } from './cliHarness.js';
+import { spawnSync } from 'node:child_process';
+import { MAIN, runCli, tempDir } from './cliHarness.js';
 
 // Synthetic CSV rows (invented elements). 2031 AA1: a = 2.5 au, e = 0.1, i = 5° has T_J > 3
 // (an ordinary main-belt orbit; Tisserand parameter, common practice), so read as a comet it
@@ -16,6 +17,14 @@ const CSV = [
   '2031 AA1,2463000.5,2.5,0.1,5,10,20,30,15',
   '2031 AA2,2463000.5,2.6,0.12,6,10,20,30,15',
 ].join('\n') + '\n';
+
+/** Whether this process may make a private mount namespace and mount in it (see the test). */
+function canMountReadOnly(): boolean {
+  if (process.platform !== 'linux') return false;
+  const probe = tempDir();
+  const r = spawnSync('unshare', ['-m', 'sh', '-c', `mount -t tmpfs tmpfs '${probe}' && umount '${probe}'`], { encoding: 'utf8' });
+  return r.status === 0;
+}
 
 function summaryOf(out: string) {
   return JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
@@ -128,6 +137,28 @@ describe('scan: nothing lost', () => {
     const r = runCli(['scan', join(dir, 'good.csv'), '--out', out, '--quiet']);
     expect(r.status).toBe(1);
     expect(r.stderr).toBe(`wayward: cannot write output directory ${out}: ${join(dir, 'plain')} is not a directory (ENOTDIR)\n`);
+  });
+
+  // A read-only file system needs a mount of its own: a private mount namespace (Linux
+  // unshare(1), needs the privilege to mount) with a read-only tmpfs. Skipped where that is
+  // not allowed; chmod alone does not stop root.
+  it.skipIf(!canMountReadOnly())('an output directory on a read-only file system: the message says EROFS, old files stay', () => {
+    const dir = tempDir();
+    writeFileSync(join(dir, 'good.csv'), CSV);
+    const ro = join(dir, 'ro');
+    mkdirSync(ro);
+    const script = [
+      `mount -t tmpfs tmpfs '${ro}'`, `mkdir '${ro}/out'`, `echo old > '${ro}/out/summary.json'`,
+      `mount -o remount,ro '${ro}'`,
+      `'${process.execPath}' '${MAIN}' scan '${join(dir, 'good.csv')}' --out '${ro}/out' --quiet; echo "rc=$?"`,
+      `'${process.execPath}' '${MAIN}' scan '${join(dir, 'good.csv')}' --out '${ro}/new' --quiet; echo "rc=$?"`,
+      `cat '${ro}/out/summary.json'`,
+    ].join(' && ');
+    const r = spawnSync('unshare', ['-m', 'sh', '-c', script], { encoding: 'utf8' });
+    expect(r.stdout).toBe('rc=1\nrc=1\nold\n');
+    expect(r.stderr).toBe(
+      `wayward: cannot write output directory ${ro}/out: read-only file system (EROFS)\n` +
+      `wayward: cannot write output directory ${ro}/new: read-only file system (EROFS)\n`);
   });
 
   it('no file names: stdout says in one line that the bundled demo catalogue was scanned, and so does summary.json', () => {
