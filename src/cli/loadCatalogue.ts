@@ -8,12 +8,14 @@ import { CatalogueBuilder, type BuilderOptions } from '../clean/catalogueBuilder
 import type { Catalogue, Reject } from '../clean/types.js';
 import { readOrbitFile } from '../io/readOrbitFile.js';
 import { UnreadableInputError } from '../io/errors.js';
+import type { CsvKindChoice } from '../io/bodyKind.js';
 import type { InputFormat, OrbitRow } from '../io/types.js';
 import type { FileAccount } from '../report/types.js';
 
 export interface LoadOptions extends BuilderOptions {
   format?: InputFormat; // force a format instead of sniffing each file
   columns?: Record<string, string>; // explicit CSV column mapping: field → header
+  csvKind?: CsvKindChoice; // CSV rows: classed by designation ('auto') or all one kind
 }
 
 export interface LoadResult {
@@ -52,7 +54,7 @@ export async function loadCatalogue(paths: readonly string[], opts: LoadOptions 
     try {
       const info = await readOrbitFile(
         path,
-        { format: opts.format, columns: opts.columns },
+        { format: opts.format, columns: opts.columns, csvKind: opts.csvKind },
         (row: OrbitRow, line: number, text: string) => builder.add(row, path, line, text),
         (err) => builder.rejectUnparsed(path, err.line, err.reason, err.text),
       );
@@ -60,6 +62,7 @@ export async function loadCatalogue(paths: readonly string[], opts: LoadOptions 
         file: path, format: info.format, sha256: info.sha256,
         rows: { read: builder.read - readBefore, accepted: 0, rejected: 0 },
         skippedLines: info.skipped,
+        bodyKind: { rule: info.kindRule, ...info.kinds },
       });
     } catch (err) {
       if (!(err instanceof UnreadableInputError)) throw err;

@@ -5,6 +5,8 @@
 import { InvalidArgumentError } from 'commander';
 import { PLANETS, type PlanetName } from '../core/constants.js';
 import { DETECTORS } from '../detect/registry.js';
+import { CSV_KIND_CHOICES, type CsvKindChoice } from '../io/bodyKind.js';
+import { parseColumnMapping as parseCsvColumnMapping } from '../io/columnMap.js';
 import type { InputFormat } from '../io/types.js';
 
 export function parsePlanet(value: string): PlanetName {
@@ -44,29 +46,36 @@ export function parsePositiveInteger(value: string): number {
   return x;
 }
 
-const FORMATS: readonly InputFormat[] = ['orbit-export', 'comet-export', 'csv'];
+export const INPUT_FORMATS: readonly InputFormat[] = ['orbit-export', 'comet-export', 'csv'];
 
 export function parseInputFormat(value: string): InputFormat {
-  if (!(FORMATS as readonly string[]).includes(value)) {
-    throw new InvalidArgumentError(`unknown input format '${value}'; one of: ${FORMATS.join(', ')}`);
+  if (!(INPUT_FORMATS as readonly string[]).includes(value)) {
+    throw new InvalidArgumentError(`unknown input format '${value}'; one of: ${INPUT_FORMATS.join(', ')}`);
   }
   return value as InputFormat;
 }
 
-/** `name=header,name=header` → { name: header }. */
+/**
+ * `field=header,field=header` → { field: header }, through the io layer's checking parser:
+ * an unknown orbit field, a malformed pair or a field given twice is a usage error.
+ */
 export function parseColumnMapping(value: string): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const part of value.split(',')) {
-    const eq = part.indexOf('=');
-    const name = part.slice(0, eq).trim();
-    const header = part.slice(eq + 1).trim();
-    if (eq <= 0 || header === '') throw new InvalidArgumentError(`column mapping '${part}' is not name=header`);
-    out[name] = header;
+  try {
+    return parseCsvColumnMapping(value) as Record<string, string>;
+  } catch (err) {
+    if (err instanceof RangeError) throw new InvalidArgumentError(err.message);
+    throw err;
   }
-  return out;
+}
+
+export function parseCsvKind(value: string): CsvKindChoice {
+  if (!(CSV_KIND_CHOICES as readonly string[]).includes(value)) {
+    throw new InvalidArgumentError(`unknown kind '${value}'; one of: ${CSV_KIND_CHOICES.join(', ')}`);
+  }
+  return value as CsvKindChoice;
 }
 
 export function parseOutputFormat(value: string): 'text' | 'json' {
-  if (value !== 'text' && value !== 'json') throw new InvalidArgumentError(`--format must be text or json, not '${value}'`);
+  if (value !== 'text' && value !== 'json') throw new InvalidArgumentError(`unknown output format '${value}'; one of: text, json`);
   return value;
 }

@@ -2,16 +2,16 @@
  * `wayward scan`: read orbit dumps, clean them, run the detectors, write the outputs.
  * The command converts options and prints; the work is in runScan, which tests call.
  */
-import { mkdir } from 'node:fs/promises';
-import { join, relative } from 'node:path';
+import { relative } from 'node:path';
 import { Command, Option } from 'commander';
 import { DEFAULT_QUALITY, DEFAULT_VALIDITY } from '../clean/thresholds.js';
 import type { Catalogue } from '../clean/types.js';
-import type { PlanetName } from '../core/constants.js';
+import { PLANETS, type PlanetName } from '../core/constants.js';
 import type { Progress } from '../core/progress.js';
 import { DETECTORS, detectorById } from '../detect/registry.js';
 import { TISSERAND_DEFAULTS } from '../detect/tisserand.js';
 import type { Candidate, DetectorOptions } from '../detect/types.js';
+import type { CsvKindChoice } from '../io/bodyKind.js';
 import type { InputFormat } from '../io/types.js';
 import { writeCandidatesCsv, writeCandidatesJsonl } from '../report/candidateFiles.js';
 import { rankInPlace } from '../report/rank.js';
@@ -19,11 +19,13 @@ import { reportMarkdown } from '../report/reportMarkdown.js';
 import { sortRejectsInPlace, writeRejectsCsv } from '../report/rejectsFile.js';
 import { buildSummary, type DetectorRun } from '../report/summary.js';
 import { writeFileAtomic } from '../report/atomicWrite.js';
+import { fileSystemCause, OutputDirectoryError, OutputStage } from '../report/outputStage.js';
 import type { ScanSummary } from '../report/types.js';
+import { inputErrorLine } from './inputErrorLine.js';
 import { loadCatalogue } from './loadCatalogue.js';
 import {
-  parseColumnMapping, parseDetectorList, parseFiniteNumber, parseInputFormat, parseNonNegativeNumber,
-  parseOutputFormat, parsePlanet, parsePositiveInteger,
+  INPUT_FORMATS, parseColumnMapping, parseCsvKind, parseDetectorList, parseFiniteNumber, parseInputFormat,
+  parseNonNegativeNumber, parseOutputFormat, parsePlanet, parsePositiveInteger,
 } from './optionParsers.js';
 import { demoFiles, packageVersion } from './packageInfo.js';
 import { scanStdoutTable } from './scanTable.js';
@@ -39,6 +41,7 @@ export interface ScanOptions {
   includeExterior: boolean;
   inputFormat?: InputFormat;
   columns?: Record<string, string>;
+  csvKind?: CsvKindChoice; // CSV rows: by designation pattern ('auto', default) or all one kind
   reproducible: boolean; // leave timings and memory out of summary.json
 }
 
@@ -47,6 +50,14 @@ export interface ScanResult {
   ranked: Candidate[];
   errors: string[]; // one line per unreadable input
   outDir: string;
+}
+
+/** Not one input could be read: nothing is written and the output directory is left as it was. */
+export class NoInputReadError extends Error {
+  constructor(readonly errors: string[], readonly outDir: string) {
+    super(`no input could be read; nothing written, ${outDir} left as it was`);
+    this.name = 'NoInputReadError';
+  }
 }
 
 function seconds(t0: bigint): number {
@@ -78,15 +89,43 @@ async function runDetectors(
   return { runs, candidates };
 }
 
-/** Run a whole scan and write its outputs. Throws on output failures and unknown detector ids. */
+/**
+ * Run a whole scan and write its outputs. Every output is staged and put in place only when
+ * all are written (src/report/outputStage.ts): a run that throws leaves the output directory
+ * as it was. Throws OutputDirectoryError when the directory cannot be written (checked
+ * before any input is read), NoInputReadError when no input could be read, RangeError for
+ * unknown detector ids.
+ */
 export async function runScan(opts: ScanOptions, progress?: Progress): Promise<ScanResult> {
+  const stage = await OutputStage.open(opts.out);
+  try {
+    const result = await scanInto(stage, opts, progress);
+    await stage.commit();
+    return result;
+  } catch (err) {
+    await stage.abort();
+    // a file-system failure while writing the outputs names the output directory and the cause
+    const { code, path } = err as { code?: unknown; path?: unknown };
+    if (typeof code === 'string' && typeof path === 'string' && path.startsWith(stage.stagingDir)) {
+      throw new OutputDirectoryError(opts.out, fileSystemCause(err), code);
+    }
+    throw err;
+  }
+}
+
+/** The scan itself, writing every output into `stage`. */
+async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progress): Promise<ScanResult> {
   const tStart = process.hrtime.bigint();
-  const files = opts.files.length > 0 ? opts.files : demoFiles().map((f) => relative(process.cwd(), f) || f);
+  const demoCatalogue = opts.files.length === 0;
+  const files = !demoCatalogue ? opts.files : demoFiles().map((f) => relative(process.cwd(), f) || f);
   const timing: Record<string, number> = {};
   let t0 = process.hrtime.bigint();
   progress?.start('reading');
-  const loaded = await loadCatalogue(files, { format: opts.inputFormat, columns: opts.columns });
+  const loaded = await loadCatalogue(files, { format: opts.inputFormat, columns: opts.columns, csvKind: opts.csvKind });
   progress?.end();
+  if (loaded.files.length > 0 && loaded.errors.length === loaded.files.length) {
+    throw new NoInputReadError(loaded.errors.map(inputErrorLine), opts.out);
+  }
   timing.readSeconds = seconds(t0);
   const detOpts: DetectorOptions = {
     tisserand: {
@@ -101,36 +140,44 @@ export async function runScan(opts: ScanOptions, progress?: Progress): Promise<S
   const ranked = rankInPlace(candidates, opts.detectors);
   sortRejectsInPlace(loaded.rejects, files);
   t0 = process.hrtime.bigint();
-  await mkdir(opts.out, { recursive: true });
-  await writeCandidatesJsonl(join(opts.out, 'candidates.jsonl'), ranked, loaded.catalogue);
-  await writeCandidatesCsv(join(opts.out, 'candidates.csv'), ranked, loaded.catalogue);
-  await writeRejectsCsv(join(opts.out, 'rejects.csv'), loaded.rejects);
+  await writeCandidatesJsonl(stage.path('candidates.jsonl'), ranked, loaded.catalogue);
+  await writeCandidatesCsv(stage.path('candidates.csv'), ranked, loaded.catalogue);
+  await writeRejectsCsv(stage.path('rejects.csv'), loaded.rejects);
   const options = {
     detectors: opts.detectors, planet: opts.planet,
     tisserand: detOpts.tisserand, inputFormat: opts.inputFormat ?? 'auto', columns: opts.columns ?? {},
+    csvKind: opts.csvKind ?? 'auto',
     validity: DEFAULT_VALIDITY, quality: DEFAULT_QUALITY,
   };
   const base = {
-    version: packageVersion(), files: loaded.files, catalogue: loaded.catalogue, rejects: loaded.rejects,
+    version: packageVersion(), demoCatalogue, files: loaded.files, catalogue: loaded.catalogue, rejects: loaded.rejects,
     candidates: ranked, runs, options,
   };
   const forReport = buildSummary(base);
-  await writeFileAtomic(join(opts.out, 'report.md'), reportMarkdown(forReport, ranked, runs.map((r) => r.detector), loaded.catalogue));
+  await writeFileAtomic(stage.path('report.md'), reportMarkdown(forReport, ranked, runs.map((r) => r.detector), loaded.catalogue));
   timing.writeSeconds = seconds(t0);
   timing.totalSeconds = seconds(tStart);
   const summary = opts.reproducible
     ? forReport
     : buildSummary({ ...base, timing, peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024) });
-  await writeFileAtomic(join(opts.out, 'summary.json'), JSON.stringify(summary, null, 2) + '\n');
-  return { summary, ranked, errors: loaded.errors.map((e) => e.message), outDir: opts.out };
+  await writeFileAtomic(stage.path('summary.json'), JSON.stringify(summary, null, 2) + '\n');
+  return { summary, ranked, errors: loaded.errors.map(inputErrorLine), outDir: opts.out };
 }
 
 /** What commander hands the action: the scan options plus the ones only the CLI uses. */
-interface RawScanFlags extends Omit<ScanOptions, 'files'> {
+interface RawScanFlags extends Omit<ScanOptions, 'files' | 'includeExterior' | 'reproducible'> {
+  includeExterior?: boolean; // boolean flags have no default (commander would print '(default: false)')
+  reproducible?: boolean;
   format: 'text' | 'json';
-  quiet: boolean;
+  quiet?: boolean;
   top: number;
   progress: boolean;
+}
+
+/** An option whose help shows its default as written (`default: wayward-out`), not as JSON. */
+function withDefault<T>(flags: string, description: string, value: T, shown: string, parse?: (text: string) => T): Option {
+  const option = new Option(flags, description).default(value, shown);
+  return parse ? option.argParser(parse) : option;
 }
 
 export function registerScan(program: Command): void {
@@ -138,26 +185,49 @@ export function registerScan(program: Command): void {
     .command('scan')
     .description('screen orbit dumps for bodies whose orbits do not behave (default: the bundled demo catalogue)')
     .argument('[files...]', "orbit dumps: one-line orbit or comet export format, CSV/TSV; '-' reads standard input; gzip read transparently")
-    .option('-o, --out <dir>', 'output directory', 'wayward-out')
-    .option('-d, --detectors <list>', `comma-separated detectors (${DETECTORS.map((d) => d.id).join(', ')})`, parseDetectorList, DETECTORS.map((d) => d.id))
-    .option('--planet <name>', 'planet the Tisserand parameter is taken with respect to', parsePlanet, TISSERAND_DEFAULTS.planet)
-    .option('--tisserand-boundary <T>', 'asteroid/comet dividing value of T (Levison 1996)', parseFiniteNumber, TISSERAND_DEFAULTS.boundary)
-    .option('--tisserand-margin <dT>', 'half-width of the boundary band flagged rather than ranked (≥ 0)', parseNonNegativeNumber, TISSERAND_DEFAULTS.margin)
-    .option('--include-exterior', 'also screen bodies whose perihelion lies beyond the planet', false)
-    .addOption(new Option('--input-format <format>', 'force the input format instead of detecting it').argParser(parseInputFormat))
-    .option('--columns <map>', 'CSV column mapping, e.g. designation=objname,a=semimajor', parseColumnMapping)
-    .option('--format <format>', "stdout: 'text' table or the summary as 'json'", parseOutputFormat, 'text')
-    .option('-q, --quiet', 'print nothing on stdout but errors', false)
+    .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-out', 'wayward-out'))
+    .addOption(withDefault('-d, --detectors <list>', `comma-separated detectors, of: ${DETECTORS.map((d) => d.id).join(', ')}`,
+      DETECTORS.map((d) => d.id), 'all', parseDetectorList))
+    .addOption(withDefault('--planet <name>', `planet the Tisserand parameter is taken with respect to: ${PLANETS.join(', ')}`,
+      TISSERAND_DEFAULTS.planet, TISSERAND_DEFAULTS.planet, parsePlanet))
+    .addOption(withDefault('--tisserand-boundary <T>', 'asteroid/comet dividing value of T (Levison 1996)',
+      TISSERAND_DEFAULTS.boundary, String(TISSERAND_DEFAULTS.boundary), parseFiniteNumber))
+    .addOption(withDefault('--tisserand-margin <dT>', 'half-width of the boundary band flagged rather than ranked (≥ 0)',
+      TISSERAND_DEFAULTS.margin, String(TISSERAND_DEFAULTS.margin), parseNonNegativeNumber))
+    .option('--include-exterior', 'also screen bodies whose perihelion lies beyond the planet')
+    .addOption(new Option('--input-format <format>',
+      `force the input format, one of: ${INPUT_FORMATS.join(', ')} (without it: detected from each file's content)`).argParser(parseInputFormat))
+    .option('--columns <map>', 'CSV column mapping field=header,…, e.g. designation=objname,a=semimajor', parseColumnMapping)
+    .addOption(withDefault('--csv-kind <kind>',
+      'how CSV rows are classed: auto (comet designation forms such as 1P or C/1995 O1 are comets, the rest asteroids), asteroid or comet (every row)',
+      'auto' as CsvKindChoice, 'auto', parseCsvKind))
+    .addOption(withDefault('--format <format>', 'stdout: text (a table) or json (the summary)', 'text', 'text', parseOutputFormat))
+    .option('-q, --quiet', 'print nothing on stdout but errors')
     .option('--top <n>', 'rows per class of each detector in the stdout table, boundary cases likewise (all are in candidates.csv)', parsePositiveInteger, 5)
-    .option('--reproducible', 'leave timings and memory out of summary.json (byte-identical reruns)', false)
+    .option('--reproducible', 'leave timings and memory out of summary.json (byte-identical reruns)')
     .option('--no-progress', 'no progress line on stderr (shown only on a terminal anyway)')
     .action(async (files: string[], flags: RawScanFlags) => {
-      const result = await runScan({ files, ...flags }, terminalProgress(flags.progress && !flags.quiet));
+      const opts = { files, ...flags, includeExterior: flags.includeExterior === true, reproducible: flags.reproducible === true };
+      let result: ScanResult;
+      try {
+        result = await runScan(opts, terminalProgress(flags.progress && !flags.quiet));
+      } catch (err) {
+        if (err instanceof NoInputReadError) for (const line of err.errors) process.stderr.write(`wayward: ${line}\n`);
+        throw err;
+      }
       for (const line of result.errors) process.stderr.write(`wayward: ${line}\n`);
       if (flags.format === 'json') process.stdout.write(JSON.stringify(result.summary, null, 2) + '\n');
-      else if (!flags.quiet) process.stdout.write(scanStdoutTable(result, flags.top, useColour()));
+      else if (!flags.quiet) {
+        if (result.summary.demoCatalogue) process.stdout.write(`${demoNotice(result)}\n`);
+        process.stdout.write(scanStdoutTable(result, flags.top, useColour()));
+      }
       if (result.errors.length > 0) process.exitCode = 1;
     });
+}
+
+/** The stdout line that says no files were named and the bundled demo catalogue was scanned. */
+function demoNotice(result: ScanResult): string {
+  return `No files named: scanned the bundled demo catalogue (invented data): ${result.summary.files.map((f) => f.file).join(', ')}.`;
 }
 
 /** Colour only on a terminal and never when NO_COLOR is set (no-color.org convention). */

@@ -8,11 +8,13 @@
  * - `q` / `Q` (perihelion / aphelion distance): only a lowercase `q` is the perihelion
  *   distance; `Q` is the aphelion distance, which no orbit field takes.
  *
- * Designation: the first header present in the order designation > desig > full_name >
- * pdes > name. An explicit designation column is what the user meant; `full_name` carries
- * number, name and provisional designation together and reads best; `pdes` is a bare primary
- * designation ('1' for Ceres); `name` alone is a proper name and is used only when nothing
- * else is there (a `name` column not used as the designation fills OrbitRow.name).
+ * Designation: the first header present in the order designation > desig > pdes >
+ * full_name > name. A designation column (`designation`, `desig`, `pdes`: a primary
+ * designation, '1' for Ceres, '2019 EU5', '1P') wins over a name column (`full_name`, which
+ * writes number, name and provisional designation together, '1 Ceres (A801 AA)'; `name`, a
+ * proper name alone). A name column that is not the designation is still read: `name` fills
+ * OrbitRow.name, and `full_name` (field `fullName`) gives the name and the number where the
+ * designation column does not (./csvRecord.ts).
  *
  * An explicit mapping (`--columns field=header,…` → `{ designation: 'objname' }`) wins over
  * the names recognised here; a mapped header that the file does not have is fatal.
@@ -20,7 +22,7 @@
 
 /** Orbit fields a CSV column can fill. */
 export type CsvField =
-  | 'designation' | 'name' | 'epoch' | 'epochMjd' | 'a' | 'q' | 'e' | 'i' | 'node' | 'peri'
+  | 'designation' | 'name' | 'fullName' | 'epoch' | 'epochMjd' | 'a' | 'q' | 'e' | 'i' | 'node' | 'peri'
   | 'M' | 'n' | 'tp' | 'H' | 'G' | 'U' | 'nObs' | 'nOpp' | 'arcDays' | 'firstObs' | 'lastObs' | 'rms';
 
 /** Explicit mapping from orbit field to header name, as given by the user. */
@@ -31,8 +33,9 @@ export type ColumnIndex = Record<CsvField, number>;
 
 /** Recognised names (lowercase), in order of preference within a field. */
 const NAMES: Readonly<Record<CsvField, readonly string[]>> = {
-  designation: ['designation', 'desig', 'full_name', 'pdes', 'name'],
+  designation: ['designation', 'desig', 'pdes', 'full_name', 'name'],
   name: ['name'],
+  fullName: ['full_name'],
   epoch: ['epoch', 'epoch_jd', 'epoch_tt', 'epoch_cal'],
   epochMjd: ['epoch_mjd', 'mjd'],
   a: ['a', 'a_au', 'semimajor_axis'],
@@ -103,8 +106,9 @@ export function mapColumns(headers: readonly string[], mapping: ColumnMapping = 
       if (field !== 'name') used.add(k);
     }
   }
-  // a `name` column chosen as the designation is not also the proper name
+  // a name column chosen as the designation is not read a second time
   if (index.name === index.designation) index.name = -1;
+  if (index.fullName === index.designation) index.fullName = -1;
   return { index, missingMapped };
 }
 

@@ -6,10 +6,17 @@
  *   Kepler's third law in the Gaussian system (both in ./semimajorAxis.ts);
  * - epoch = tp when the file gives a perihelion time and no epoch (elements referred to it);
  * - arcDays = last_obs − first_obs when both are full dates.
- * kind = 'comet' for comet designations ('1P', 'C/1995 O1'), else 'asteroid'.
+ * Designation: from the designation column; a full-name column beside it (./columnMap.ts)
+ * adds the proper name and the number where the designation cell lacks them, so pdes '1'
+ * with full_name '1 Ceres (A801 AA)' reads as '(1) Ceres', number 1, name 'Ceres'; the two
+ * naming different numbers is bad data.
+ * Kind: by the designation pattern of ./bodyKind.ts ('1P', 'C/1995 O1' are comets), or the
+ * kind the caller forces for the whole table.
  */
 import type { ColumnIndex, CsvField } from './columnMap.js';
-import { cellDesignation, cellJd, cellNumber, cellYear } from './csvValues.js';
+import type { CsvKindChoice } from './bodyKind.js';
+import { kindOfDesignation } from './bodyKind.js';
+import { cellDesignation, cellJd, cellNumber, cellYear, fullNameParts } from './csvValues.js';
 import { PackedFormError } from './errors.js';
 import { semimajorAxisFromMeanMotion, semimajorAxisFromPerihelion } from './semimajorAxis.js';
 import { InputError, type OrbitRow } from './types.js';
@@ -20,9 +27,8 @@ export interface RecordContext {
   line: number;
   headers: readonly string[];
   raw: string;
+  kind: CsvKindChoice; // 'auto': by designation pattern; else every row is of this kind
 }
-
-const COMET_DESIGNATION = /^(\d+[PDI](\/|$|-)|[PCDXIA]\/)/;
 
 /** Reads the cell of `field` with `read`, turning a bad cell into an InputError. */
 function cell<T>(record: readonly string[], index: ColumnIndex, field: CsvField, ctx: RecordContext, read: (t: string) => T, empty: T): T {
@@ -60,14 +66,31 @@ function readQuality(record: readonly string[], index: ColumnIndex, ctx: RecordC
   if (Number.isNaN(row.arcDays)) row.arcDays = row.lastObsJdTT - first;
 }
 
+/** Name and number from the full-name cell where the designation cell lacks them (file comment). */
+function addFullName(text: string, index: ColumnIndex, ctx: RecordContext, row: OrbitRow): void {
+  const full = fullNameParts(text);
+  if (Number.isFinite(full.number) && Number.isFinite(row.number) && full.number !== row.number) {
+    const d = ctx.headers[index.designation];
+    const f = ctx.headers[index.fullName];
+    throw new InputError(ctx.file, ctx.line, 0,
+      `column '${d}' gives number ${row.number} but column '${f}' gives ${full.number}: '${text.trim()}'`, ctx.raw);
+  }
+  if (row.name === '') row.name = full.name;
+  if (Number.isFinite(full.number)) row.number = full.number;
+  if (Number.isFinite(row.number) && row.designation === `(${row.number})` && row.name !== '') {
+    row.designation = `(${row.number}) ${row.name}`;
+  }
+}
+
 /** Fills `row` from one record (already checked to have the header's field count). */
 export function parseCsvRecord(record: readonly string[], index: ColumnIndex, ctx: RecordContext, row: OrbitRow): void {
   row.name = cell(record, index, 'name', ctx, (t) => t, '');
   const desig = cell(record, index, 'designation', ctx, (t) => t, '');
   if (desig === '') required(NaN, 'designation', index, ctx);
   cellDesignation(desig, row);
+  if (index.fullName >= 0) addFullName(record[index.fullName], index, ctx, row);
   row.packedDesignation = '';
-  row.kind = COMET_DESIGNATION.test(row.designation) ? 'comet' : 'asteroid';
+  row.kind = ctx.kind === 'auto' ? kindOfDesignation(row.designation) : ctx.kind;
   row.e = required(cell(record, index, 'e', ctx, cellNumber, NaN), 'e', index, ctx);
   row.iDeg = required(cell(record, index, 'i', ctx, cellNumber, NaN), 'i', index, ctx);
   row.nodeDeg = required(cell(record, index, 'node', ctx, cellNumber, NaN), 'node', index, ctx);

@@ -18,6 +18,7 @@
 import { once } from 'node:events';
 import { finished } from 'node:stream/promises';
 import { parse, type Options, type Parser } from 'csv-parse';
+import type { CsvKindChoice } from './bodyKind.js';
 import { checkColumnMapping, mapColumns, missingRequired, type ColumnIndex, type ColumnMapping } from './columnMap.js';
 import { sniffDelimiter } from './csvDelimiter.js';
 import { parseCsvRecord, type RecordContext } from './csvRecord.js';
@@ -47,7 +48,7 @@ export class CsvTableReader {
   private pendingTexts: string[] = [];
   private pendingHead = 0;
   /** Reused for every record (no per-record objects beyond csv-parse's own arrays). */
-  private readonly ctx: RecordContext = { file: '', line: 0, headers: [], raw: '' };
+  private readonly ctx: RecordContext = { file: '', line: 0, headers: [], raw: '', kind: 'auto' };
 
   constructor(
     private readonly file: string,
@@ -55,8 +56,10 @@ export class CsvTableReader {
     private readonly row: OrbitRow,
     private readonly onRow: (row: OrbitRow, lineNo: number, text: string) => void,
     private readonly onReject: (err: InputError) => void,
+    kind: CsvKindChoice = 'auto', // how rows are classed (./bodyKind.ts)
   ) {
     checkColumnMapping(mapping);
+    this.ctx.kind = kind;
   }
 
   /** One input line (from forEachLine), 1-based line numbers in order. */
@@ -186,12 +189,12 @@ export class CsvTableReader {
     const { index, missingMapped } = mapColumns(this.headers, this.mapping);
     const found = `headers found: ${this.headers.join(', ')}`;
     if (missingMapped.length > 0) {
-      this.fatal = new UnreadableInputError(this.file, `column mapping names headers the file lacks (${missingMapped.join(', ')}); ${found}`);
+      this.fatal = new UnreadableInputError(this.file, `column mapping names headers the file lacks (${missingMapped.join(', ')}); ${found}`, 'columns');
       return;
     }
     const missing = missingRequired(index);
     if (missing.length > 0) {
-      this.fatal = new UnreadableInputError(this.file, `header lacks required orbit columns (${missing.join('; ')}); ${found}`);
+      this.fatal = new UnreadableInputError(this.file, `header lacks required orbit columns (${missing.join('; ')}); ${found}`, 'columns');
       return;
     }
     this.index = index;

@@ -16,7 +16,8 @@ import { PackedFormError } from './errors.js';
 import { unpackEpochJd } from './packedEpoch.js';
 import { unpackNumber } from './packedNumber.js';
 import { packProvisional } from './packedProvisional.js';
-import type { OrbitRow } from './types.js';
+import { emptyOrbitRow, type OrbitRow } from './types.js';
+import { COMET_DESIGNATION } from './bodyKind.js';
 
 const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
 
@@ -96,4 +97,24 @@ export function cellDesignation(text: string, row: OrbitRow): void {
   }
   row.number = NaN;
   row.designation = t;
+}
+
+/** Scratch row for fullNameParts (its designation parse fills more than it needs). */
+const FULL_NAME_ROW = emptyOrbitRow();
+
+/**
+ * Number and proper name written in a full-name cell, for a row whose designation comes
+ * from another column: '1 Ceres (A801 AA)' → 1, 'Ceres'; '(2019 EU5)' → NaN, '';
+ * comets: '1P/Halley' → NaN, 'Halley'; 'C/1995 O1 (Hale-Bopp)' → NaN, 'Hale-Bopp'
+ * (the name forms of the comet export lines, common practice).
+ */
+export function fullNameParts(text: string): { number: number; name: string } {
+  const t = text.trim();
+  if (COMET_DESIGNATION.test(t)) {
+    const m = /\(([^()]+)\)$/.exec(t) ?? /^\d+[PDI](?:-[A-Z]+)?\/(.+)$/.exec(t);
+    return { number: NaN, name: m ? m[1].trim() : '' };
+  }
+  FULL_NAME_ROW.name = '';
+  cellDesignation(t, FULL_NAME_ROW);
+  return { number: FULL_NAME_ROW.number, name: FULL_NAME_ROW.name };
 }

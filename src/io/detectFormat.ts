@@ -54,5 +54,5 @@ export function detectFormat(firstLines: readonly string[], fileName: string): I
   if (orbit + comet > 0) return orbit >= comet ? 'orbit-export' : 'comet-export';
   if (byName) return byName;
   throw new UnreadableInputError(fileName,
-    'cannot tell the format from the first lines (no CSV header, no fixed-width orbit or comet lines); name the format explicitly');
+    'cannot tell the format from the first lines (no CSV header, no fixed-width orbit or comet lines); name the format explicitly', 'format');
 }

@@ -18,14 +18,23 @@ export class PackedFormError extends Error {
   }
 }
 
+/**
+ * What the caller could give to read a file that failed: the format named ('format', when
+ * the content fits no format) or a column mapping ('columns', when a CSV header lacks
+ * orbit columns); '' when neither helps. The CLI turns it into the option to use.
+ */
+export type InputRemedy = '' | 'format' | 'columns';
+
 /** A whole input file cannot be read. Message: `FILE: REASON`, one line. */
 export class UnreadableInputError extends Error {
   readonly file: string;
   readonly reason: string;
-  constructor(file: string, reason: string) {
+  readonly remedy: InputRemedy;
+  constructor(file: string, reason: string, remedy: InputRemedy = '') {
     super(`${file}: ${reason}`);
     this.name = 'UnreadableInputError';
     this.file = file;
     this.reason = reason;
+    this.remedy = remedy;
   }
 }

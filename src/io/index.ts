@@ -18,6 +18,7 @@ export * from './orbitExportLine.js';
 export * from './cometExportLine.js';
 export * from './byteSource.js';
 export * from './lineSource.js';
+export * from './bodyKind.js';
 export * from './columnMap.js';
 export * from './csvDelimiter.js';
 export * from './csvValues.js';

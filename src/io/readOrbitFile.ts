@@ -10,6 +10,7 @@
  * The first PROBE_LINES lines are held back to decide the header block and the format, then
  * replayed; after that every line goes straight to its parser.
  */
+import type { BodyKindRule, CsvKindChoice } from './bodyKind.js';
 import type { ColumnMapping } from './columnMap.js';
 import { parseCometExportLine } from './cometExportLine.js';
 import { CsvTableReader } from './csvTable.js';
@@ -24,6 +25,7 @@ export const PROBE_LINES = 200;
 export interface ReadOrbitOptions {
   format?: InputFormat; // skip detection
   columns?: ColumnMapping; // CSV: explicit field → header mapping
+  csvKind?: CsvKindChoice; // CSV: class rows by designation ('auto', default) or force one kind
   encoding?: LineEncoding; // default 'utf8'
 }
 
@@ -38,6 +40,8 @@ export interface ReadOrbitSummary {
   bytes: number; // raw bytes read (compressed size for gzip)
   gzip: boolean;
   sha256: string; // of the raw bytes as read, hex
+  kindRule: BodyKindRule; // what classed the rows as asteroids or comets (./bodyKind.ts)
+  kinds: { asteroid: number; comet: number }; // rows handed on as each kind (rows = their sum)
 }
 
 type Sink = (text: string, lineNo: number) => void;
@@ -88,17 +92,22 @@ export async function readOrbitFile(
   let csv: CsvTableReader | null = null;
   const heldTexts: string[] = [];
   const heldNos: number[] = [];
+  const kinds = { asteroid: 0, comet: 0 };
+  const countRow = (r: OrbitRow, lineNo: number, text: string): void => {
+    kinds[r.kind]++;
+    onRow(r, lineNo, text);
+  };
 
   const decide = (): void => {
     const header = format === 'csv' ? 0 : headerBlockLength(heldTexts);
     format ??= detectFormat(heldTexts.slice(header), path);
     if (format === 'csv') {
-      csv = new CsvTableReader(path, options.columns ?? {}, row, onRow, onReject);
+      csv = new CsvTableReader(path, options.columns ?? {}, row, countRow, onReject, options.csvKind ?? 'auto');
       const reader = csv;
       sink = (text, lineNo) => reader.pushLine(text, lineNo);
     } else {
       const parse = format === 'orbit-export' ? parseOrbitExportLine : parseCometExportLine;
-      sink = fixedWidthSink(parse, path, row, counts, onRow, onReject);
+      sink = fixedWidthSink(parse, path, row, counts, countRow, onReject);
     }
     counts.skipped += header;
     for (let k = header; k < heldTexts.length; k++) sink(heldTexts[k], heldNos[k]);
@@ -125,5 +134,7 @@ export async function readOrbitFile(
   return {
     file: path, format: format!, linesRead: counts.rows + counts.rejected, ...counts,
     lines: stats.lines, bytes: stats.rawBytes, gzip: stats.gzip, sha256: stats.sha256,
+    kindRule: format !== 'csv' ? 'format' : (options.csvKind ?? 'auto') === 'auto' ? 'designation-pattern' : 'forced',
+    kinds,
   };
 }

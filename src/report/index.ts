@@ -1,5 +1,6 @@
 export * from './types.js';
 export * from './atomicWrite.js';
+export * from './outputStage.js';
 export * from './csvField.js';
 export * from './rank.js';
 export * from './candidateFiles.js';

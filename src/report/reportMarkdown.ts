@@ -27,15 +27,19 @@ function inputSection(s: ScanSummary): string {
     f.error ?? f.sha256.slice(0, 16),
   ]);
   rows.push(['**total**', '', String(s.rows.read), String(s.rows.accepted), String(s.rows.rejected), '']);
-  return ['## Input', '', markdownTable(['file', 'format', 'read', 'accepted', 'rejected', 'sha256 (first 16) or error'], rows, [false, false, true, true, true, false])].join('\n');
+  const demo = s.demoCatalogue ? ['No files were named: this is the bundled demo catalogue (invented data).', ''] : [];
+  return ['## Input', '', ...demo, markdownTable(['file', 'format', 'read', 'accepted', 'rejected', 'sha256 (first 16) or error'], rows, [false, false, true, true, true, false])].join('\n');
 }
 
 function rejectSection(s: ScanSummary): string {
   const entries = Object.entries(s.rejects.byReason);
   if (entries.length === 0) return '## Rejected rows\n\nNone.';
-  const shown = entries.slice(0, 15).map(([reason, n]) => [reason, String(n)]);
+  const shown = entries.slice(0, 15).map(([reason, n]) => [reason, String(n), s.rejects.examples[reason] ?? '']);
   const more = entries.length > 15 ? `\n\n${entries.length - 15} further reasons: see rejects.csv.` : '';
-  return ['## Rejected rows', '', 'Every rejected row is in rejects.csv with its file, line and raw text.', '', markdownTable(['reason', 'rows'], shown, [false, true]) + more].join('\n');
+  const intro = 'Every rejected row is in rejects.csv with its file, line and raw text. Rows are grouped by reason, ' +
+    "with the text quoted from the row shown as '…' and values read from it as #; the first row of each group is shown as written.";
+  return ['## Rejected rows', '', intro, '',
+    markdownTable(['reason', 'rows', 'first row (file:line: reason)'], shown, [false, true, false]) + more].join('\n');
 }
 
 function qualitySection(s: ScanSummary): string {

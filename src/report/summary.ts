@@ -6,7 +6,7 @@
  */
 import { QUALITY_FLAGS, type Catalogue, type Reject } from '../clean/types.js';
 import type { Candidate, Detector, ScreeningAccount } from '../detect/types.js';
-import { rejectCategories } from './rejectCategories.js';
+import { rejectExample, rejectGroups } from './rejectCategories.js';
 import type { DetectorSummary, FileAccount, ScanSummary } from './types.js';
 
 /** One detector as it ran: the detector and its screening account. */
@@ -17,6 +17,7 @@ export interface DetectorRun {
 
 export interface SummaryInput {
   version: string;
+  demoCatalogue?: boolean; // no files were named: the bundled demo catalogue was scanned
   files: FileAccount[];
   catalogue: Catalogue;
   rejects: readonly Reject[];
@@ -71,6 +72,15 @@ function detectorSummary(run: DetectorRun, candidates: readonly Candidate[], acc
   };
 }
 
+/** Reject counts by group and the first reject of each group, verbatim (./rejectCategories.ts). */
+function rejectsByReason(rejects: readonly Reject[]): Pick<ScanSummary['rejects'], 'byReason' | 'examples'> {
+  const groups = rejectGroups(rejects);
+  return {
+    byReason: Object.fromEntries(groups.map((g) => [g.key, g.count])),
+    examples: Object.fromEntries(groups.map((g) => [g.key, rejectExample(g.example)])),
+  };
+}
+
 export function buildSummary(input: SummaryInput): ScanSummary {
   const rows = { read: 0, accepted: 0, rejected: 0 };
   for (const f of input.files) {
@@ -83,9 +93,10 @@ export function buildSummary(input: SummaryInput): ScanSummary {
   const summary: ScanSummary = {
     tool: 'wayward',
     version: input.version,
+    demoCatalogue: input.demoCatalogue ?? false,
     rows,
     files: input.files,
-    rejects: { byKind, byReason: Object.fromEntries(rejectCategories(input.rejects)) },
+    rejects: { byKind, ...rejectsByReason(input.rejects) },
     qualityFlags: qualityCounts(input.catalogue),
     detectors: Object.fromEntries(input.runs.map((r) => [r.detector.id, detectorSummary(r, input.candidates, input.catalogue.size)])),
     options: input.options,

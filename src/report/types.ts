@@ -12,6 +12,11 @@ export interface FileAccount {
   sha256: string; // of the bytes read ('' when unreadable)
   rows: RowCounts;
   skippedLines: number; // header, separator and blank lines
+  // How rows were classed as asteroids or comets ('format': by the export format;
+  // 'designation-pattern': CSV rows by the comet forms of src/io/bodyKind.ts; 'forced': CSV
+  // rows all of the kind asked for) and how many rows read were classed each way (rows
+  // rejected before they could be classed are in neither count). Absent when unreadable.
+  bodyKind?: { rule: string; asteroid: number; comet: number };
   error?: string; // why the file could not be read
 }
 
@@ -28,9 +33,14 @@ export interface DetectorSummary {
 export interface ScanSummary {
   tool: 'wayward';
   version: string;
+  demoCatalogue: boolean; // true: no files were named and the bundled demo catalogue (invented data) was scanned
   rows: RowCounts;
   files: FileAccount[];
-  rejects: { byKind: Record<string, number>; byReason: Record<string, number> };
+  rejects: {
+    byKind: Record<string, number>;
+    byReason: Record<string, number>; // group (kind and reason, quoted text as '…', values as '#') → rows
+    examples: Record<string, string>; // group → its first row, 'FILE:LINE: REASON' as written
+  };
   qualityFlags: Record<string, number>; // accepted rows carrying each flag
   detectors: Record<string, DetectorSummary>; // by id, in the order they ran
   options: Record<string, unknown>;

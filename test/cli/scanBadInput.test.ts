@@ -37,7 +37,8 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     writeFileSync(join(dir, 'bin.dat'), Buffer.from([0x7f, 0x45, 0x4c, 0x46, 0, 0, 1, 2, 0, 255]));
     const r = runCli(['scan', join(dir, 'sub'), join(dir, 'bin.dat'), '--out', join(dir, 'o'), '--quiet']);
     expect(r.status).toBe(1);
-    expect(r.stderr.trim().split('\n')).toHaveLength(2);
+    // one line per file, then one saying nothing was written
+    expect(r.stderr.trim().split('\n')).toHaveLength(3);
   });
 
   it('empty file: zero rows, exit 0', () => {
@@ -118,8 +119,10 @@ describe('scan: bad input never stops a run, and every row is accounted for', ()
     writeFileSync(join(dir, 'odd.csv'), 'foo,bar,baz\n1,2,3\n');
     const r = runCli(['scan', join(dir, 'odd.csv'), '--out', join(dir, 'o'), '--quiet']);
     expect(r.status).toBe(1);
-    expect(r.stderr.trim().split('\n')).toHaveLength(1);
-    expect(r.stderr).toContain('odd.csv');
+    const lines = r.stderr.trim().split('\n');
+    expect(lines).toHaveLength(2); // the file, then: no input could be read
+    expect(lines[0]).toContain('odd.csv');
+    expect(lines[0]).toContain('--columns'); // the option that can fix it
   });
 
   it('usage errors exit 2 with a message', () => {

@@ -10,7 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import {
-  cellJd, emptyOrbitRow, mapColumns, parseColumnMapping, parseOrbitExportLine, readOrbitFile, sniffDelimiter,
+  cellJd, emptyOrbitRow, kindOfDesignation, mapColumns, parseColumnMapping, parseOrbitExportLine, readOrbitFile, sniffDelimiter,
   UnreadableInputError, type InputError, type OrbitRow, type ReadOrbitOptions,
 } from '../../src/io/index.js';
 import { isoToJd, readFixtureText } from './fixtureCases.js';
@@ -52,12 +52,16 @@ describe('header and delimiter', () => {
     expect(mapColumns(['designation', 'Q_AU']).index.q).toBe(1); // an unambiguous name stays case-insensitive
   });
 
-  it('prefers designation > desig > full_name > pdes > name; a spare name column is the name', () => {
-    expect(mapColumns(['name', 'pdes', 'full_name']).index.designation).toBe(2);
-    expect(mapColumns(['name', 'pdes', 'full_name']).index.name).toBe(0);
-    expect(mapColumns(['name', 'pdes']).index.designation).toBe(1);
-    expect(mapColumns(['name']).index.designation).toBe(0);
-    expect(mapColumns(['name']).index.name).toBe(-1);
+  it('a designation column (designation > desig > pdes) wins over a name column (full_name > name)', () => {
+    const pick = (headers: string[]) => {
+      const { index } = mapColumns(headers);
+      return [index.designation, index.fullName, index.name];
+    };
+    expect(pick(['name', 'pdes', 'full_name'])).toEqual([1, 2, 0]);
+    expect(pick(['full_name', 'designation'])).toEqual([1, 0, -1]);
+    expect(pick(['pdes', 'desig'])).toEqual([1, -1, -1]);
+    expect(pick(['full_name', 'name'])).toEqual([0, -1, 1]);
+    expect(pick(['name'])).toEqual([0, -1, -1]);
   });
 
   it('parses the --columns text', () => {
@@ -154,7 +158,7 @@ describe('bad rows and bad headers', () => {
   it('a header naming no orbit: one fatal error naming the file and the headers found', async () => {
     const p = temp('shop.csv', 'item,price,qty\napple,1,2\n');
     await expect(read(p)).rejects.toThrow(new UnreadableInputError(p,
-      'header lacks required orbit columns (designation; e; i; node; peri; epoch or tp; a, q or n; M or tp); headers found: item, price, qty'));
+      'header lacks required orbit columns (designation; e; i; node; peri; epoch or tp; a, q or n; M or tp); headers found: item, price, qty', 'columns'));
   });
 
   it('a mapping naming a header the file lacks is fatal', async () => {
@@ -185,5 +189,70 @@ describe('bad rows and bad headers', () => {
     const { rows, rejects } = await read(p);
     expect(rows).toEqual([]);
     expect(rejects.map((e) => e.message)).toEqual([`${p}:2: column 'a' (field 4): not a finite number: '1e999'`]);
+  });
+});
+
+describe('designation and kind of a CSV row', () => {
+  // Synthetic rows: real designations and full names in the forms general small-body
+  // database exports write them (pdes '1', full_name '     1 Ceres (A801 AA)'; comets
+  // '1P' / '1P/Halley', 'C/1995 O1' / 'C/1995 O1 (Hale-Bopp)': common practice), with
+  // invented elements.
+  const header = 'pdes,full_name,epoch,e,a,i,om,w,ma';
+  const elements = '2461200.5,0.1,2.5,3,40,50,60';
+
+  it('pdes is the designation; full_name adds the proper name and the number', async () => {
+    const p = temp('pdes.csv', [
+      header,
+      `1,"     1 Ceres (A801 AA)",${elements}`,
+      `2019 EU5,"       (2019 EU5)",${elements}`,
+      `1P,1P/Halley,${elements}`,
+      `C/1995 O1,C/1995 O1 (Hale-Bopp),${elements}`,
+      `433,,${elements}`,
+    ].join('\n') + '\n');
+    const { rows, rejects } = await read(p);
+    expect(rejects).toEqual([]);
+    expect(rows.map((r) => [r.designation, r.number, r.name, r.kind])).toEqual([
+      ['(1) Ceres', 1, 'Ceres', 'asteroid'],
+      ['2019 EU5', NaN, '', 'asteroid'],
+      ['1P', NaN, 'Halley', 'comet'],
+      ['C/1995 O1', NaN, 'Hale-Bopp', 'comet'],
+      ['(433)', 433, '', 'asteroid'], // a bare number reads as the numbered designation
+    ]);
+  });
+
+  it('pdes and full_name naming different numbers: the row is rejected, naming both columns', async () => {
+    const p = temp('conflict.csv', [header, `1,"     2 Pallas (A802 FA)",${elements}`].join('\n') + '\n');
+    const { rows, rejects } = await read(p);
+    expect(rows).toEqual([]);
+    expect(rejects.map((e) => e.message)).toEqual([
+      `${p}:2: column 'pdes' gives number 1 but column 'full_name' gives 2: '2 Pallas (A802 FA)'`]);
+  });
+
+  // The comet forms of the IAU designation system (common practice): a periodic number with
+  // P, D or I, or a P/, C/, D/, X/, I/, A/ prefix; everything else is an asteroid.
+  it.each([
+    ['1P', 'comet'], ['73P-B', 'comet'], ['2I/Borisov', 'comet'], ['C/1995 O1', 'comet'], ['P/2004 V5-A', 'comet'],
+    ['D/1993 F2', 'comet'], ['X/1106 C1', 'comet'], ['A/2017 U7', 'comet'],
+    ['(1) Ceres', 'asteroid'], ['2019 EU5', 'asteroid'], ['433', 'asteroid'], ['1PX', 'asteroid'], ['Halley', 'asteroid'],
+  ])('%s is classed %s by the designation pattern', (designation, kind) => {
+    expect(kindOfDesignation(designation)).toBe(kind);
+  });
+
+  it('the kind is by designation unless forced, and the summary says which rule and how many each way', async () => {
+    const p = temp('kinds.csv', [header, `1P,1P/Halley,${elements}`, `2019 EU5,,${elements}`, `433,,${elements}`].join('\n') + '\n');
+    const auto = await read(p);
+    expect(auto.rows.map((r) => r.kind)).toEqual(['comet', 'asteroid', 'asteroid']);
+    expect(auto.summary).toMatchObject({ kindRule: 'designation-pattern', kinds: { asteroid: 2, comet: 1 } });
+    const comet = await read(p, { csvKind: 'comet' });
+    expect(comet.rows.map((r) => r.kind)).toEqual(['comet', 'comet', 'comet']);
+    expect(comet.summary).toMatchObject({ kindRule: 'forced', kinds: { asteroid: 0, comet: 3 } });
+    const asteroid = await read(p, { csvKind: 'asteroid' });
+    expect(asteroid.rows.map((r) => r.kind)).toEqual(['asteroid', 'asteroid', 'asteroid']);
+    expect(asteroid.summary).toMatchObject({ kindRule: 'forced', kinds: { asteroid: 3, comet: 0 } });
+  });
+
+  it('the export formats class rows by their format', async () => {
+    const { summary } = await read(new URL('orbit-export/cases/ceres.txt', FIX).pathname);
+    expect(summary).toMatchObject({ format: 'orbit-export', kindRule: 'format', kinds: { asteroid: 1, comet: 0 } });
   });
 });

@@ -89,7 +89,7 @@ describe('real samples', () => {
     expect(detectFormat(COMETS.split('\n').slice(0, 5), 'x.txt')).toBe('comet-export');
     expect(detectFormat(['designation,epoch,e,a,i,om,w,ma'], 'x.txt')).toBe('csv');
     expect(() => detectFormat(['hello world', 'nothing here'], 'notes.txt')).toThrow(new UnreadableInputError(
-      'notes.txt', 'cannot tell the format from the first lines (no CSV header, no fixed-width orbit or comet lines); name the format explicitly'));
+      'notes.txt', 'cannot tell the format from the first lines (no CSV header, no fixed-width orbit or comet lines); name the format explicitly', 'format'));
   });
 
   it('an exception from the row callback reaches the caller unchanged (and the file is closed)', async () => {
