@@ -2,20 +2,17 @@
  * `wayward propagate`: one body's orbit carried to another date, two-body (default) or with
  * the Sun, eight planets and the Sun's 1PN term (--nbody), optionally with a comet's
  * non-gravitational parameters (--nongrav, with --nbody). The command parses and validates
- * (./propagateInput.ts), finds the body (src/clean/bodyLookup.ts), and formats the answer
- * (./propagateFormat.ts); the physics is core's propagateOrbit. runPropagate returns the
- * text, so tests call it directly.
+ * (./propagateInput.ts), finds the body (./propagateBody.ts over src/clean/bodyLookup.ts), and
+ * formats the answer (./propagateFormat.ts); the physics is core's propagateOrbit.
+ * runPropagate returns the text, so tests call it directly.
  */
 import { Command, Option } from 'commander';
 import { DEG_PER_RAD, RAD_PER_DEG } from '../core/constants.js';
 import { Instant } from '../core/time.js';
 import { EphemerisSpanError, propagateOrbit } from '../core/propagateOrbit.js';
 import type { OrbitElements, OrbitPropagation } from '../core/propagateOrbit.js';
-import { bodyLabel, findBodies, nearMatches, type MatchKind } from '../clean/bodyLookup.js';
-import { poorOrbitFlags, qualityUnknown } from '../clean/poorOrbit.js';
-import { bodyName, KIND_COMET, qualityNames, type Catalogue, type QualityFlag } from '../clean/types.js';
-import { loadCatalogue } from './loadCatalogue.js';
 import { parseOutputFormat } from './optionParsers.js';
+import { bodyFromCatalogue, COMMAND_LINE_BODY, PropagateInputError, type BodyInfo } from './propagateBody.js';
 import { formatPropagation } from './propagateFormat.js';
 import { parseDate, parseElements, parseNonGrav, type ElementsSpec } from './propagateInput.js';
 
@@ -37,25 +34,6 @@ export class PropagateUsageError extends Error {
     super(message);
     this.name = 'PropagateUsageError';
   }
-}
-
-/** The input does not hold what was asked for, or cannot be read (exit code 1). */
-export class PropagateInputError extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = 'PropagateInputError';
-  }
-}
-
-/** The body propagated and what is known of its orbit's quality. */
-export interface BodyInfo {
-  label: string; // designation (and name), or 'elements from the command line'
-  designation: string; // '' for command-line elements
-  name: string; // '' when none
-  kind: 'asteroid' | 'comet' | 'unknown'; // unknown for command-line elements
-  source: string; // 'file:line' or 'command line'
-  matchedBy: MatchKind | null; // null for command-line elements
-  quality: { flags: QualityFlag[]; poor: QualityFlag[]; unknown: boolean; uncertainty: number; nObs: number; arcDays: number } | null;
 }
 
 export interface PropagateResult {
@@ -80,58 +58,6 @@ function toOrbitElements(el: ElementsSpec): OrbitElements {
     ? { form: 'perihelion', qAu: el.qAu, e: el.e, ...angles, tpJdTDB: el.tp.to('TDB').jd, epochJdTDB }
     : { form: 'semimajor', aAu: el.aAu, e: el.e, ...angles, meanAnomalyRad: el.meanAnomalyDeg * RAD_PER_DEG, epochJdTDB };
 }
-
-/** At most this many bodies are listed when a name is shared or nothing matched. */
-const LISTED = 10;
-
-/** The one row `query` names in `cat`, or a PropagateInputError listing the shared or near ones. */
-function findRow(cat: Catalogue, query: string, files: string[]): { row: number; by: MatchKind } {
-  const where = `${files.join(', ')} (${cat.size} bodies accepted)`;
-  const m = findBodies(cat, [query])[0];
-  if (m.rows.length === 1) return { row: m.rows[0], by: m.by };
-  if (m.rows.length > 1) {
-    const more = m.rows.length > LISTED ? `, and ${m.rows.length - LISTED} more` : '';
-    throw new PropagateInputError(`'${query}' matches ${m.rows.length} bodies by ${m.by} in ${where}: `
-      + `${m.rows.slice(0, LISTED).map((r) => bodyLabel(cat, r)).join('; ')}${more}; give one designation or number`);
-  }
-  const near = nearMatches(cat, query, 5);
-  const hint = near.length > 0
-    ? `; nearest: ${near.map((n) => bodyLabel(cat, n.row)).join('; ')}`
-    : '; no number, designation or name is within 3 edits of it';
-  throw new PropagateInputError(`'${query}' is not a number, designation or name in ${where}${hint}`);
-}
-
-/** Elements and description of the body `query` names in the catalogue files. */
-async function bodyFromCatalogue(query: string, files: string[]): Promise<{ body: BodyInfo; el: ElementsSpec }> {
-  const loaded = await loadCatalogue(files);
-  if (loaded.errors.length > 0) throw new PropagateInputError(loaded.errors.map((e) => e.message).join('; '));
-  const cat = loaded.catalogue;
-  const { row: k, by } = findRow(cat, query, files);
-  const tt = (jd: number) => Instant.fromJd(jd, 'TT'); // catalogue epochs are TT
-  const common = {
-    e: cat.e[k], iDeg: cat.i[k] * DEG_PER_RAD, nodeDeg: cat.node[k] * DEG_PER_RAD, periDeg: cat.peri[k] * DEG_PER_RAD,
-    epoch: tt(cat.epochJdTT[k]),
-  };
-  const el: ElementsSpec = Number.isFinite(cat.meanAnomaly[k]) && Number.isFinite(cat.a[k])
-    ? { form: 'semimajor', aAu: cat.a[k], meanAnomalyDeg: cat.meanAnomaly[k] * DEG_PER_RAD, ...common }
-    : { form: 'perihelion', qAu: cat.q[k], tp: tt(cat.tpJdTT[k]), ...common };
-  const word = cat.quality[k];
-  const body: BodyInfo = {
-    label: bodyLabel(cat, k), designation: cat.designation[k], name: bodyName(cat, k),
-    kind: cat.kind[k] === KIND_COMET ? 'comet' : 'asteroid',
-    source: `${cat.files[cat.fileIndex[k]]}:${cat.source[k]}`, matchedBy: by,
-    quality: {
-      flags: qualityNames(word), poor: poorOrbitFlags(word), unknown: qualityUnknown(word),
-      uncertainty: cat.uncertainty[k], nObs: cat.nObs[k], arcDays: cat.arcDays[k],
-    },
-  };
-  return { body, el };
-}
-
-const COMMAND_LINE_BODY: BodyInfo = {
-  label: 'elements from the command line', designation: '', name: '', kind: 'unknown', source: 'command line',
-  matchedBy: null, quality: null,
-};
 
 /** Plain warnings on the orbit's quality and notes on what the model leaves out. */
 function caveats(body: BodyInfo, opts: PropagateOptions): { notes: string[]; warnings: string[] } {

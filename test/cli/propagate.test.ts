@@ -11,8 +11,9 @@ import { describe, expect, it } from 'vitest';
 import * as Astronomy from 'astronomy-engine';
 import { Command, CommanderError, InvalidArgumentError } from 'commander';
 import {
-  propagateOne, PropagateInputError, PropagateUsageError, registerPropagate, runPropagate, type PropagateOptions,
+  propagateOne, PropagateUsageError, registerPropagate, runPropagate, type PropagateOptions,
 } from '../../src/cli/propagate.js';
+import { PropagateInputError } from '../../src/cli/propagateBody.js';
 import { parseDate, parseElements, parseNonGrav } from '../../src/cli/propagateInput.js';
 import { GAUSS_K, GM_SUN_AU3_PER_DAY2, J2000_JD, KM_PER_AU } from '../../src/core/constants.js';
 import { Instant } from '../../src/core/time.js';
