@@ -81,9 +81,11 @@ function caveats(body: BodyInfo, opts: PropagateOptions): { notes: string[]; war
 
 /** Why a and M are not given for an orbit of eccentricity `e` ≥ 1. */
 function semimajorAbsence(e: number): string {
-  const kind = e > 1 ? 'hyperbolic' : 'parabolic';
-  return `a and M are not given: the orbit is ${kind} (e = ${e.toFixed(8)} ≥ 1), unbound and without a period, `
-    + `so it has no finite positive semimajor axis and no mean anomaly; q, e and tp describe it`;
+  return e > 1
+    ? `a and M are not given: the orbit is hyperbolic (e = ${e.toFixed(8)} > 1), unbound and without a period: `
+      + 'its semimajor axis would be negative and its mean anomaly is not the elliptic one, so q, e and tp describe it'
+    : 'a and M are not given: the orbit is parabolic (e = 1), unbound and without a period: '
+      + 'its semimajor axis is infinite, so q, e and tp describe it';
 }
 
 function modelOf(opts: PropagateOptions): PropagateResult['model'] {
