@@ -50,6 +50,7 @@ export class CatalogueBuilder {
   private fileIndex: Uint16Array = new Uint16Array(0);
   private source: Uint32Array = new Uint32Array(0);
   private readonly designation: string[] = [];
+  private readonly names = new Map<number, string>(); // slot → proper name, named rows only
   private readonly files: string[] = []; // one entry per input, names may repeat
   private readonly fileSlot = new Map<string, number>(); // name → its latest input
   private readonly rejectedByFile: number[] = []; // rejects charged to each input
@@ -181,6 +182,9 @@ export class CatalogueBuilder {
     this.quality[slot] = qualityWord(row, this.thresholds);
     this.fileIndex[slot] = this.fileNumber(file);
     this.source[slot] = line;
+    // Most rows have no name: nothing to store, and nothing to delete unless some row has one.
+    if (row.name !== '') this.names.set(slot, row.name);
+    else if (this.names.size > 0) this.names.delete(slot);
   }
 
   /** Input number of `file`: the current input when the name matches, else by name. */
@@ -220,6 +224,7 @@ export class CatalogueBuilder {
     return {
       size: n,
       designation: this.designation,
+      names: this.names,
       kind: this.kind.subarray(0, n),
       epochJdTT: c.epochJdTT.subarray(0, n),
       a: c.a.subarray(0, n), q: c.q.subarray(0, n), e: c.e.subarray(0, n), i: c.i.subarray(0, n),

@@ -6,3 +6,7 @@ export * from './derivedElements.js';
 export * from './qualityFlags.js';
 export * from './catalogueBuilder.js';
 export * from './slotIndex.js';
+export * from './editDistance.js';
+export * from './bodyKeys.js';
+export * from './bodyLookup.js';
+export * from './poorOrbit.js';

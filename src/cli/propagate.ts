@@ -1,35 +1,29 @@
 /**
  * `wayward propagate`: one body's orbit carried to another date, two-body (default) or with
- * the Sun, eight planets and the Sun's 1PN term (--nbody). Prints the heliocentric J2000
- * ecliptic state, the osculating elements and, with --distances, the heliocentric and
- * geocentric distances. The command parses and validates, finds the elements and formats the
- * answer; the physics is core's propagateOrbit. runPropagate returns the text, so tests call
- * it directly.
- *
- * Time scales: dates without a scale are TT (as catalogue epochs are); 'Z'/UTC, TAI and TDB
- * in the text are honoured; a bare number is a Julian date in TT. Dynamics run in TDB.
+ * the Sun, eight planets and the Sun's 1PN term (--nbody), optionally with a comet's
+ * non-gravitational parameters (--nongrav, with --nbody). The command parses and validates
+ * (./propagateInput.ts), finds the body (./propagateBody.ts over src/clean/bodyLookup.ts), and
+ * formats the answer (./propagateFormat.ts); the physics is core's propagateOrbit.
+ * runPropagate returns the text, so tests call it directly.
  */
-import { Command, InvalidArgumentError, Option } from 'commander';
+import { Command, Option } from 'commander';
 import { DEG_PER_RAD, RAD_PER_DEG } from '../core/constants.js';
 import { Instant } from '../core/time.js';
-import { TimeFormatError } from '../core/isoTime.js';
 import { EphemerisSpanError, propagateOrbit } from '../core/propagateOrbit.js';
 import type { OrbitElements, OrbitPropagation } from '../core/propagateOrbit.js';
-import { loadCatalogue } from './loadCatalogue.js';
 import { parseOutputFormat } from './optionParsers.js';
-
-/** Elements given on the command line or read from a catalogue. Angles in degrees, dates JD TDB. */
-export type ElementsSpec =
-  | { form: 'perihelion'; qAu: number; e: number; iDeg: number; nodeDeg: number; periDeg: number; tpJdTDB: number; epochJdTDB: number }
-  | { form: 'semimajor'; aAu: number; e: number; iDeg: number; nodeDeg: number; periDeg: number; meanAnomalyDeg: number; epochJdTDB: number };
+import { bodyFromCatalogue, COMMAND_LINE_BODY, PropagateInputError, type BodyInfo } from './propagateBody.js';
+import { formatPropagation } from './propagateFormat.js';
+import { parseDate, parseElements, parseNonGrav, type ElementsSpec } from './propagateInput.js';
 
 export interface PropagateOptions {
   elements?: ElementsSpec;
-  designation?: string; // looked up in `catalogue`
+  designation?: string; // looked up in `catalogue`: number, packed or readable designation, name
   catalogue?: string[];
-  toJdTDB: number;
+  to: Instant; // target date, in the scale it was given in
   nbody: boolean;
-  relativity: boolean; // only with nbody
+  relativity: boolean; // false only with nbody
+  nonGravAuPerDay2?: [number, number, number] | null; // A1, A2, A3; only with nbody
   distances: boolean;
   format: 'text' | 'json';
 }
@@ -42,132 +36,81 @@ export class PropagateUsageError extends Error {
   }
 }
 
-/** The input does not hold what was asked for, or cannot be read (exit code 1). */
-export class PropagateInputError extends Error {
-  constructor(message: string) {
-    super(message);
-    this.name = 'PropagateInputError';
-  }
+export interface PropagateResult {
+  body: BodyInfo;
+  model: { description: string; planets: boolean; relativity: boolean; nonGravAuPerDay2: [number, number, number] | null; steps: number | null };
+  epoch: Instant; // the elements' epoch, in the scale it was given in
+  target: Instant; // the target date, in the scale it was given in
+  state: number[]; // x, y, z au; vx, vy, vz au/day; heliocentric J2000 ecliptic
+  perihelion: { qAu: number; e: number; iDeg: number; nodeDeg: number; periDeg: number; tp: Instant };
+  semimajor: { aAu: number; meanAnomalyDeg: number } | null; // null for e ≥ 1
+  semimajorAbsentBecause: string; // why a and M are not given ('' when they are)
+  distances: { heliocentricAu: number; geocentricAu: number } | null;
+  notes: string[];
+  warnings: string[];
 }
 
-/** ISO 8601 date-time (TT unless it names a scale) or a Julian date (TT) → JD TDB. */
-export function parseDateToJdTDB(value: string): number {
-  const text = value.trim();
-  if (/^[+-]?\d+(\.\d*)?$/.test(text) && !/^\d{4}-/.test(text)) {
-    const jd = Number(text);
-    if (!Number.isFinite(jd) || jd <= 0) throw new InvalidArgumentError(`'${value}' is not a Julian date`);
-    return Instant.fromJd(jd, 'TT').to('TDB').jd;
-  }
-  try {
-    return Instant.parse(text, 'TT').to('TDB').jd;
-  } catch (err) {
-    if (err instanceof TimeFormatError || err instanceof RangeError) {
-      throw new InvalidArgumentError(`'${value}' is neither an ISO date (e.g. 2030-01-01T00:00) nor a Julian date`);
-    }
-    throw err;
-  }
-}
-
-const ELEMENT_KEYS = ['q', 'a', 'e', 'i', 'node', 'peri', 'tp', 'm', 'epoch'] as const;
-
-/** `q=…,e=…,i=…,node=…,peri=…,tp=…[,epoch=…]` or `a=…,e=…,i=…,node=…,peri=…,M=…,epoch=…`. */
-export function parseElements(value: string): ElementsSpec {
-  const got = new Map<string, string>();
-  for (const part of value.split(/[,;]/)) {
-    if (part.trim() === '') continue;
-    const eq = part.indexOf('=');
-    const key = part.slice(0, eq).trim().toLowerCase();
-    if (eq <= 0 || !(ELEMENT_KEYS as readonly string[]).includes(key)) {
-      throw new InvalidArgumentError(`element '${part.trim()}' is not key=value with key one of q, a, e, i, node, peri, tp, M, epoch`);
-    }
-    if (got.has(key)) throw new InvalidArgumentError(`element '${key}' given twice`);
-    got.set(key, part.slice(eq + 1).trim());
-  }
-  const num = (k: string): number => {
-    const x = Number(got.get(k));
-    if (got.get(k) === '' || !Number.isFinite(x)) {
-      throw new InvalidArgumentError(`element ${k === 'm' ? 'M' : k}='${got.get(k)}' is not a finite number`);
-    }
-    return x;
-  };
-  const need = (keys: string[]): void => {
-    const missing = keys.filter((k) => !got.has(k));
-    if (missing.length > 0) {
-      throw new InvalidArgumentError(`elements lack ${missing.map((k) => (k === 'm' ? 'M' : k)).join(', ')}`);
-    }
-  };
-  const perihelionForm = got.has('q');
-  if (perihelionForm === got.has('a')) throw new InvalidArgumentError('give either q (with tp) or a (with M and epoch), not both or neither');
-  need(perihelionForm ? ['q', 'e', 'i', 'node', 'peri', 'tp'] : ['a', 'e', 'i', 'node', 'peri', 'm', 'epoch']);
-  // An element of the other form would be silently ignored: refuse it instead.
-  const foreign = perihelionForm ? 'm' : 'tp';
-  if (got.has(foreign)) {
-    throw new InvalidArgumentError(perihelionForm ? 'M goes with a (and epoch), not with q and tp' : 'tp goes with q, not with a, M and epoch');
-  }
-  const e = num('e'), iDeg = num('i'), nodeDeg = num('node'), periDeg = num('peri');
-  if (e < 0) throw new InvalidArgumentError(`e=${e} must be ≥ 0`);
-  if (iDeg < 0 || iDeg > 180) throw new InvalidArgumentError(`i=${iDeg}° must be within 0–180°`);
-  if (perihelionForm) {
-    const qAu = num('q');
-    if (!(qAu > 0)) throw new InvalidArgumentError(`q=${qAu} au must be > 0`);
-    const tpJdTDB = parseDateToJdTDB(got.get('tp')!);
-    const epochJdTDB = got.has('epoch') ? parseDateToJdTDB(got.get('epoch')!) : tpJdTDB;
-    return { form: 'perihelion', qAu, e, iDeg, nodeDeg, periDeg, tpJdTDB, epochJdTDB };
-  }
-  const aAu = num('a');
-  if (e === 1) throw new InvalidArgumentError('e = 1 has no finite a: give q and tp instead');
-  if (e < 1 && !(aAu > 0)) throw new InvalidArgumentError(`a=${aAu} au must be > 0 when e < 1`);
-  if (e > 1 && !(aAu < 0)) throw new InvalidArgumentError(`a=${aAu} au must be < 0 when e > 1`);
-  return { form: 'semimajor', aAu, e, iDeg, nodeDeg, periDeg, meanAnomalyDeg: num('m'), epochJdTDB: parseDateToJdTDB(got.get('epoch')!) };
-}
-
-/** The command's elements (degrees) as the core takes them (radians). */
+/** The command's elements (degrees, dates in any scale) as the core takes them (radians, JD TDB). */
 function toOrbitElements(el: ElementsSpec): OrbitElements {
   const angles = { iRad: el.iDeg * RAD_PER_DEG, nodeRad: el.nodeDeg * RAD_PER_DEG, periRad: el.periDeg * RAD_PER_DEG };
+  const epochJdTDB = el.epoch.to('TDB').jd;
   return el.form === 'perihelion'
-    ? { form: 'perihelion', qAu: el.qAu, e: el.e, ...angles, tpJdTDB: el.tpJdTDB, epochJdTDB: el.epochJdTDB }
-    : { form: 'semimajor', aAu: el.aAu, e: el.e, ...angles, meanAnomalyRad: el.meanAnomalyDeg * RAD_PER_DEG, epochJdTDB: el.epochJdTDB };
+    ? { form: 'perihelion', qAu: el.qAu, e: el.e, ...angles, tpJdTDB: el.tp.to('TDB').jd, epochJdTDB }
+    : { form: 'semimajor', aAu: el.aAu, e: el.e, ...angles, meanAnomalyRad: el.meanAnomalyDeg * RAD_PER_DEG, epochJdTDB };
 }
 
-function normaliseDesignation(s: string): string {
-  return s.trim().replace(/\s+/g, ' ').toUpperCase();
-}
-
-/** Elements of `designation` from catalogue files: exact readable form, or the number, or the name. */
-async function elementsFromCatalogue(designation: string, files: string[]): Promise<{ label: string; el: ElementsSpec }> {
-  const loaded = await loadCatalogue(files);
-  if (loaded.errors.length > 0) throw new PropagateInputError(loaded.errors.map((e) => e.message).join('; '));
-  const cat = loaded.catalogue;
-  const want = normaliseDesignation(designation);
-  const bare = want.replace(/^\((\d+)\)$/, '$1');
-  let k = -1;
-  for (let r = 0; r < cat.size && k < 0; r++) {
-    const d = normaliseDesignation(cat.designation[r]);
-    const m = /^\((\d+)\)\s*(.*)$/.exec(d);
-    if (d === want || (m !== null && (m[1] === bare || m[2] === want))) k = r;
+/** Plain warnings on the orbit's quality and notes on what the model leaves out. */
+function caveats(body: BodyInfo, opts: PropagateOptions): { notes: string[]; warnings: string[] } {
+  const notes: string[] = [], warnings: string[] = [];
+  const q = body.quality;
+  if (q === null) notes.push('orbit quality unknown: the elements were given on the command line');
+  else if (q.poor.length > 0) {
+    warnings.push(`poor orbit (${q.poor.join(', ')}): the propagated position carries a large uncertainty `
+      + 'that this command does not quantify; treat it as a rough guide only');
+  } else if (q.unknown) {
+    warnings.push('orbit quality unknown (the input gives no uncertainty parameter, arc or observation count): '
+      + 'the propagated position may carry a large uncertainty that this command does not quantify');
   }
-  if (k < 0) throw new PropagateInputError(`designation '${designation}' not found in ${files.join(', ')} (${cat.size} bodies)`);
-  const toTdb = (jdTT: number) => Instant.fromJd(jdTT, 'TT').to('TDB').jd;
-  const common = {
-    e: cat.e[k], iDeg: cat.i[k] * DEG_PER_RAD, nodeDeg: cat.node[k] * DEG_PER_RAD, periDeg: cat.peri[k] * DEG_PER_RAD,
-    epochJdTDB: toTdb(cat.epochJdTT[k]),
-  };
-  const el: ElementsSpec = Number.isFinite(cat.meanAnomaly[k]) && Number.isFinite(cat.a[k])
-    ? { form: 'semimajor', aAu: cat.a[k], meanAnomalyDeg: cat.meanAnomaly[k] * DEG_PER_RAD, ...common }
-    : { form: 'perihelion', qAu: cat.q[k], tpJdTDB: toTdb(cat.tpJdTT[k]), ...common };
-  return { label: cat.designation[k], el };
+  const nonGrav = opts.nonGravAuPerDay2 ?? null;
+  if (body.kind === 'comet' && nonGrav === null) {
+    notes.push('comet propagated without non-gravitational (outgassing) forces: none were given '
+      + '(--nbody --nongrav A1=…,A2=…,A3=… applies them); its position can drift far from this one');
+  }
+  return { notes, warnings };
 }
 
-export interface PropagateResult {
-  label: string;
-  model: string;
-  epochJdTDB: number;
-  toJdTDB: number;
-  state: number[]; // x, y, z au; vx, vy, vz au/day
-  perihelion: { qAu: number; e: number; iDeg: number; nodeDeg: number; periDeg: number; tpJdTDB: number };
-  semimajor: { aAu: number; meanAnomalyDeg: number } | null; // null for e ≥ 1
-  distances: { heliocentricAu: number; geocentricAu: number } | null;
-  steps: number | null; // integrator steps (N-body only)
+/** Why a and M are not given for an orbit of eccentricity `e` ≥ 1. */
+function semimajorAbsence(e: number): string {
+  return e > 1
+    ? `a and M are not given: the orbit is hyperbolic (e = ${e.toFixed(8)} > 1), unbound and without a period: `
+      + 'its semimajor axis would be negative and its mean anomaly is not the elliptic one, so q, e and tp describe it'
+    : 'a and M are not given: the orbit is parabolic (e = 1), unbound and without a period: '
+      + 'its semimajor axis is infinite, so q, e and tp describe it';
+}
+
+function modelOf(opts: PropagateOptions): PropagateResult['model'] {
+  const nonGrav = opts.nonGravAuPerDay2 ?? null;
+  const description = opts.nbody
+    ? `N-body: Sun + 8 planets (VSOP87B)${opts.relativity ? ' + solar 1PN' : ''}`
+      + `${nonGrav ? ' + non-gravitational A1, A2, A3 (water-ice law)' : ''}, Gauss–Radau 15th order`
+    : 'two-body (Sun only, universal variables)';
+  return { description, planets: opts.nbody, relativity: opts.nbody && opts.relativity, nonGravAuPerDay2: nonGrav, steps: null };
+}
+
+/** Refuse option combinations that would be silently ignored. */
+function checkOptions(opts: PropagateOptions): void {
+  if ((opts.elements === undefined) === (opts.designation === undefined)) {
+    throw new PropagateUsageError('give either --elements or a designation with --catalogue');
+  }
+  if (opts.designation !== undefined && (!opts.catalogue || opts.catalogue.length === 0)) {
+    throw new PropagateUsageError('a designation needs --catalogue FILE');
+  }
+  if (!opts.nbody && !opts.relativity) {
+    throw new PropagateUsageError('--no-relativity applies only with --nbody (two-body motion has no relativity term)');
+  }
+  if (!opts.nbody && (opts.nonGravAuPerDay2 ?? null) !== null) {
+    throw new PropagateUsageError('--nongrav applies only with --nbody (the non-gravitational forces are integrated)');
+  }
 }
 
 /**
@@ -175,67 +118,31 @@ export interface PropagateResult {
  * the physics in core (propagateOrbit.ts). Throws PropagateUsageError / PropagateInputError.
  */
 export async function propagateOne(opts: PropagateOptions): Promise<PropagateResult> {
-  if ((opts.elements === undefined) === (opts.designation === undefined)) {
-    throw new PropagateUsageError('give either --elements or a designation with --catalogue');
-  }
-  let label = 'elements';
+  checkOptions(opts);
+  let body = COMMAND_LINE_BODY;
   let el: ElementsSpec;
   if (opts.elements !== undefined) el = opts.elements;
-  else {
-    if (!opts.catalogue || opts.catalogue.length === 0) throw new PropagateUsageError('a designation needs --catalogue FILE');
-    ({ label, el } = await elementsFromCatalogue(opts.designation!, opts.catalogue));
-  }
+  else ({ body, el } = await bodyFromCatalogue(opts.designation!, opts.catalogue!));
   let orbit: OrbitPropagation;
   try {
-    orbit = propagateOrbit(toOrbitElements(el), opts);
+    orbit = propagateOrbit(toOrbitElements(el), { ...opts, toJdTDB: opts.to.to('TDB').jd });
   } catch (err) {
     if (err instanceof EphemerisSpanError) throw new PropagateUsageError(err.message);
     throw err;
   }
   const pe = orbit.perihelion;
   return {
-    label,
-    model: opts.nbody
-      ? `N-body: Sun + 8 planets (VSOP87B)${opts.relativity ? ' + solar 1PN' : ''}, Gauss–Radau 15th order`
-      : 'two-body (Sun only, universal variables)',
-    epochJdTDB: el.epochJdTDB, toJdTDB: opts.toJdTDB, state: Array.from(orbit.state),
-    perihelion: { qAu: pe[0], e: pe[1], iDeg: pe[2] * DEG_PER_RAD, nodeDeg: pe[3] * DEG_PER_RAD, periDeg: pe[4] * DEG_PER_RAD, tpJdTDB: pe[5] },
+    body, model: { ...modelOf(opts), steps: opts.nbody ? orbit.steps : null },
+    epoch: el.epoch, target: opts.to, state: Array.from(orbit.state),
+    perihelion: {
+      qAu: pe[0], e: pe[1], iDeg: pe[2] * DEG_PER_RAD, nodeDeg: pe[3] * DEG_PER_RAD, periDeg: pe[4] * DEG_PER_RAD,
+      tp: Instant.fromJd(pe[5], 'TDB'),
+    },
     semimajor: orbit.semimajor && { aAu: orbit.semimajor.aAu, meanAnomalyDeg: orbit.semimajor.meanAnomalyRad * DEG_PER_RAD },
+    semimajorAbsentBecause: orbit.semimajor ? '' : semimajorAbsence(pe[1]),
     distances: opts.distances ? { heliocentricAu: orbit.heliocentricAu, geocentricAu: orbit.geocentricAu } : null,
-    steps: opts.nbody ? orbit.steps : null,
+    ...caveats(body, opts),
   };
-}
-
-function dateText(jdTDB: number): string {
-  return `JD ${jdTDB.toFixed(6)} TDB (${Instant.fromJd(jdTDB, 'TDB').toIso(0)})`;
-}
-
-/** The text (or JSON) the command prints. */
-export function formatPropagation(r: PropagateResult, format: 'text' | 'json'): string {
-  if (format === 'json') return JSON.stringify(r, null, 2) + '\n';
-  const f = (x: number, d = 12) => (x >= 0 ? ' ' : '') + x.toFixed(d);
-  const p = r.perihelion;
-  const lines = [
-    `body     ${r.label}`,
-    `model    ${r.model}${r.steps !== null ? ` (${r.steps} steps)` : ''}`,
-    `from     ${dateText(r.epochJdTDB)}`,
-    `to       ${dateText(r.toJdTDB)}`,
-    'state, heliocentric J2000 ecliptic',
-    `  x  ${f(r.state[0])} au      vx ${f(r.state[3], 14)} au/day`,
-    `  y  ${f(r.state[1])} au      vy ${f(r.state[4], 14)} au/day`,
-    `  z  ${f(r.state[2])} au      vz ${f(r.state[5], 14)} au/day`,
-    'osculating elements, heliocentric J2000 ecliptic',
-    `  q    ${p.qAu.toFixed(10)} au    e    ${p.e.toFixed(10)}`,
-    `  i    ${p.iDeg.toFixed(8)}°    node ${p.nodeDeg.toFixed(8)}°    peri ${p.periDeg.toFixed(8)}°`,
-    `  tp   ${dateText(p.tpJdTDB)}`,
-  ];
-  if (r.semimajor) lines.push(`  a    ${r.semimajor.aAu.toFixed(10)} au    M    ${r.semimajor.meanAnomalyDeg.toFixed(8)}°`);
-  if (r.distances) {
-    lines.push('distances');
-    lines.push(`  heliocentric ${r.distances.heliocentricAu.toFixed(10)} au`);
-    lines.push(`  geocentric   ${r.distances.geocentricAu.toFixed(10)} au`);
-  }
-  return lines.join('\n') + '\n';
 }
 
 /** Run the command as the CLI would and return what it prints. */
@@ -246,10 +153,11 @@ export async function runPropagate(opts: PropagateOptions): Promise<string> {
 interface RawPropagateFlags {
   elements?: ElementsSpec;
   catalogue?: string[];
-  to: number;
-  nbody: boolean;
+  to: Instant;
+  nbody?: boolean;
   relativity: boolean;
-  distances: boolean;
+  nongrav?: [number, number, number];
+  distances?: boolean;
   format: 'text' | 'json';
 }
 
@@ -261,19 +169,21 @@ export function registerPropagate(program: Command): void {
   program
     .command('propagate')
     .description("carry one body's orbit to another date: two-body, or with the Sun and planets (--nbody)")
-    .argument('[designation]', 'a body in the --catalogue file(s): readable designation, number or name')
+    .argument('[body]', 'a body in the --catalogue file(s): number, packed or readable designation (blanks optional), or name')
     .addOption(new Option('--elements <list>', 'elements: "q=…,e=…,i=…,node=…,peri=…,tp=DATE[,epoch=DATE]" or "a=…,e=…,i=…,node=…,peri=…,M=…,epoch=DATE" (au, degrees, J2000 ecliptic)').argParser(parseElements))
-    .option('--catalogue <file>', 'orbit file to take the designation from (repeatable)', collect)
-    .requiredOption('--to <date>', 'target date: ISO 8601 (TT unless it says Z/UTC/TAI/TDB) or a Julian date (TT)', parseDateToJdTDB)
-    .option('--nbody', 'integrate with the Sun, the eight planets and the Sun\'s 1PN term (default: two-body)', false)
-    .option('--no-relativity', 'leave out the Sun\'s 1PN term with --nbody')
-    .option('--distances', 'also print heliocentric and geocentric distances', false)
+    .option('--catalogue <file>', 'orbit file to find the body in (repeatable)', collect)
+    .requiredOption('--to <date>', 'target date: ISO 8601 (TT unless it says Z/UTC/TAI/TDB) or a Julian date (TT)', parseDate)
+    .option('--nbody', 'integrate with the Sun, the eight planets and the Sun\'s 1PN term instead of two-body motion')
+    .option('--no-relativity', 'leave out the Sun\'s 1PN term (only with --nbody)')
+    .option('--nongrav <list>', 'comet non-gravitational parameters "A1=…,A2=…,A3=…" in au/day², water-ice law (only with --nbody)', parseNonGrav)
+    .option('--distances', 'also print heliocentric and geocentric distances')
     .option('--format <format>', "'text' or 'json'", parseOutputFormat, 'text')
     .action(async function (this: Command, designation: string | undefined, flags: RawPropagateFlags) {
       try {
         const text = await runPropagate({
-          elements: flags.elements, designation, catalogue: flags.catalogue, toJdTDB: flags.to,
-          nbody: flags.nbody, relativity: flags.relativity, distances: flags.distances, format: flags.format,
+          elements: flags.elements, designation, catalogue: flags.catalogue, to: flags.to,
+          nbody: flags.nbody === true, relativity: flags.relativity, nonGravAuPerDay2: flags.nongrav ?? null,
+          distances: flags.distances === true, format: flags.format,
         });
         process.stdout.write(text);
       } catch (err) {

@@ -16,6 +16,7 @@ import {
   perihelionElementsToState, semimajorElementsToState, stateToPerihelionElements, stateToSemimajorElements,
 } from './twoBody.js';
 import { propagateTestBodies } from './propagateTestBodies.js';
+import { Instant } from './time.js';
 import type { Ephemeris } from './types.js';
 
 /** Osculating heliocentric elements at `epochJdTDB`; angles in rad. */
@@ -31,6 +32,12 @@ export interface OrbitPropagationOptions {
   relativity: boolean;
   /** Also the heliocentric and geocentric distances at `toJdTDB`. */
   distances: boolean;
+  /**
+   * Non-gravitational parameters A1, A2, A3 (au/day², radial, transverse, normal) under the
+   * comet water-ice law (forces/nonGravLaw.ts); only with `nbody` (RangeError otherwise).
+   * Absent or null: none.
+   */
+  nonGravAuPerDay2?: readonly [number, number, number] | null;
 }
 
 export interface OrbitPropagation {
@@ -47,11 +54,31 @@ export interface OrbitPropagation {
   steps: number;
 }
 
-/** The dates asked for lie outside what the planetary ephemeris can answer. */
+/** First day of the Gregorian calendar, 1582 Oct 15 (JD at 0h); julian.ts counts earlier days in the Julian calendar. */
+const GREGORIAN_START_JD = 2299160.5;
+
+/** Calendar date (TDB) of a JD TDB, e.g. '3500-01-01', marked when it is a Julian-calendar date. */
+function calendarDate(jdTDB: number): string {
+  if (!Number.isFinite(jdTDB)) return `JD ${jdTDB}`;
+  const day = Instant.fromJd(jdTDB, 'TDB').toIso(0).split('T')[0];
+  return jdTDB < GREGORIAN_START_JD ? `${day} (Julian calendar)` : day;
+}
+
+/** The dates asked for lie outside what the planetary ephemeris can answer. Dates JD TDB. */
 export class EphemerisSpanError extends RangeError {
-  constructor(message: string) {
-    super(message);
+  readonly fromJdTDB: number;
+  readonly toJdTDB: number;
+  readonly spanStartJdTDB: number;
+  readonly spanEndJdTDB: number;
+  constructor(fromJdTDB: number, toJdTDB: number, spanStartJdTDB: number, spanEndJdTDB: number) {
+    super(`dates ${calendarDate(fromJdTDB)} to ${calendarDate(toJdTDB)} (JD ${fromJdTDB.toFixed(1)}–${toJdTDB.toFixed(1)} TDB) `
+      + `lie outside the planetary ephemeris span ${calendarDate(spanStartJdTDB)} to ${calendarDate(spanEndJdTDB)} `
+      + `(JD ${spanStartJdTDB}–${spanEndJdTDB} TDB)`);
     this.name = 'EphemerisSpanError';
+    this.fromJdTDB = fromJdTDB;
+    this.toJdTDB = toJdTDB;
+    this.spanStartJdTDB = spanStartJdTDB;
+    this.spanEndJdTDB = spanEndJdTDB;
   }
 }
 
@@ -66,8 +93,7 @@ export function planetaryEphemerisOver(loJdTDB: number, hiJdTDB: number): Epheme
   const src = new Vsop87Ephemeris();
   const start = loJdTDB - EPHEMERIS_MARGIN_DAYS, end = hiJdTDB + EPHEMERIS_MARGIN_DAYS;
   if (!(start >= src.startJdTDB && end <= src.endJdTDB)) {
-    throw new EphemerisSpanError(`dates JD ${loJdTDB.toFixed(1)}–${hiJdTDB.toFixed(1)} lie outside the planetary ephemeris span `
-      + `JD ${src.startJdTDB}–${src.endJdTDB}`);
+    throw new EphemerisSpanError(loJdTDB, hiJdTDB, src.startJdTDB, src.endJdTDB);
   }
   return createEphemeris({ startJdTDB: start, endJdTDB: end, source: src });
 }
@@ -83,6 +109,8 @@ export function orbitStateAtEpoch(el: OrbitElements, out: Float64Array, muAu3Per
 
 /** Carry `el` to opts.toJdTDB. Throws EphemerisSpanError when the planets are needed outside their span. */
 export function propagateOrbit(el: OrbitElements, opts: OrbitPropagationOptions): OrbitPropagation {
+  const nonGrav = opts.nonGravAuPerDay2 ?? null;
+  if (nonGrav !== null && !opts.nbody) throw new RangeError('propagateOrbit: non-gravitational parameters need nbody');
   const mu = GM_SUN_AU3_PER_DAY2;
   const s0 = new Float64Array(6);
   orbitStateAtEpoch(el, s0, mu);
@@ -93,6 +121,7 @@ export function propagateOrbit(el: OrbitElements, opts: OrbitPropagationOptions)
     eph = planetaryEphemerisOver(Math.min(el.epochJdTDB, opts.toJdTDB), Math.max(el.epochJdTDB, opts.toJdTDB));
     steps = propagateTestBodies({
       epochJdTDB: el.epochJdTDB, states: s0,
+      params: nonGrav === null ? null : Float64Array.of(nonGrav[0], nonGrav[1], nonGrav[2], 0), // A/m 0: no radiation pressure
       forces: { planets: PLANETS, ephemeris: eph, relativity: opts.relativity },
     }, opts.toJdTDB, state).steps;
   } else {

@@ -115,7 +115,11 @@ describe('propagateOrbit', () => {
     const call = () => propagateOrbit(EL, { toJdTDB: 3_000_000.5, nbody: true, relativity: true, distances: false });
     expect(call).toThrow(EphemerisSpanError);
     expect(call).toThrow(RangeError);
-    expect(call).toThrow(/dates JD 2461200\.5–3000000\.5 lie outside the planetary ephemeris span/);
+    // Calendar dates of the Julian dates (proleptic Gregorian; Python's datetime.date, counting
+    // days from 2000-01-01 = JD 2451544.5): JD 2461200.5 = 2026-06-09, JD 3000000.5 = 3501-08-16.
+    expect(call).toThrow(/^dates 2026-06-09 to 3501-08-16 \(JD 2461200\.5–3000000\.5 TDB\) lie outside the planetary ephemeris span /);
+    const err = (() => { try { call(); } catch (e) { return e as EphemerisSpanError; } })()!;
+    expect([err.fromJdTDB, err.toJdTDB]).toEqual([2461200.5, 3000000.5]);
     expect(() => propagateOrbit(EL, { toJdTDB: NaN, nbody: true, relativity: false, distances: false }))
       .toThrow(EphemerisSpanError);
     expect(() => propagateOrbit(EL, { toJdTDB: NaN, nbody: false, relativity: false, distances: true })).toThrow(RangeError);
