@@ -11,6 +11,7 @@ import { DEG_PER_RAD, RAD_PER_DEG } from '../core/constants.js';
 import { Instant } from '../core/time.js';
 import { EphemerisSpanError, propagateOrbit } from '../core/propagateOrbit.js';
 import type { OrbitElements, OrbitPropagation } from '../core/propagateOrbit.js';
+import { withDefault } from './optionDefault.js';
 import { parseOutputFormat } from './optionParsers.js';
 import { bodyFromCatalogue, COMMAND_LINE_BODY, PropagateInputError, type BodyInfo } from './propagateBody.js';
 import { formatPropagation } from './propagateFormat.js';
@@ -177,7 +178,7 @@ export function registerPropagate(program: Command): void {
     .option('--no-relativity', 'leave out the Sun\'s 1PN term (only with --nbody)')
     .option('--nongrav <list>', 'comet non-gravitational parameters "A1=…,A2=…,A3=…" in au/day², water-ice law (only with --nbody)', parseNonGrav)
     .option('--distances', 'also print heliocentric and geocentric distances')
-    .option('--format <format>', "'text' or 'json'", parseOutputFormat, 'text')
+    .addOption(withDefault('--format <format>', 'text or json', 'text' as 'text' | 'json', 'text', parseOutputFormat))
     .action(async function (this: Command, designation: string | undefined, flags: RawPropagateFlags) {
       try {
         const text = await runPropagate({

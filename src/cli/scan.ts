@@ -23,6 +23,7 @@ import { fileSystemCause, OutputDirectoryError, OutputStage } from '../report/ou
 import type { ScanSummary } from '../report/types.js';
 import { inputErrorLine } from './inputErrorLine.js';
 import { loadCatalogue } from './loadCatalogue.js';
+import { withDefault } from './optionDefault.js';
 import {
   INPUT_FORMATS, parseColumnMapping, parseCsvKind, parseDetectorList, parseFiniteNumber, parseInputFormat,
   parseNonNegativeNumber, parseOutputFormat, parsePlanet, parsePositiveInteger,
@@ -172,12 +173,6 @@ interface RawScanFlags extends Omit<ScanOptions, 'files' | 'includeExterior' | '
   quiet?: boolean;
   top: number;
   progress: boolean;
-}
-
-/** An option whose help shows its default as written (`default: wayward-out`), not as JSON. */
-function withDefault<T>(flags: string, description: string, value: T, shown: string, parse?: (text: string) => T): Option {
-  const option = new Option(flags, description).default(value, shown);
-  return parse ? option.argParser(parse) : option;
 }
 
 export function registerScan(program: Command): void {

@@ -192,6 +192,17 @@ describe('scan: command-line habits', () => {
     expect(runCli(['scan', '--columns', 'e=a,e=b']).status).toBe(2);
   });
 
+  it('no command shows a default as JSON or a boolean flag with (default: false) in its help', () => {
+    for (const command of ['scan', 'propagate']) {
+      const help = runCli([command, '--help']).stdout.replace(/\s+/g, ' ');
+      expect(help, command).toContain('Options:');
+      expect(help, command).not.toMatch(/\(default: [["{]/);
+      expect(help, command).not.toMatch(/\(default: (false|true)\)/);
+      expect(help.match(/\(default:/g)?.length ?? 0, command).toBe(help.match(/\(default: [^)]*\)/g)?.length ?? 0);
+      expect(help, command).not.toMatch(/\(default: [^)]*\) \(default:/);
+    }
+  });
+
   it('help shows defaults as written, never as JSON, and lists the values of --input-format and --csv-kind', () => {
     const help = runCli(['scan', '--help']).stdout.replace(/\s+/g, ' ');
     expect(help).not.toMatch(/\(default: \[/);
