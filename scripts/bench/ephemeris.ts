@@ -14,12 +14,12 @@
 import { seededRandom, uniformArray } from '../../src/core/random.js';
 import { pathToFileURL } from 'node:url';
 import { performance } from 'node:perf_hooks';
-import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
-import { createEphemeris } from '../../src/core/ephemeris.js';
-import { DEFAULT_FIT_TOLERANCE_AU, DYNAMICS_FIT_TOLERANCE_AU } from '../../src/core/ephemerisCache.js';
-import type { CacheFillMethod } from '../../src/core/ephemerisCache.js';
-import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemerisBody.js';
-import { prefillParallel } from '../../src/core/ephemerisParallelFill.js';
+import { Vsop87Ephemeris } from '../../src/core/ephemeris/vsop87Ephemeris.js';
+import { createEphemeris } from '../../src/core/ephemeris/ephemeris.js';
+import { DEFAULT_FIT_TOLERANCE_AU, DYNAMICS_FIT_TOLERANCE_AU } from '../../src/core/ephemeris/ephemerisCache.js';
+import type { CacheFillMethod } from '../../src/core/ephemeris/ephemerisCache.js';
+import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemeris/ephemerisBody.js';
+import { prefillParallel } from '../../src/core/ephemeris/ephemerisParallelFill.js';
 import { availableParallelism } from 'node:os';
 import { J2000_JD } from '../../src/core/constants.js';
 import type { Ephemeris, EphemerisBody } from '../../src/core/types.js';

@@ -8,10 +8,10 @@
  * per span and shared by every body integrated over it.
  * Usage: npx tsx scripts/bench/integrator.ts [years]   (default 1000)
  */
-import { createEphemeris } from '../../src/core/ephemeris.js';
-import { PLANET_SYSTEM_BODIES } from '../../src/core/ephemerisBody.js';
-import { createTestBodyIntegrator } from '../../src/core/propagateTestBodies.js';
-import { semimajorElementsToState, stateToSemimajorElements } from '../../src/core/twoBody.js';
+import { createEphemeris } from '../../src/core/ephemeris/ephemeris.js';
+import { PLANET_SYSTEM_BODIES } from '../../src/core/ephemeris/ephemerisBody.js';
+import { createTestBodyIntegrator } from '../../src/core/propagate/propagateTestBodies.js';
+import { semimajorElementsToState, stateToSemimajorElements } from '../../src/core/orbit/twoBody.js';
 import { GM_SUN_AU3_PER_DAY2, J2000_JD, KM_PER_AU, PLANETS } from '../../src/core/constants.js';
 import type { Ephemeris } from '../../src/core/types.js';
 

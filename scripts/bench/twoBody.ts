@@ -8,9 +8,9 @@
 import { seededRandom, uniformArray } from '../../src/core/random.js';
 import { pathToFileURL } from 'node:url';
 import { performance } from 'node:perf_hooks';
-import { propagateTwoBody } from '../../src/core/universal.js';
-import { perihelionElementsToState } from '../../src/core/twoBody.js';
-import { solveKeplerElliptic } from '../../src/core/kepler.js';
+import { propagateTwoBody } from '../../src/core/orbit/universal.js';
+import { perihelionElementsToState } from '../../src/core/orbit/twoBody.js';
+import { solveKeplerElliptic } from '../../src/core/orbit/kepler.js';
 import { GM_SUN_AU3_PER_DAY2 } from '../../src/core/constants.js';
 
 const N_ORBITS = 1000;

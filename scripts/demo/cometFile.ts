@@ -4,7 +4,7 @@
  * designations of 2030–2032 ('P/' for periods under 200 years, else 'C/'), each with an
  * invented discoverer-style name.
  */
-import { calendarToJd, jdToCalendar } from '../../src/core/julian.js';
+import { calendarToJd, jdToCalendar } from '../../src/core/time/julian.js';
 import { formatCometExportLine } from '../../src/io/index.js';
 import { emptyOrbitRow } from '../../src/io/types.js';
 import { INVENTED_COMET_NAMES, pickCometClass, sampleNaturalComet } from './cometPopulation.js';

@@ -3,7 +3,7 @@
  * moved back by n·Δt and the other elements nudged by a few units in their last written
  * digits, as a second solution from an older export would differ.
  */
-import { jdToCalendar } from '../../src/core/julian.js';
+import { jdToCalendar } from '../../src/core/time/julian.js';
 import { meanMotionDegPerDay, roundAsteroidElements } from './orbitRows.js';
 import type { Random } from './random.js';
 import { normal } from './random.js';

@@ -5,7 +5,7 @@
  * (longer arcs → smaller U; brighter bodies → known longer, observed more); the numbers
  * are from memory and only need to look plausible.
  */
-import { jdToCalendar } from '../../src/core/julian.js';
+import { jdToCalendar } from '../../src/core/time/julian.js';
 import { halfMonthIndex } from './designations.js';
 import type { Random } from './random.js';
 import { rayleigh, uniform, uniformInt } from './random.js';

@@ -2,7 +2,7 @@
  * Fixed facts of the demo scenario: the common osculation epoch, the date the catalogue is
  * cut, the invented designation ranges, and the default seed and sizes.
  */
-import { calendarToJd } from '../../src/core/julian.js';
+import { calendarToJd } from '../../src/core/time/julian.js';
 
 /** Common osculation epoch of every orbit in the demo: 2032 May 10.0 TT. */
 export const DEMO_EPOCH = { year: 2032, month: 5, day: 10 } as const;

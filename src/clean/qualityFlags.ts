@@ -2,7 +2,7 @@
  * Quality flags of one row: caveats that do not reject it but travel with every candidate
  * it raises. See QUALITY_FLAGS in types.ts for their meaning, thresholds.ts for defaults.
  */
-import { calendarToJd } from '../core/julian.js';
+import { calendarToJd } from '../core/time/julian.js';
 import type { OrbitRow } from '../io/types.js';
 import type { QualityThresholds } from './thresholds.js';
 import { qualityBit } from './types.js';

@@ -8,9 +8,9 @@
  */
 import { Command, Option } from 'commander';
 import { DEG_PER_RAD, RAD_PER_DEG } from '../core/constants.js';
-import { Instant } from '../core/time.js';
-import { EphemerisSpanError, propagateOrbit } from '../core/propagateOrbit.js';
-import type { OrbitElements, OrbitPropagation } from '../core/propagateOrbit.js';
+import { Instant } from '../core/time/time.js';
+import { EphemerisSpanError, propagateOrbit } from '../core/propagate/propagateOrbit.js';
+import type { OrbitElements, OrbitPropagation } from '../core/propagate/propagateOrbit.js';
 import { withDefault } from './optionDefault.js';
 import { parseOutputFormat } from './optionParsers.js';
 import { bodyFromCatalogue, COMMAND_LINE_BODY, PropagateInputError, type BodyInfo } from './propagateBody.js';

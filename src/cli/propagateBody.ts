@@ -4,7 +4,7 @@
  * the elements given on the command line.
  */
 import { DEG_PER_RAD } from '../core/constants.js';
-import { Instant } from '../core/time.js';
+import { Instant } from '../core/time/time.js';
 import { bodyLabel, findBodies, nearMatches, type MatchKind } from '../clean/bodyLookup.js';
 import { poorOrbitFlags, qualityUnknown } from '../clean/poorOrbit.js';
 import { bodyName, KIND_COMET, qualityNames, type Catalogue, type QualityFlag } from '../clean/types.js';

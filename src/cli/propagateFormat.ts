@@ -6,7 +6,7 @@
  * JSON keys are plain names; units are never part of a key but stated beside the numbers in
  * a `units` object, and the frame in a `frame` field. Missing numbers are null in JSON.
  */
-import type { Instant } from '../core/time.js';
+import type { Instant } from '../core/time/time.js';
 import type { PropagateResult } from './propagate.js';
 
 const FRAME = 'heliocentric J2000 ecliptic';

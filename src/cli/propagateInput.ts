@@ -8,8 +8,8 @@
  * honoured; a bare number is a Julian date in TT. The dynamics convert to TDB.
  */
 import { InvalidArgumentError } from 'commander';
-import { Instant } from '../core/time.js';
-import { TimeFormatError } from '../core/isoTime.js';
+import { Instant } from '../core/time/time.js';
+import { TimeFormatError } from '../core/time/isoTime.js';
 
 /** Elements given on the command line or read from a catalogue. Angles in degrees. */
 export type ElementsSpec =

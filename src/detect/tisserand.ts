@@ -37,7 +37,7 @@
  */
 import { PLANET_MEAN_A_AU, PLANETS, planetGmAu3PerDay2, GM_SUN_AU3_PER_DAY2, DEG_PER_RAD } from '../core/constants.js';
 import type { PlanetName } from '../core/constants.js';
-import { tisserandParameter } from '../core/tisserand.js';
+import { tisserandParameter } from '../core/orbit/tisserand.js';
 import { KIND_COMET, qualityNames, type Catalogue } from '../clean/types.js';
 import { memberLowerTailFraction, memberUpperTailFraction } from './empiricalTail.js';
 import type { Candidate, Detector, DetectorOptions, DetectorResult, TisserandOptions } from './types.js';

@@ -2,7 +2,7 @@
  * Whether year, month and day name a day of the calendar: the check every date field of the
  * readers and the packed date form share, so that 2026-02-30 or 2026-04-31 is bad data
  * rather than silently the next month's 2nd or 1st (calendarToJd counts days on past a
- * month's end). The calendar is the one core/julian.ts counts in (Meeus, Astronomical
+ * month's end). The calendar is the one core/time/julian.ts counts in (Meeus, Astronomical
  * Algorithms, 2nd ed., ch. 7): Gregorian leap years (divisible by 4, centuries only when
  * divisible by 400) from 1583, Julian (every fourth year) before; common practice.
  */

@@ -5,7 +5,7 @@
  * fall at 0h (RangeError otherwise, as in the orbit export writer); trailing blanks are
  * trimmed.
  */
-import { jdToCalendar } from '../core/julian.js';
+import { jdToCalendar } from '../core/time/julian.js';
 import type { OrbitRow } from './types.js';
 import { fixedDecimal, fixedText } from './fixedField.js';
 import { packDesignation } from './packedDesignation.js';

@@ -6,7 +6,7 @@
  * form of the packed columns 1–12 ('1P', 'C/1995 O1'); the name is taken from columns
  * 103–158 ('Halley' from '1P/Halley', 'Hale-Bopp' from 'C/1995 O1 (Hale-Bopp)').
  */
-import { calendarToJd } from '../core/julian.js';
+import { calendarToJd } from '../core/time/julian.js';
 import { isCalendarDay } from './calendarDay.js';
 import { COMET_COLUMNS as C, COMET_ORBIT_TYPES } from './cometExportLayout.js';
 import { fieldText } from './fixedField.js';

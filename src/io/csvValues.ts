@@ -10,7 +10,7 @@
  * the 5-character packed date `K2669`. Calendar dates are taken in the file's time scale.
  */
 import { MJD_OFFSET } from '../core/constants.js';
-import { calendarToJd } from '../core/julian.js';
+import { calendarToJd } from '../core/time/julian.js';
 import { isCalendarDay } from './calendarDay.js';
 import { PackedFormError } from './errors.js';
 import { unpackEpochJd } from './packedEpoch.js';

@@ -6,7 +6,7 @@
  * A semimajor axis too large for its 11 columns is left blank (the reader derives it from
  * the mean daily motion), as real lines do for distant bodies.
  */
-import { jdToCalendar } from '../core/julian.js';
+import { jdToCalendar } from '../core/time/julian.js';
 import type { OrbitRow } from './types.js';
 import { fixedDecimal, fixedInteger, fixedText } from './fixedField.js';
 import { packDesignation } from './packedDesignation.js';

@@ -12,7 +12,7 @@
  * about a year.
  */
 import { DAYS_PER_JULIAN_YEAR } from '../core/constants.js';
-import { calendarToJd } from '../core/julian.js';
+import { calendarToJd } from '../core/time/julian.js';
 import { isCalendarDay } from './calendarDay.js';
 import { PackedFormError } from './errors.js';
 import { fieldText, isBlankField, parseDigits } from './fixedField.js';

@@ -4,9 +4,9 @@
  * digits of the year, month as one base-62 digit 1..9, A..C (10..12), day as one base-62
  * digit 1..9, A..V (10..31). `K2669` = 2026 June 9, `J949P` = 1994 Sept 25.
  * The date is at 0h of the time scale the file uses for epochs (TT); returned as a Julian
- * date through core/julian.ts (Meeus ch. 7).
+ * date through core/time/julian.ts (Meeus ch. 7).
  */
-import { calendarToJd, jdToCalendar, type CalendarDate } from '../core/julian.js';
+import { calendarToJd, jdToCalendar, type CalendarDate } from '../core/time/julian.js';
 import { base62Encode, base62Value } from './base62.js';
 import { daysInMonth } from './calendarDay.js';
 import { PackedFormError } from './errors.js';

@@ -4,7 +4,7 @@
  * oppositions, observations used and the uncertainty parameter U (or the letter written in
  * its place). Missing values are null in JSON and empty in CSV.
  */
-import { jdToCalendar } from '../core/julian.js';
+import { jdToCalendar } from '../core/time/julian.js';
 import type { Catalogue } from '../clean/types.js';
 
 export interface OrbitQuality {

@@ -16,7 +16,7 @@ import {
 import { PropagateInputError } from '../../src/cli/propagateBody.js';
 import { parseDate, parseElements, parseNonGrav } from '../../src/cli/propagateInput.js';
 import { GAUSS_K, GM_SUN_AU3_PER_DAY2, J2000_JD, KM_PER_AU } from '../../src/core/constants.js';
-import { Instant } from '../../src/core/time.js';
+import { Instant } from '../../src/core/time/time.js';
 import { ROOT, runCli } from './cliHarness.js';
 
 const CERES_LINE = '00001    3.34  0.15 K2669 274.41935   73.29420   80.24863   10.58803  0.0796923  0.21430445   2.7655526  0 MPO980521  7297 126 1801-2026 0.83 M-v 30k Veres      4000      (1) Ceres              20260103';

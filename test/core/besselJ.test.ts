@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { besselJSequence, besselMillerStart } from '../../src/core/besselJ.js';
+import { besselJSequence, besselMillerStart } from '../../src/core/series/besselJ.js';
 
 /**
  * J_n(x) from Bessel's integral, J_n(x) = (1/π) ∫_0^π cos(nθ − x sin θ) dθ (Abramowitz &

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chebyshevFit, chebyshevNode, chebyshevValue, chebyshevValue3 } from '../../src/core/chebyshev.js';
+import { chebyshevFit, chebyshevNode, chebyshevValue, chebyshevValue3 } from '../../src/core/series/chebyshev.js';
 
 /** Coefficients of the Chebyshev interpolant of f on [-1, 1] with n nodes. */
 function fit(f: (x: number) => number, n: number): Float64Array {

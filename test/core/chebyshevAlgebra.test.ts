@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { chebyshevFit, chebyshevNode, chebyshevValue } from '../../src/core/chebyshev.js';
+import { chebyshevFit, chebyshevNode, chebyshevValue } from '../../src/core/series/chebyshev.js';
 import {
   chebyshevDerivative, chebyshevFitMatrix, chebyshevNodeMatrix, chebyshevTimesLinear, matrixTimesVector,
-} from '../../src/core/chebyshevAlgebra.js';
+} from '../../src/core/series/chebyshevAlgebra.js';
 
 /** Coefficients of the n-node Chebyshev interpolant of f (chebyshev.ts, NR §5.8). */
 function fit(f: (x: number) => number, n: number): Float64Array {

@@ -2,10 +2,10 @@
 // (IAU SOFA algorithms); fixtures and the command that makes them: test/fixtures/erfa/README.md.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { earthRotationAngleRad, gmst06Rad } from '../../src/core/earthRotation.js';
-import { precessionMatrixP03 } from '../../src/core/precession.js';
-import { observerGeocentricState, EARTH_ROTATION_RAD_PER_S } from '../../src/core/observer.js';
-import { eclipticToEquatorialInPlace } from '../../src/core/frames.js';
+import { earthRotationAngleRad, gmst06Rad } from '../../src/core/frames/earthRotation.js';
+import { precessionMatrixP03 } from '../../src/core/frames/precession.js';
+import { observerGeocentricState, EARTH_ROTATION_RAD_PER_S } from '../../src/core/frames/observer.js';
+import { eclipticToEquatorialInPlace } from '../../src/core/frames/frames.js';
 import { wrapPi } from '../../src/core/math.js';
 import { ARCSEC_PER_RAD, KM_PER_AU } from '../../src/core/constants.js';
 

@@ -18,9 +18,9 @@ import { describe, expect, it } from 'vitest';
 import * as Astronomy from 'astronomy-engine';
 import { J2000_JD, KM_PER_AU, OBLIQUITY_J2000_RAD, PLANETS } from '../../src/core/constants.js';
 import type { PlanetName } from '../../src/core/constants.js';
-import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
-import { elpGeocentricMoonState } from '../../src/core/elpMoon.js';
-import { sunBarycentricState } from '../../src/core/ephemeris.js';
+import { Vsop87Ephemeris } from '../../src/core/ephemeris/vsop87Ephemeris.js';
+import { elpGeocentricMoonState } from '../../src/core/ephemeris/elpMoon.js';
+import { sunBarycentricState } from '../../src/core/ephemeris/ephemeris.js';
 import type { EphemerisBody } from '../../src/core/types.js';
 import { randomDates } from './ephemerisTestDates.js';
 

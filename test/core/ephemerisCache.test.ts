@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { KM_PER_AU } from '../../src/core/constants.js';
-import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
-import { CACHE_FILL_CHUNK, DEFAULT_CHEBYSHEV_LAYOUTS, EphemerisCache } from '../../src/core/ephemerisCache.js';
-import type { CacheFillMethod, CacheVelocityMode } from '../../src/core/ephemerisCache.js';
-import { createEphemeris, sunBarycentricState } from '../../src/core/ephemeris.js';
-import { EPHEMERIS_BODIES } from '../../src/core/ephemerisBody.js';
+import { Vsop87Ephemeris } from '../../src/core/ephemeris/vsop87Ephemeris.js';
+import { CACHE_FILL_CHUNK, DEFAULT_CHEBYSHEV_LAYOUTS, EphemerisCache } from '../../src/core/ephemeris/ephemerisCache.js';
+import type { CacheFillMethod, CacheVelocityMode } from '../../src/core/ephemeris/ephemerisCache.js';
+import { createEphemeris, sunBarycentricState } from '../../src/core/ephemeris/ephemeris.js';
+import { EPHEMERIS_BODIES } from '../../src/core/ephemeris/ephemerisBody.js';
 import type { Ephemeris, EphemerisBody } from '../../src/core/types.js';
 import { JD_1900, JD_2100, randomDates } from './ephemerisTestDates.js';
 

@@ -1,14 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { KM_PER_AU } from '../../src/core/constants.js';
-import { Vsop87Ephemeris, VSOP87_DEFAULT_END_JD_TDB, VSOP87_DEFAULT_START_JD_TDB } from '../../src/core/vsop87Ephemeris.js';
+import { Vsop87Ephemeris, VSOP87_DEFAULT_END_JD_TDB, VSOP87_DEFAULT_START_JD_TDB } from '../../src/core/ephemeris/vsop87Ephemeris.js';
 import {
   CACHE_FILL_CHUNK, DEFAULT_CHEBYSHEV_LAYOUTS, DEFAULT_FIT_TOLERANCE_AU, DYNAMICS_FIT_TOLERANCE_AU, EphemerisCache,
-} from '../../src/core/ephemerisCache.js';
-import type { CacheFillChoice, CacheFillMethod, CacheVelocityMode } from '../../src/core/ephemerisCache.js';
-import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemerisBody.js';
+} from '../../src/core/ephemeris/ephemerisCache.js';
+import type { CacheFillChoice, CacheFillMethod, CacheVelocityMode } from '../../src/core/ephemeris/ephemerisCache.js';
+import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemeris/ephemerisBody.js';
 import type { Ephemeris, EphemerisBody } from '../../src/core/types.js';
 import { randomDates } from './ephemerisTestDates.js';
-import { createEphemeris } from '../../src/core/ephemeris.js';
+import { createEphemeris } from '../../src/core/ephemeris/ephemeris.js';
 
 // Reference for every comparison here: the direct VSOP87B/ELP series (vsop87Ephemeris.ts),
 // itself checked against the published VSOP87 check values, astronomia and astronomy-engine

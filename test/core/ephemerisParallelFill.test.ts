@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { createEphemeris } from '../../src/core/ephemeris.js';
-import { assignBodies, prefillParallel } from '../../src/core/ephemerisParallelFill.js';
-import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemerisBody.js';
+import { createEphemeris } from '../../src/core/ephemeris/ephemeris.js';
+import { assignBodies, prefillParallel } from '../../src/core/ephemeris/ephemerisParallelFill.js';
+import { EPHEMERIS_BODIES, PLANET_SYSTEM_BODIES } from '../../src/core/ephemeris/ephemerisBody.js';
 import type { Ephemeris } from '../../src/core/types.js';
 import { randomDates } from './ephemerisTestDates.js';
 

@@ -13,11 +13,11 @@ import uranus from 'astronomia/data/vsop87Buranus';
 import neptune from 'astronomia/data/vsop87Bneptune';
 import { J2000_JD, KM_PER_AU, PLANETS } from '../../src/core/constants.js';
 import type { PlanetName } from '../../src/core/constants.js';
-import { DAYS_PER_JULIAN_MILLENNIUM, vsop87HelioState, vsop87Spherical } from '../../src/core/vsop87.js';
-import { vsop87Series } from '../../src/core/vsop87Series.js';
-import { elpGeocentricMoonState } from '../../src/core/elpMoon.js';
-import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
-import { EPHEMERIS_BODIES } from '../../src/core/ephemerisBody.js';
+import { DAYS_PER_JULIAN_MILLENNIUM, vsop87HelioState, vsop87Spherical } from '../../src/core/ephemeris/vsop87.js';
+import { vsop87Series } from '../../src/core/ephemeris/vsop87Series.js';
+import { elpGeocentricMoonState } from '../../src/core/ephemeris/elpMoon.js';
+import { Vsop87Ephemeris } from '../../src/core/ephemeris/vsop87Ephemeris.js';
+import { EPHEMERIS_BODIES } from '../../src/core/ephemeris/ephemerisBody.js';
 import { wrapTwoPi } from '../../src/core/math.js';
 import { randomDates } from './ephemerisTestDates.js';
 

@@ -7,8 +7,8 @@
 // the ratio of radiation to gravitational acceleration (Burns, Lamy & Soter 1979, Icarus 40, 1),
 // so a circular orbit with speed √(μ(1 − β)/r) stays circular with that period.
 import { describe, expect, it } from 'vitest';
-import { propagateTestBodies } from '../../src/core/propagateTestBodies.js';
-import { stateToSemimajorElements } from '../../src/core/twoBody.js';
+import { propagateTestBodies } from '../../src/core/propagate/propagateTestBodies.js';
+import { stateToSemimajorElements } from '../../src/core/orbit/twoBody.js';
 import { AU_PER_DAY2_PER_M_PER_S2, radiationPressureMPerS2 } from '../../src/core/forces/radiationPressure.js';
 import { GM_SUN_AU3_PER_DAY2, KM_PER_AU } from '../../src/core/constants.js';
 

@@ -4,7 +4,7 @@ import fc from 'fast-check';
 import {
   eclipticStatesToEquatorialInPlace, eclipticToEquatorialInPlace, equatorialStatesToEclipticInPlace,
   equatorialToEclipticInPlace,
-} from '../../src/core/frames.js';
+} from '../../src/core/frames/frames.js';
 import { ARCSEC_PER_RAD, KM_PER_AU } from '../../src/core/constants.js';
 
 describe('ecliptic ↔ equatorial (J2000, ε0 = 84381.406″)', () => {

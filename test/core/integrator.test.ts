@@ -5,10 +5,10 @@
 // advanced by n·Δt, the core's elements → state conversion; Danby 1988 §6.3: no integration);
 // time reversibility of Newtonian motion (common practice).
 import { describe, expect, it } from 'vitest';
-import { B_TO_G, G_TO_B, RADAU_SPACINGS } from '../../src/core/gaussRadauSpacings.js';
-import { GaussRadauIntegrator, IntegrationError, type SecondOrderSystem } from '../../src/core/gaussRadau.js';
-import { createTestBodyIntegrator, propagateTestBodies } from '../../src/core/propagateTestBodies.js';
-import { semimajorElementsToState } from '../../src/core/twoBody.js';
+import { B_TO_G, G_TO_B, RADAU_SPACINGS } from '../../src/core/integrate/gaussRadauSpacings.js';
+import { GaussRadauIntegrator, IntegrationError, type SecondOrderSystem } from '../../src/core/integrate/gaussRadau.js';
+import { createTestBodyIntegrator, propagateTestBodies } from '../../src/core/propagate/propagateTestBodies.js';
+import { semimajorElementsToState } from '../../src/core/orbit/twoBody.js';
 import { GM_SUN_AU3_PER_DAY2, KM_PER_AU } from '../../src/core/constants.js';
 import { CircularEphemeris } from './helpers/circularEphemeris.js';
 import { rk4Propagate } from './helpers/rk4Reference.js';

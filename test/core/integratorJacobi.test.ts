@@ -4,8 +4,8 @@
 // inertial barycentric coordinates C = 2(μ1/r1 + μ2/r2) + 2 n (x v_y − y v_x) − v², from the
 // rotating-frame form eq. 3.21 with the frame's angular velocity n — equation number from memory).
 import { describe, expect, it } from 'vitest';
-import { createTestBodyIntegrator } from '../../src/core/propagateTestBodies.js';
-import { semimajorElementsToState } from '../../src/core/twoBody.js';
+import { createTestBodyIntegrator } from '../../src/core/propagate/propagateTestBodies.js';
+import { semimajorElementsToState } from '../../src/core/orbit/twoBody.js';
 import { GM_SUN_AU3_PER_DAY2, planetGmAu3PerDay2 } from '../../src/core/constants.js';
 import { CircularEphemeris } from './helpers/circularEphemeris.js';
 

@@ -5,8 +5,8 @@
 // β = γ = 1). Mercury's mean a and e: Standish & Williams (JPL table, constants.ts).
 // Mercury is integrated as a test body of the Sun alone, with and without the 1PN term.
 import { describe, expect, it } from 'vitest';
-import { createTestBodyIntegrator } from '../../src/core/propagateTestBodies.js';
-import { semimajorElementsToState, stateToSemimajorElements } from '../../src/core/twoBody.js';
+import { createTestBodyIntegrator } from '../../src/core/propagate/propagateTestBodies.js';
+import { semimajorElementsToState, stateToSemimajorElements } from '../../src/core/orbit/twoBody.js';
 import {
   ARCSEC_PER_RAD, C_AU_PER_DAY, GM_SUN_AU3_PER_DAY2, PLANET_MEAN_A_AU, PLANET_MEAN_E, RAD_PER_DEG,
 } from '../../src/core/constants.js';

@@ -1,7 +1,7 @@
 // Planets integrated as test bodies in the field of the Sun, its 1PN term and the other
 // planets from the core's VSOP87 ephemeris, against VSOP87 itself over a century.
 // Outside check: VSOP87B (Bretagnon & Francou 1988, A&A 202, 309), an analytical theory fitted
-// to the numerical integration DE200; the core's ephemeris evaluates it (src/core/vsop87.ts).
+// to the numerical integration DE200; the core's ephemeris evaluates it (src/core/ephemeris/vsop87.ts).
 //
 // What is compared, and the expected size. The theory is not the solution of our equations:
 // it is truncated (its authors quote 1″ over four millennia for the inner planets, so errors
@@ -17,9 +17,9 @@
 //     what is asserted, with the post-fit worst residual printed in km. Measured: Mars 23 km,
 //     the Earth–Moon barycentre 80 km (its series adds a lunar theory's offset to the Earth's).
 import { describe, expect, it } from 'vitest';
-import { createEphemeris } from '../../src/core/ephemeris.js';
-import { Vsop87Ephemeris } from '../../src/core/vsop87Ephemeris.js';
-import { createTestBodyIntegrator } from '../../src/core/propagateTestBodies.js';
+import { createEphemeris } from '../../src/core/ephemeris/ephemeris.js';
+import { Vsop87Ephemeris } from '../../src/core/ephemeris/vsop87Ephemeris.js';
+import { createTestBodyIntegrator } from '../../src/core/propagate/propagateTestBodies.js';
 import { GM_SUN_AU3_PER_DAY2, KM_PER_AU, PLANETS, planetGmAu3PerDay2, type PlanetName } from '../../src/core/constants.js';
 import type { EphemerisBody } from '../../src/core/types.js';
 

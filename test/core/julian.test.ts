@@ -4,9 +4,9 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { julian } from 'astronomia';
-import { calendarToJd, jdToCalendar } from '../../src/core/julian.js';
-import { jdToMjd, mjdToJd } from '../../src/core/readerEpochs.js';
-import { daysInMonth } from '../../src/core/isoTime.js';
+import { calendarToJd, jdToCalendar } from '../../src/core/time/julian.js';
+import { jdToMjd, mjdToJd } from '../../src/core/time/readerEpochs.js';
+import { daysInMonth } from '../../src/core/time/isoTime.js';
 
 // Meeus p. 62 table, plus examples 7.a and 7.b. From memory of the book.
 const MEEUS_TABLE: ReadonlyArray<readonly [number, number, number, number]> = [

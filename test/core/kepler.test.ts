@@ -4,14 +4,14 @@
 // (common practice: the residual of the solved equation).
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { KeplerConvergenceError, solveBarker, solveKeplerElliptic, solveKeplerHyperbolic } from '../../src/core/kepler.js';
+import { KeplerConvergenceError, solveBarker, solveKeplerElliptic, solveKeplerHyperbolic } from '../../src/core/orbit/kepler.js';
 import {
   eccentricFromTrue, hyperbolicFromTrue, meanAnomalyFromPerihelionTime, meanFromEccentric, meanFromHyperbolic,
   meanFromTrue, meanMotionRadPerDay, perihelionTimeFromMeanAnomaly, perihelionTimeOffsetDays,
   trueAnomalyFromPerihelionTime, trueFromEccentric, trueFromHyperbolic, trueFromMean,
-} from '../../src/core/anomaly.js';
+} from '../../src/core/orbit/anomaly.js';
 import { GAUSS_K } from '../../src/core/constants.js';
-import { stumpffInto } from '../../src/core/stumpff.js';
+import { stumpffInto } from '../../src/core/orbit/stumpff.js';
 import { wrapPi } from '../../src/core/math.js';
 import { all, create } from 'mathjs';
 

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { chebyshevValue } from '../../src/core/chebyshev.js';
-import { planPoissonChebyshev, poissonChunkCoefficients } from '../../src/core/poissonChebyshev.js';
-import type { PoissonChebyshevPlan } from '../../src/core/poissonChebyshev.js';
-import type { PoissonSeries } from '../../src/core/poissonSeries.js';
+import { chebyshevValue } from '../../src/core/series/chebyshev.js';
+import { planPoissonChebyshev, poissonChunkCoefficients } from '../../src/core/series/poissonChebyshev.js';
+import type { PoissonChebyshevPlan } from '../../src/core/series/poissonChebyshev.js';
+import type { PoissonSeries } from '../../src/core/series/poissonSeries.js';
 import { seededRandom } from './ephemerisTestDates.js';
 
 /**

@@ -1,4 +1,4 @@
-// Core propagation of one body (src/core/propagateOrbit.ts): the parts the CLI test
+// Core propagation of one body (src/core/propagate/propagateOrbit.ts): the parts the CLI test
 // (test/cli/propagate.test.ts) does not reach directly.
 import { describe, expect, it } from 'vitest';
 import * as Astronomy from 'astronomy-engine';
@@ -7,10 +7,10 @@ import vsop87Bearth from 'astronomia/data/vsop87Bearth';
 import { GM_SUN_AU3_PER_DAY2, J2000_JD, KM_PER_AU, PLANETS } from '../../src/core/constants.js';
 import {
   EphemerisSpanError, orbitStateAtEpoch, planetaryEphemerisOver, propagateOrbit,
-} from '../../src/core/propagateOrbit.js';
-import { propagateTestBodies } from '../../src/core/propagateTestBodies.js';
+} from '../../src/core/propagate/propagateOrbit.js';
+import { propagateTestBodies } from '../../src/core/propagate/propagateTestBodies.js';
 import { rk4Propagate } from './helpers/rk4Reference.js';
-import type { OrbitElements } from '../../src/core/propagateOrbit.js';
+import type { OrbitElements } from '../../src/core/propagate/propagateOrbit.js';
 
 const DEG = Math.PI / 180;
 // Invented elements of a main-belt orbit (synthetic test).

@@ -3,12 +3,12 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { taiMinusUtcSeconds } from '../../src/core/leapSeconds.js';
-import { tdbMinusTtSeconds, TT_MINUS_TAI_S } from '../../src/core/timeScales.js';
-import { Instant } from '../../src/core/time.js';
-import { calendarDayToJdTT, isoToJdTT } from '../../src/core/readerEpochs.js';
-import { parseIsoDateTime, TimeFormatError } from '../../src/core/isoTime.js';
-import { calendarToJd } from '../../src/core/julian.js';
+import { taiMinusUtcSeconds } from '../../src/core/time/leapSeconds.js';
+import { tdbMinusTtSeconds, TT_MINUS_TAI_S } from '../../src/core/time/timeScales.js';
+import { Instant } from '../../src/core/time/time.js';
+import { calendarDayToJdTT, isoToJdTT } from '../../src/core/time/readerEpochs.js';
+import { parseIsoDateTime, TimeFormatError } from '../../src/core/time/isoTime.js';
+import { calendarToJd } from '../../src/core/time/julian.js';
 import { MJD_OFFSET } from '../../src/core/constants.js';
 
 const fixture = (name: string) => JSON.parse(readFileSync(new URL(`../fixtures/erfa/${name}`, import.meta.url), 'utf8'));

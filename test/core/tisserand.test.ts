@@ -4,7 +4,7 @@
 // (test/fixtures/comet-export/, provenance there) with the project's line parser.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { tisserandParameter } from '../../src/core/tisserand.js';
+import { tisserandParameter } from '../../src/core/orbit/tisserand.js';
 import { PLANET_MEAN_A_AU, RAD_PER_DEG } from '../../src/core/constants.js';
 import { emptyOrbitRow, parseCometExportLine } from '../../src/io/index.js';
 import { readFixtureText } from '../io/fixtureCases.js';

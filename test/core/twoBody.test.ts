@@ -6,12 +6,12 @@
 // equation vs universal variables), and conservation of energy and angular momentum.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { propagateTwoBody } from '../../src/core/universal.js';
-import { perihelionElementsToState, semimajorElementsToState, stateFromPerihelion } from '../../src/core/twoBody.js';
+import { propagateTwoBody } from '../../src/core/orbit/universal.js';
+import { perihelionElementsToState, semimajorElementsToState, stateFromPerihelion } from '../../src/core/orbit/twoBody.js';
 import {
   perihelionFromState, semimajorFromState, stateToPerihelionElements, stateToSemimajorElements,
-} from '../../src/core/stateToElements.js';
-import { meanMotionRadPerDay } from '../../src/core/anomaly.js';
+} from '../../src/core/orbit/stateToElements.js';
+import { meanMotionRadPerDay } from '../../src/core/orbit/anomaly.js';
 import { GM_SUN_AU3_PER_DAY2, KM_PER_AU } from '../../src/core/constants.js';
 
 const DEG = Math.PI / 180;

@@ -2,8 +2,8 @@
 // test/fixtures/scipy/README.md): elements → state, and state → elements.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { perihelionElementsToState } from '../../src/core/twoBody.js';
-import { stateToPerihelionElements } from '../../src/core/stateToElements.js';
+import { perihelionElementsToState } from '../../src/core/orbit/twoBody.js';
+import { stateToPerihelionElements } from '../../src/core/orbit/stateToElements.js';
 import { KM_PER_AU, RAD_PER_DEG } from '../../src/core/constants.js';
 import { wrapPi } from '../../src/core/math.js';
 

@@ -4,8 +4,8 @@
 // The orbit is invented (a comet-like e = 0.6 orbit through perihelion, with Jupiter and Earth
 // on circular test orbits, 1PN, non-gravitational and radiation-pressure terms all on).
 import { describe, expect, it } from 'vitest';
-import { createTestBodyIntegrator, propagateTestBodies } from '../../src/core/propagateTestBodies.js';
-import { semimajorElementsToState } from '../../src/core/twoBody.js';
+import { createTestBodyIntegrator, propagateTestBodies } from '../../src/core/propagate/propagateTestBodies.js';
+import { semimajorElementsToState } from '../../src/core/orbit/twoBody.js';
 import { GM_SUN_AU3_PER_DAY2 } from '../../src/core/constants.js';
 import { CircularEphemeris } from './helpers/circularEphemeris.js';
 

@@ -22,7 +22,7 @@
  */
 import type { Ephemeris, EphemerisBody } from '../types.js';
 import { C_AU_PER_DAY, GM_SUN_AU3_PER_DAY2, planetGmAu3PerDay2, type PlanetName } from '../constants.js';
-import type { SecondOrderSystem } from '../gaussRadau.js';
+import type { SecondOrderSystem } from '../integrate/gaussRadau.js';
 import { addPointMassAcceleration } from './gravity.js';
 import { addSchwarzschildAcceleration } from './relativity.js';
 import { addNonGravAcceleration, NONGRAV_SCRATCH } from './nonGrav.js';

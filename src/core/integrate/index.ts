@@ -1,0 +1,2 @@
+export * from './gaussRadauSpacings.js';
+export * from './gaussRadau.js';

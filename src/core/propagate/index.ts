@@ -1,0 +1,2 @@
+export * from './propagateTestBodies.js';
+export * from './propagateOrbit.js';
