@@ -31,9 +31,10 @@ export const COORBITAL_NOT_SCREENED = {
 } as const;
 export type CoorbitalNotScreened = keyof typeof COORBITAL_NOT_SCREENED;
 
-/** Mass of the planet system over the Sun's. */
+/** μ = m_P/(M_sun + m_P) of the restricted three-body problem (Murray & Dermott 1999, §3.2). */
 export function planetMassRatio(planet: PlanetName): number {
-  return planetGmAu3PerDay2(planet) / GM_SUN_AU3_PER_DAY2;
+  const gm = planetGmAu3PerDay2(planet);
+  return gm / (GM_SUN_AU3_PER_DAY2 + gm);
 }
 
 /** Default relative half-width of a planet's 1:1 zone (file comment). */
