@@ -16,7 +16,7 @@
  * small against the zone.
  */
 import { GM_SUN_AU3_PER_DAY2, PLANET_MEAN_A_AU, SECONDS_PER_DAY, planetGmAu3PerDay2, type PlanetName } from '../core/constants.js';
-import { meanLongitudeRad, planetOrbitAtEpoch, resonantAngleRad, shapeRelativeToPlane, type PlanetOrbitAtEpoch } from '../core/coorbital/planetPlane.js';
+import { meanLongitudeFromElementsRad, phiFromLongitudesRad, planetOrbitAtEpoch, shapeRelativeToPlane, type PlanetOrbitAtEpoch } from '../core/coorbital/planetPlane.js';
 import type { AveragedOrbitShape } from '../core/coorbital/types.js';
 import type { Ephemeris } from '../core/types.js';
 import { tdbMinusTtSeconds } from '../core/time/timeScales.js';
@@ -48,7 +48,7 @@ export interface ZoneEntry {
   planet: PlanetName;
   epochJdTDB: number;
   x: number; // (a − aP)/aP with the planet's osculating aP at the epoch
-  phiRad: number; // λ − λ_P in [−π, π)
+  phiRad: number; // λ − λ_P in (−π, π]
   shape: AveragedOrbitShape; // e, i, ω relative to the planet's orbital plane
   planetAAu: number;
 }
@@ -100,7 +100,7 @@ export function screenCoorbitalZone(
     entries.push({
       index: k, planet, epochJdTDB,
       x: cat.a[k] / orbit.aAu - 1,
-      phiRad: resonantAngleRad(meanLongitudeRad(cat.node[k], cat.peri[k], cat.meanAnomaly[k]), orbit.meanLongitudeRad),
+      phiRad: phiFromLongitudesRad(meanLongitudeFromElementsRad(cat.node[k], cat.peri[k], cat.meanAnomaly[k]), orbit.meanLongitudeRad),
       shape: shapeRelativeToPlane(cat.e[k], cat.i[k], cat.node[k], cat.peri[k], orbit.normal),
       planetAAu: orbit.aAu,
     });

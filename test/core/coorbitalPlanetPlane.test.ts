@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEG_PER_RAD, RAD_PER_DEG } from '../../src/core/constants.js';
-import { meanLongitudeRad, orbitNormal, planetOrbitAtEpoch, resonantAngleRad, shapeRelativeToPlane } from '../../src/core/coorbital/planetPlane.js';
+import { meanLongitudeFromElementsRad, orbitNormal, phiFromLongitudesRad, planetOrbitAtEpoch, shapeRelativeToPlane } from '../../src/core/coorbital/planetPlane.js';
 import { Vsop87Ephemeris } from '../../src/core/ephemeris/vsop87Ephemeris.js';
 
 const J2000 = 2_451_545.0;
@@ -45,8 +45,9 @@ describe('a body seen from a planet\'s orbital plane', () => {
   });
 
   it('mean longitude and resonant angle wrap as stated', () => {
-    expect(meanLongitudeRad(3, 3, 3)).toBeCloseTo(9 - 2 * Math.PI, 14);
-    expect(resonantAngleRad(0.1, 2 * Math.PI - 0.1)).toBeCloseTo(0.2, 14);
-    expect(resonantAngleRad(Math.PI, 0)).toBeCloseTo(-Math.PI, 14);
+    expect(meanLongitudeFromElementsRad(3, 3, 3)).toBeCloseTo(9 - 2 * Math.PI, 14);
+    expect(phiFromLongitudesRad(0.1, 2 * Math.PI - 0.1)).toBeCloseTo(0.2, 14);
+    expect(phiFromLongitudesRad(Math.PI, 0)).toBe(Math.PI); // (−π, π]: +π, not −π
+    expect(phiFromLongitudesRad(0, Math.PI)).toBe(Math.PI);
   });
 });

@@ -26,7 +26,7 @@ export interface PlanetOrbitAtEpoch {
 const EL = new Float64Array(6);
 
 /** Mean longitude Ω + ω + M in [0, 2π) (Murray & Dermott 1999, eq. 2.86; common practice). */
-export function meanLongitudeRad(nodeRad: number, periRad: number, meanAnomalyRad: number): number {
+export function meanLongitudeFromElementsRad(nodeRad: number, periRad: number, meanAnomalyRad: number): number {
   return wrapTwoPi(nodeRad + periRad + meanAnomalyRad);
 }
 
@@ -39,7 +39,7 @@ export function orbitNormal(iRad: number, nodeRad: number): [number, number, num
 /** The planet's orbit at the epoch of `state` (heliocentric J2000 ecliptic, au, au/day). */
 export function planetOrbitAtEpoch(planet: PlanetName, state: Float64Array): PlanetOrbitAtEpoch {
   stateToSemimajorElements(state, GM_SUN_AU3_PER_DAY2 + planetGmAu3PerDay2(planet), EL);
-  return { aAu: EL[0], meanLongitudeRad: meanLongitudeRad(EL[3], EL[4], EL[5]), normal: orbitNormal(EL[2], EL[3]) };
+  return { aAu: EL[0], meanLongitudeRad: meanLongitudeFromElementsRad(EL[3], EL[4], EL[5]), normal: orbitNormal(EL[2], EL[3]) };
 }
 
 /** Unit vector to perihelion of an orbit (i, Ω, ω) in the ecliptic frame (M&D eq. 2.122, first column). */
@@ -85,7 +85,7 @@ export function shapeRelativeToPlane(
   return { e, iRad: iRel, periRad: periRel };
 }
 
-/** φ = λ − λ_P wrapped to [−π, π) (math.ts wrapPi). */
-export function resonantAngleRad(bodyMeanLongitudeRad: number, planetMeanLongitudeRad: number): number {
-  return wrapPi(bodyMeanLongitudeRad - planetMeanLongitudeRad);
+/** φ = λ − λ_P wrapped to (−π, π] (types.ts). */
+export function phiFromLongitudesRad(bodyMeanLongitudeRad: number, planetMeanLongitudeRad: number): number {
+  return -wrapPi(planetMeanLongitudeRad - bodyMeanLongitudeRad);
 }
