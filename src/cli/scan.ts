@@ -10,6 +10,7 @@ import { PLANETS, type PlanetName } from '../core/constants.js';
 import type { Progress } from '../core/progress.js';
 import { DETECTORS, detectorById } from '../detect/registry.js';
 import { TISSERAND_DEFAULTS } from '../detect/tisserand.js';
+import { COORBITAL_DEFAULTS, type CoorbitalOptions } from '../detect/coorbitalOptions.js';
 import type { Candidate, DetectorOptions } from '../detect/types.js';
 import type { CsvKindChoice } from '../io/bodyKind.js';
 import type { InputFormat } from '../io/types.js';
@@ -43,6 +44,10 @@ export interface ScanOptions {
   inputFormat?: InputFormat;
   columns?: Record<string, string>;
   csvKind?: CsvKindChoice; // CSV rows: by designation pattern ('auto', default) or all one kind
+  coorbitalPlanets?: PlanetName[]; // default: COORBITAL_DEFAULTS.planets
+  coorbitalYears?: number; // N-body window ± years
+  coorbitalBudget?: number; // N-body budget, CPU-seconds (bodies at the nominal cost)
+  threads?: number; // worker threads for N-body work
   reproducible: boolean; // leave timings and memory out of summary.json
 }
 
@@ -136,6 +141,13 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
       margin: opts.tisserandMargin,
       includeExterior: opts.includeExterior,
     },
+    coorbital: {
+      ...COORBITAL_DEFAULTS,
+      planets: opts.coorbitalPlanets ?? COORBITAL_DEFAULTS.planets,
+      windowYears: opts.coorbitalYears ?? COORBITAL_DEFAULTS.windowYears,
+      budgetCpuSeconds: opts.coorbitalBudget ?? COORBITAL_DEFAULTS.budgetCpuSeconds,
+      threads: opts.threads ?? COORBITAL_DEFAULTS.threads,
+    },
   };
   const { runs, candidates } = await runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, progress);
   const ranked = rankInPlace(candidates, opts.detectors);
@@ -146,7 +158,8 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
   await writeRejectsCsv(stage.path('rejects.csv'), loaded.rejects);
   const options = {
     detectors: opts.detectors, planet: opts.planet,
-    tisserand: detOpts.tisserand, inputFormat: opts.inputFormat ?? 'auto', columns: opts.columns ?? {},
+    tisserand: detOpts.tisserand, coorbital: coorbitalOptionsRecord(detOpts.coorbital),
+    inputFormat: opts.inputFormat ?? 'auto', columns: opts.columns ?? {},
     csvKind: opts.csvKind ?? 'auto',
     validity: DEFAULT_VALIDITY, quality: DEFAULT_QUALITY,
   };
@@ -163,6 +176,12 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
     : buildSummary({ ...base, timing, peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024) });
   await writeFileAtomic(stage.path('summary.json'), JSON.stringify(summary, null, 2) + '\n');
   return { summary, ranked, errors: loaded.errors.map(inputErrorLine), outDir: opts.out };
+}
+
+/** The co-orbital options as summary.json records them: not the thread count, which changes no output. */
+function coorbitalOptionsRecord(o: CoorbitalOptions): Omit<CoorbitalOptions, 'threads'> {
+  const { threads: _threads, ...rest } = o;
+  return rest;
 }
 
 /** What commander hands the action: the scan options plus the ones only the CLI uses. */

@@ -16,6 +16,7 @@
 import type { PlanetName } from '../core/constants.js';
 import type { Progress } from '../core/progress.js';
 import type { Catalogue } from '../clean/types.js';
+import type { CoorbitalOptions } from './coorbitalOptions.js';
 
 /** One body raised by one detector. */
 export interface Candidate {
@@ -63,6 +64,7 @@ export interface TisserandOptions {
 /** Options for every detector, one block per detector. */
 export interface DetectorOptions {
   tisserand: TisserandOptions;
+  coorbital: CoorbitalOptions;
 }
 
 export interface Detector {
