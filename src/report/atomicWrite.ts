@@ -11,8 +11,8 @@ function tempPath(target: string): string {
   return `${target}.tmp-${process.pid}`;
 }
 
-/** Write a whole file atomically. */
-export async function writeFileAtomic(target: string, data: string): Promise<void> {
+/** Write a whole file atomically: text (written as UTF-8) or bytes. */
+export async function writeFileAtomic(target: string, data: string | Uint8Array): Promise<void> {
   const tmp = tempPath(target);
   try {
     await fs.writeFile(tmp, data);

@@ -11,3 +11,4 @@ export * from './textTable.js';
 export * from './candidateCells.js';
 export * from './reportMarkdown.js';
 export * from './orbitQuality.js';
+export * from './plots/index.js';

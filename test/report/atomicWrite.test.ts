@@ -44,4 +44,13 @@ describe('atomic output files', () => {
     expect(readdirSync(dir)).toEqual(['x.json']);
     expect(readFileSync(join(dir, 'x.json'), 'utf8')).toBe('{}\n');
   });
+
+  it('writes bytes as given (binary data, not text)', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'wayward-atomic-'));
+    // Bytes that are not valid UTF-8 (0xff, a lone 0x80): a text round trip would change them.
+    const bytes = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0xff, 0x00, 0x80, 0x0a]);
+    await writeFileAtomic(join(dir, 'x.png'), bytes);
+    expect(readFileSync(join(dir, 'x.png')).equals(bytes)).toBe(true);
+    expect(readdirSync(dir)).toEqual(['x.png']);
+  });
 });
