@@ -47,6 +47,15 @@ describe('tadpoles', () => {
       }
     });
 
+    it(`at the bottom of the well (x0 = 0, φ0 = ±60°) the period is the linear one for ${planet.name} (Murray & Dermott 1999 ch. 3, from memory)`, () => {
+      const linearYears = planet.periodDays / Math.sqrt((27 * planet.mu) / 4) / DAYS_PER_YEAR;
+      for (const phi0 of [60, -60]) {
+        const p = predict(CIRCULAR, 0, phi0, planet);
+        expect(Math.abs(p.periodYears / linearYears - 1)).toBeLessThan(1e-4); // O(h²) curvature
+        expect(p.separatrixMargin).toBeCloseTo(1, 9);
+      }
+    });
+
     it(`largest tadpole half-width is √(8μ/3) for ${planet.name} (Murray & Dermott 1999 ch. 3, from memory)`, () => {
       const halfWidth = Math.sqrt((8 * planet.mu) / 3);
       for (const [phi0, state] of [[60, 'tadpole-L4'], [-60, 'tadpole-L5']] as const) {
@@ -161,6 +170,17 @@ describe('compound and passing orbits', () => {
     // below both peaks: quasi-satellite; above both: passing
     expect(predict(shape, Math.sqrt((8 / 3) * EARTH.mu * (Math.min(vUp, vDown) - 0.1 - v0)), 0).state).toBe('quasi-satellite');
     expect(predict(shape, Math.sqrt((8 / 3) * EARTH.mu * (Math.max(vUp, vDown) + 0.1 - v0)), 0).state).toBe('passing');
+  });
+
+  it('a level above the lower barrier peak but below L3 gives compound (quasi-satellite + tadpole), on the side of that peak', () => {
+    // e = 0.2, i = 40°: barrier peaks 1.215 and 1.555 around V(0) = 1.079, L3 maximum 1.383; ω → 180° − ω swaps the peaks
+    for (const [periDeg, side] of [[60, 'tadpole-L4'], [120, 'tadpole-L5']] as const) {
+      const p = predict({ e: 0.2, iRad: 40 * DEG, periRad: periDeg * DEG }, Math.sqrt((8 / 3) * EARTH.mu * (1.3 - 1.079)), 0);
+      expect(p.state).toBe('compound');
+      expect(p.compoundWith).toBe(side);
+      expect(p.phiMinDeg).toBeLessThan(0);
+      expect(p.phiMaxDeg).toBeGreaterThan(0);
+    }
   });
 
   it('a passing orbit far from the planet circulates with the synodic period (2/3) P/|x| (common practice)', () => {

@@ -9,7 +9,12 @@
  * ends of the libration integral are removed by φ = φlo + (φhi − φlo)(1 − cos t)/2, t ∈ [0, π]:
  * the integrand in t is then smooth and even about both ends, so the midpoint rule in t
  * converges fast (common practice). Checked against the small-amplitude tadpole period
- * 2π/(n_P √(27μ/4)) (Murray & Dermott 1999 ch. 3) in test/core/coorbitalPeriod.test.ts.
+ * 2π/(n_P √(27μ/4)) (Murray & Dermott 1999 ch. 3, from memory) in
+ * test/core/coorbitalPrediction.test.ts.
+ *
+ * At the bottom of a well, where L − V is lost in rounding, the linearised motion is used:
+ * d²φ/dt² = −3 μ n_P² V''(φc) (φ − φc), so T = P / √(3 μ V'') (derived from eqs. 2–3 of the
+ * design note; at L4, V'' = 9/4 gives the tadpole limit above).
  */
 import { DAYS_PER_JULIAN_YEAR } from '../constants.js';
 import { TWO_PI } from '../math.js';
@@ -59,6 +64,22 @@ export function circulationPeriodYears(values: Float64Array, n: number, level: n
   }
   const integralRad = ((TWO_PI / n) * sum) / Math.sqrt((8 / 3) * mu);
   return integralRad / (1.5 * meanMotionRadPerDay(planetPeriodDays)) / DAYS_PER_JULIAN_YEAR;
+}
+
+/** Below this L − V_min (V is of order 1) the linearised period is used: rounding would dominate. */
+export const LINEAR_LIMIT_DEPTH = 1e-9;
+
+/**
+ * Small-amplitude period in Julian years at a minimum of V, T = P/√(3 μ V''), with V'' by the
+ * central difference of the interpolated values over one grid step (error O(h²), ~1e-5 relative).
+ */
+export function smallAmplitudePeriodYears(values: Float64Array, n: number, centreRad: number, mu: number, planetPeriodDays: number): number {
+  checkPlanet(mu, planetPeriodDays);
+  const h = TWO_PI / n;
+  const v0 = interpolatePeriodic(values, n, centreRad);
+  const curvature = (interpolatePeriodic(values, n, centreRad + h) - 2 * v0 + interpolatePeriodic(values, n, centreRad - h)) / (h * h);
+  if (!(curvature > 0)) return NaN;
+  return planetPeriodDays / Math.sqrt(3 * mu * curvature) / DAYS_PER_JULIAN_YEAR;
 }
 
 function meanMotionRadPerDay(periodDays: number): number {

@@ -15,7 +15,7 @@
  *   L4 and L5 → horseshoe;  the quasi-satellite well with others → compound.
  * Features of V narrower than one grid step (0.5° by default) are not resolved.
  */
-import { TWO_PI, wrapPi } from '../math.js';
+import { TWO_PI, wrapTwoPi } from '../math.js';
 import type { CoorbitalPrediction, CoorbitalState } from './types.js';
 import { atIndex, crossLevel, interpolatePeriodic, minimiseBetween } from './periodicGrid.js';
 import { barrierSteps, isLocalMaximum, isLocalMinimum, wellKind, type WellKind } from './potentialWells.js';
@@ -28,6 +28,8 @@ export interface PhasePortrait {
   loRad: number; // turning points (NaN for passing)
   hiRad: number;
   centreRad: number; // NaN for passing
+  bottomRad: number; // the lowest enclosed minimum of V (NaN for passing)
+  bottomValue: number; // V there
   separatrixMargin: number; // NaN for passing
   maxOffsetRel: number; // √((8/3) μ (L − V_min)) over the arc
   minDistance: number; // units of a_P; see minDistanceOnArc
@@ -147,7 +149,7 @@ function linearAt(values: Float64Array, n: number, phiRad: number): number {
 
 /** The level curve through (x0, φ0) and what it encloses (recipe in the header). */
 export function readPhasePortrait(values: Float64Array, minDistance: Float64Array, n: number, x0: number, phi0Rad: number, mu: number): PhasePortrait {
-  const phi0 = wrapPi(phi0Rad) < 0 ? wrapPi(phi0Rad) + TWO_PI : wrapPi(phi0Rad);
+  const phi0 = wrapTwoPi(phi0Rad);
   const level = energyLevel(values, n, x0, phi0, mu);
   const arc = findArc(values, n, level, phi0);
   if (arc === null) return passingPortrait(values, minDistance, n, level, mu);
@@ -157,6 +159,7 @@ export function readPhasePortrait(values: Float64Array, minDistance: Float64Arra
   return {
     state, compoundWith, level, loRad: arc[0], hiRad: arc[1],
     centreRad: single ? wells.lowestRad : 0.5 * (arc[0] + arc[1]),
+    bottomRad: wells.lowestRad, bottomValue: wells.lowestValue,
     separatrixMargin: separatrixMargin(values, n, level, arc, wells),
     maxOffsetRel: Math.sqrt((8 / 3) * mu * Math.max(0, level - wells.lowestValue)),
     minDistance: minDistanceOnArc(minDistance, n, arc[0], arc[1]),
@@ -170,7 +173,7 @@ function passingPortrait(values: Float64Array, minDistance: Float64Array, n: num
     dMin = Math.min(dMin, minDistance[j]);
   }
   return {
-    state: 'passing', compoundWith: 'none', level, loRad: NaN, hiRad: NaN, centreRad: NaN, separatrixMargin: NaN,
+    state: 'passing', compoundWith: 'none', level, loRad: NaN, hiRad: NaN, centreRad: NaN, bottomRad: NaN, bottomValue: NaN, separatrixMargin: NaN,
     maxOffsetRel: Math.sqrt((8 / 3) * mu * Math.max(0, level - vMin)), minDistance: dMin,
   };
 }

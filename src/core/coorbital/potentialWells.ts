@@ -15,15 +15,15 @@ import { atIndex } from './periodicGrid.js';
 
 export type WellKind = 'qs' | 'l4' | 'l5';
 
-/** Grid point j is a local minimum (strict on the left, so a flat bottom counts once). */
+/** Grid point j (any integer, taken modulo n) is a local minimum (strict on the left, so a flat bottom counts once). */
 export function isLocalMinimum(values: Float64Array, n: number, j: number): boolean {
-  const v = values[j];
+  const v = atIndex(values, n, j);
   return v < atIndex(values, n, j - 1) && v <= atIndex(values, n, j + 1);
 }
 
-/** Grid point j is a local maximum (strict on the left). An infinite value is a maximum. */
+/** Grid point j (any integer, taken modulo n) is a local maximum (strict on the left). An infinite value is a maximum. */
 export function isLocalMaximum(values: Float64Array, n: number, j: number): boolean {
-  const v = values[j];
+  const v = atIndex(values, n, j);
   return (v > atIndex(values, n, j - 1) && v >= atIndex(values, n, j + 1)) || v === Infinity;
 }
 
