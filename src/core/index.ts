@@ -7,3 +7,4 @@ export * from './time/index.js';
 export * from './frames/index.js';
 export * from './orbit/index.js';
 export * from './random.js';
+export * from './coorbital/index.js';

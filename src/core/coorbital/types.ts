@@ -21,17 +21,21 @@ export interface AveragedOrbitShape {
   e: number; // body eccentricity
   iRad: number; // inclination to the planet's orbital plane
   periRad: number; // argument of perihelion, from the node on the planet's plane
+  nodeRad?: number; // longitude of the node in the planet's frame (default 0); the average over the planet's longitude does not depend on it
 }
 
 /** What the averaged co-orbital problem predicts for one body (phasePortrait.ts). */
 export interface CoorbitalPrediction {
   state: CoorbitalState;
-  centreDeg: number; // libration centre (the enclosed minimum of the potential); NaN for passing
-  phiMinDeg: number; // extent of φ along the level curve (turning points); NaN for passing
-  phiMaxDeg: number;
-  separatrixMargin: number; // 0 on a separatrix … 1 at the centre; NaN for passing
+  centreDeg: number; // libration centre (the enclosed minimum of the potential; for horseshoe and compound the middle of the arc); NaN for passing
+  phiMinDeg: number; // extent of φ along the level curve (turning points); NaN for passing. φ runs from phiMinDeg ∈ (−180°, 180°]
+  phiMaxDeg: number; //   up to phiMaxDeg = phiMinDeg + arc length, so phiMaxDeg exceeds 180° for an arc across 180° (horseshoe)
+  separatrixMargin: number; // 0 on a separatrix … 1 at the centre of a single well; NaN for passing
   periodYears: number; // libration (or, passing, circulation) period from the level curve
   closeApproach: boolean; // the level curve comes within 3 Hill radii: averaging unreliable there
+  compoundWith: 'horseshoe' | 'tadpole-L4' | 'tadpole-L5' | 'none'; // the non-quasi-satellite part of a compound orbit; 'none' otherwise
+  maxOffsetRel: number; // largest |δa/aP| along the level curve (at its lowest potential)
+  minDistanceHill: number; // closest approach to the planet along the level curve, in Hill radii (approximate; see phasePortrait.ts)
 }
 
 /** One stretch of the N-body history of φ in a single state (segments.ts). */
