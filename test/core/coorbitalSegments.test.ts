@@ -105,6 +105,11 @@ describe('segmentation of synthetic resonant-angle series', () => {
 });
 
 describe('pieces of the segmentation', () => {
+  it('refuses a non-finite sample', () => {
+    const t = Float64Array.of(0, 1, 2), phi = Float64Array.of(0, NaN, 0);
+    expect(() => segmentResonantAngle(t, phi, { smoothingDays: 1 })).toThrow(/non-finite sample 1/);
+  });
+
   it('classifyRange: the table of the design note (§6)', () => {
     expect(classifyRange(-10 * DEG, 12 * DEG)).toBe('quasi-satellite');
     expect(classifyRange(40 * DEG, 90 * DEG)).toBe('tadpole-L4');

@@ -35,7 +35,12 @@ function historyOf(
   sampling: CoorbitalSampling, s: CoorbitalSamples, epochJdTDB: number, planet: PlanetName, periodDays: number,
   hysteresisDeg: number | undefined,
 ): CoorbitalHistory {
-  const segments = segmentResonantAngle(sampling.phiTimesJd, s.phiUnwrappedRad, { smoothingDays: periodDays, hysteresisDeg });
+  const t = sampling.phiTimesJd;
+  // No elliptic heliocentric orbit at any sample (φ all NaN): not bound to the Sun, hence
+  // not co-orbital over the window [design].
+  const segments: CoorbitalSegment[] = Number.isFinite(s.phiUnwrappedRad[0])
+    ? segmentResonantAngle(t, s.phiUnwrappedRad, { smoothingDays: periodDays, hysteresisDeg })
+    : [{ state: 'passing', startJdTDB: t[0], endJdTDB: t[t.length - 1], centreDeg: NaN, amplitudeDeg: NaN, periodYears: NaN }];
   const captures = planet === 'earth'
     ? findCaptureEpisodes(sampling.timesJd, s.planetocentric, CAPTURE_HILL_RADII * hillRadiusAu(planet))
     : [];

@@ -8,7 +8,8 @@
  * Kepler constants [design; common practice for osculating elements]: the massless body moves
  * about the Sun alone, so its elements use GM_sun; the planet's heliocentric two-body problem
  * has the constant GM_sun + GM_planet (Murray & Dermott 1999, §2.2 — from memory), which
- * keeps its osculating a and λ steady to O(μ²) instead of wobbling by O(μ).
+ * keeps its elements constant along the unperturbed Sun–planet orbit; with GM_sun alone they
+ * would wobble over each orbit (1/a by 2μe/a) [derived from vis-viva].
  * 'earth' is the Earth–Moon barycentre with the Earth + Moon GM (constants.ts, DE430).
  *
  * φ is wrapped to (−π, π]; L4 (leading the planet) is φ = +60°, L5 is −60° (Morais 2001,

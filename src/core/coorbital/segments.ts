@@ -104,6 +104,11 @@ export function segmentResonantAngle(
   const n = timesJd.length;
   if (phiUnwrappedRad.length !== n) throw new RangeError(`segments: ${n} times but ${phiUnwrappedRad.length} angles`);
   if (n < 2) throw new RangeError(`segments: need at least 2 samples, got ${n}`);
+  for (let k = 0; k < n; k++) {
+    if (!Number.isFinite(phiUnwrappedRad[k]) || !Number.isFinite(timesJd[k])) {
+      throw new RangeError(`segments: non-finite sample ${k}: t=${timesJd[k]}, φ=${phiUnwrappedRad[k]}`);
+    }
+  }
   const phiBar = new Float64Array(n);
   runningMeanInto(timesJd, phiUnwrappedRad, opts.smoothingDays, phiBar);
   const tp = new Int32Array(n);
