@@ -1,0 +1,74 @@
+/**
+ * N-body confirmation of co-orbital motion: integrate a body over epoch ± window with the full
+ * force model (sampleCoorbital.ts), segment its resonant angle φ = λ − λ_P (segments.ts), find
+ * its closest approach to the planet and, for the Earth, its temporary captures (capture.ts).
+ * Design note on the co-orbital detector, §4 and §6 [design]. The epoch's state and the
+ * segments are the N-body judge of the averaged prediction; beyond a few centuries chaotic
+ * bodies give clone-dependent labels (2010 TK7: "Chaos limits the accuracy ... over timescales
+ * greater than about 250 yr", Connors et al. 2011 [seen in the note]).
+ * Input: heliocentric J2000-ecliptic states (au, au/day) at `epochJdTDB`. 'earth' is the
+ * Earth–Moon barycentre with the Earth + Moon GM.
+ */
+import { DAYS_PER_JULIAN_YEAR, type PlanetName } from '../constants.js';
+import type { Ephemeris } from '../types.js';
+import { CAPTURE_HILL_RADII, findCaptureEpisodes, hillRadiusAu } from './capture.js';
+import {
+  createWindowEphemeris, DEFAULT_WINDOW_YEARS, planetPeriodDays, sampleCoorbitalMotion,
+  type CoorbitalSamples, type CoorbitalSampling, type CoorbitalSamplingOptions,
+} from './sampleCoorbital.js';
+import { segmentResonantAngle } from './segments.js';
+import type { CoorbitalHistory, CoorbitalSegment, CoorbitalState } from './types.js';
+
+export interface ConfirmOptions extends CoorbitalSamplingOptions {
+  /** Turning-point hysteresis of the smoothed φ (deg); default segments.ts. */
+  hysteresisDeg?: number;
+}
+
+/** The state of the segment holding `jd` (the last one when jd is at the very end). */
+function stateAt(segments: readonly CoorbitalSegment[], jd: number): CoorbitalState {
+  for (const s of segments) if (jd >= s.startJdTDB && jd < s.endJdTDB) return s.state;
+  return segments[segments.length - 1].state;
+}
+
+/** History of one sampled body. */
+function historyOf(
+  sampling: CoorbitalSampling, s: CoorbitalSamples, epochJdTDB: number, planet: PlanetName, periodDays: number,
+  hysteresisDeg: number | undefined,
+): CoorbitalHistory {
+  const t = sampling.phiTimesJd;
+  // No elliptic heliocentric orbit at any sample (φ all NaN): not bound to the Sun, hence
+  // not co-orbital over the window [design].
+  const segments: CoorbitalSegment[] = Number.isFinite(s.phiUnwrappedRad[0])
+    ? segmentResonantAngle(t, s.phiUnwrappedRad, { smoothingDays: periodDays, hysteresisDeg })
+    : [{ state: 'passing', startJdTDB: t[0], endJdTDB: t[t.length - 1], centreDeg: NaN, amplitudeDeg: NaN, periodYears: NaN }];
+  const captures = planet === 'earth'
+    ? findCaptureEpisodes(sampling.timesJd, s.planetocentric, CAPTURE_HILL_RADII * hillRadiusAu(planet))
+    : [];
+  return {
+    epochJdTDB, segments, stateAtEpoch: stateAt(segments, epochJdTDB),
+    minDistanceAu: s.minDistanceAu, minDistanceJdTDB: s.minDistanceJdTDB, captures,
+  };
+}
+
+/**
+ * Confirm (or not) the co-orbital motion of independent bodies that share an epoch, in one
+ * force model: `states` holds 6 numbers per body. One history per body, in input order.
+ */
+export function confirmCoorbitalBatch(
+  states: Float64Array, epochJdTDB: number, planet: PlanetName, opts: ConfirmOptions = {},
+): CoorbitalHistory[] {
+  const windowDays = (opts.windowYears ?? DEFAULT_WINDOW_YEARS) * DAYS_PER_JULIAN_YEAR;
+  const eph: Ephemeris = opts.ephemeris ?? createWindowEphemeris(epochJdTDB - windowDays, epochJdTDB + windowDays);
+  const sampling = sampleCoorbitalMotion(states, epochJdTDB, planet, { ...opts, ephemeris: eph });
+  // Smoothing window: one orbital period of the planet (design note §6 [design]).
+  const periodDays = planetPeriodDays(eph, planet, epochJdTDB);
+  return sampling.bodies.map((s) => historyOf(sampling, s, epochJdTDB, planet, periodDays, opts.hysteresisDeg));
+}
+
+/** Confirm (or not) the co-orbital motion of one body: its state (6 numbers) at `epochJdTDB`. */
+export function confirmCoorbital(
+  state: Float64Array, epochJdTDB: number, planet: PlanetName, opts: ConfirmOptions = {},
+): CoorbitalHistory {
+  if (state.length !== 6) throw new RangeError(`confirmCoorbital: a state is 6 numbers, got ${state.length}`);
+  return confirmCoorbitalBatch(state, epochJdTDB, planet, opts)[0];
+}
