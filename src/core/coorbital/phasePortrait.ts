@@ -30,7 +30,7 @@ export interface PhasePortrait {
   centreRad: number; // NaN for passing
   bottomRad: number; // the lowest enclosed minimum of V (NaN for passing)
   bottomValue: number; // V there
-  separatrixMargin: number; // NaN for passing
+  separatrixMargin: number; // see separatrixMargin and passingPortrait
   maxOffsetRel: number; // √((8/3) μ (L − V_min)) over the arc
   minDistance: number; // units of a_P; see minDistanceOnArc
 }
@@ -166,14 +166,20 @@ export function readPhasePortrait(values: Float64Array, minDistance: Float64Arra
   };
 }
 
+/**
+ * Circulation: no turning point. Its margin is the height of L above the highest V, over L − the
+ * lowest V (project choice): 0 on the separatrix, towards 1 far from the planet.
+ */
 function passingPortrait(values: Float64Array, minDistance: Float64Array, n: number, level: number, mu: number): PhasePortrait {
-  let vMin = Infinity, dMin = Infinity;
+  let vMin = Infinity, vMax = -Infinity, dMin = Infinity;
   for (let j = 0; j < n; j++) {
     vMin = Math.min(vMin, values[j]);
+    vMax = Math.max(vMax, values[j]);
     dMin = Math.min(dMin, minDistance[j]);
   }
   return {
-    state: 'passing', compoundWith: 'none', level, loRad: NaN, hiRad: NaN, centreRad: NaN, bottomRad: NaN, bottomValue: NaN, separatrixMargin: NaN,
+    state: 'passing', compoundWith: 'none', level, loRad: NaN, hiRad: NaN, centreRad: NaN, bottomRad: NaN, bottomValue: NaN,
+    separatrixMargin: (level - vMax) / (level - vMin),
     maxOffsetRel: Math.sqrt((8 / 3) * mu * Math.max(0, level - vMin)), minDistance: dMin,
   };
 }
