@@ -127,6 +127,9 @@ describe('quasi-satellites', () => {
     expect(qs.state).toBe('quasi-satellite');
     expect(Math.abs(qs.centreDeg)).toBeLessThan(0.01);
     expect(predict(CIRCULAR, 0, 5).state).toBe('horseshoe');
+    const onPlanet = predict(CIRCULAR, 0, 0); // e = i = 0, φ0 = 0: the body sits on the planet, V = ∞
+    expect(onPlanet.state).not.toBe('quasi-satellite');
+    expect(onPlanet.closeApproach).toBe(true);
   });
 
   it('a well off φ = 0 between the barrier peaks is a quasi-satellite (inclined, ω = 40°: centre near +2°)', () => {
