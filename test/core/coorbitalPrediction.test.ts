@@ -11,6 +11,7 @@
 // - the design note's horseshoe table (§2.3, its own independent quadrature, derived there).
 // Mass ratios are the project's DE430 GMs (src/core/constants.ts).
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { sunMassRatio } from '../../src/core/constants.js';
 import { createCoorbitalWorkspace, hillRadiusRel, predictCoorbital } from '../../src/core/coorbital/predictCoorbital.js';
 import { createDisturbingGrid, fillAveragedDisturbing } from '../../src/core/coorbital/averagedDisturbing.js';
@@ -126,6 +127,9 @@ describe('quasi-satellites', () => {
     expect(qs.state).toBe('quasi-satellite');
     expect(Math.abs(qs.centreDeg)).toBeLessThan(0.01);
     expect(predict(CIRCULAR, 0, 5).state).toBe('horseshoe');
+    const onPlanet = predict(CIRCULAR, 0, 0); // e = i = 0, φ0 = 0: the body sits on the planet, V = ∞
+    expect(onPlanet.state).not.toBe('quasi-satellite');
+    expect(onPlanet.closeApproach).toBe(true);
   });
 
   it('a well off φ = 0 between the barrier peaks is a quasi-satellite (inclined, ω = 40°: centre near +2°)', () => {
@@ -189,7 +193,35 @@ describe('compound and passing orbits', () => {
     expect(p.state).toBe('passing');
     expect(Math.abs(p.periodYears / (((2 / 3) * EARTH.periodDays) / x / DAYS_PER_YEAR) - 1)).toBeLessThan(0.01);
     expect(p.centreDeg).toBeNaN();
-    expect(p.separatrixMargin).toBeNaN();
+    expect(p.separatrixMargin).toBeGreaterThan(0.9); // far above the barrier peaks (~5) at L ≈ 1240
+  });
+});
+
+describe('mirror symmetry', () => {
+  // (x0, φ0, ω) and (x0, −φ0, 180° − ω) see the mirrored potential (derived; see
+  // coorbitalDisturbing.test.ts), so their predictions are mirror images: L4 ↔ L5, same period.
+  const MIRROR: Record<string, string> = { 'tadpole-L4': 'tadpole-L5', 'tadpole-L5': 'tadpole-L4' };
+  it('mirrored bodies get mirrored states, arcs and equal periods (synthetic Earth candidates)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 0.6, noNaN: true }), fc.double({ min: 0, max: 40, noNaN: true }),
+        fc.double({ min: 0, max: 360, noNaN: true }), fc.double({ min: -0.015, max: 0.015, noNaN: true }),
+        fc.double({ min: -180, max: 180, noNaN: true }),
+        (e, iDeg, periDeg, x0, phi0Deg) => {
+          const a = predict({ e, iRad: iDeg * DEG, periRad: periDeg * DEG }, x0, phi0Deg);
+          const b = predict({ e, iRad: iDeg * DEG, periRad: (180 - periDeg) * DEG }, x0, -phi0Deg);
+          if (a.separatrixMargin < 1e-9 || b.separatrixMargin < 1e-9) return; // on a separatrix rounding picks the side
+          expect(b.state).toBe(MIRROR[a.state] ?? a.state);
+          expect(b.compoundWith).toBe(MIRROR[a.compoundWith] ?? a.compoundWith);
+          expect(b.closeApproach).toBe(a.closeApproach);
+          if (a.closeApproach) return; // at the planet itself (e = i = φ0 = 0) the level is ~1e16 and rounding rules
+          // near a separatrix the period diverges (logarithmically) and the last digits of L decide it
+          if (!(a.separatrixMargin < 1e-6)) expect(Math.abs(b.periodYears / a.periodYears - 1)).toBeLessThan(1e-6);
+          if (a.state !== 'passing') expect(Math.abs(Math.sin((b.phiMaxDeg + a.phiMinDeg) * DEG))).toBeLessThan(1e-6);
+        },
+      ),
+      { numRuns: 200, seed: 44 },
+    );
   });
 });
 

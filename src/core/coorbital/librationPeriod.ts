@@ -59,6 +59,7 @@ export function circulationPeriodYears(values: Float64Array, n: number, level: n
   let sum = 0;
   for (let j = 0; j < n; j++) {
     const gap = level - values[j];
+    if (gap === 0) return Infinity; // on the separatrix: the body takes for ever to cross the maximum
     if (!(gap > 0)) return NaN;
     sum += 1 / Math.sqrt(gap);
   }
@@ -66,8 +67,17 @@ export function circulationPeriodYears(values: Float64Array, n: number, level: n
   return integralRad / (1.5 * meanMotionRadPerDay(planetPeriodDays)) / DAYS_PER_JULIAN_YEAR;
 }
 
-/** Below this L − V_min (V is of order 1) the linearised period is used: rounding would dominate. */
-export const LINEAR_LIMIT_DEPTH = 1e-9;
+/**
+ * Below L − V_min = LINEAR_LIMIT_DEPTH · max(1, |V_min|) the linearised period is used: there the
+ * rounding of L − V (~1e-16 |V|/depth relative) would exceed the amplitude term the linear
+ * period leaves out (~depth). Both are ~1e-8 at the switch.
+ */
+export const LINEAR_LIMIT_DEPTH = 1e-7;
+
+/** Whether a well of this depth is best timed by its linearised period. */
+export function isLinearLimit(level: number, bottomValue: number): boolean {
+  return level - bottomValue < LINEAR_LIMIT_DEPTH * Math.max(1, Math.abs(bottomValue));
+}
 
 /**
  * Small-amplitude period in Julian years at a minimum of V, T = P/√(3 μ V''), with V'' by the

@@ -3,8 +3,9 @@
  *
  *   h(x, φ) = −(3/8) x² − μ V(φ),   x = δa/a_P,   V = R̄ (averagedDisturbing.ts)        (1')
  *
- * (derived from the Keplerian Hamiltonian in the rotating frame, expanded to second order in
- * δa; common practice — derived; see the co-orbital design note §1.2). A body at (x0, φ0)
+ * (the Keplerian Hamiltonian in the rotating frame expanded to second order in δa — derived;
+ * see the co-orbital design note §1.2; kinetic term plus μ times the averaged disturbing function
+ * is common practice). A body at (x0, φ0)
  * moves on the level curve x(φ)² = (8/3) μ (L − V(φ)) with L = V(φ0) + (3/8) x0²/μ.
  *
  * Recipe (project choice; design note §1.4): the connected arc of {V ≤ L} through φ0 is
@@ -30,7 +31,7 @@ export interface PhasePortrait {
   centreRad: number; // NaN for passing
   bottomRad: number; // the lowest enclosed minimum of V (NaN for passing)
   bottomValue: number; // V there
-  separatrixMargin: number; // NaN for passing
+  separatrixMargin: number; // see separatrixMargin and passingPortrait
   maxOffsetRel: number; // √((8/3) μ (L − V_min)) over the arc
   minDistance: number; // units of a_P; see minDistanceOnArc
 }
@@ -57,7 +58,8 @@ export function findArc(values: Float64Array, n: number, level: number, phi0Rad:
   return [loRad, hiRad];
 }
 
-interface Wells {
+/** What an arc encloses (enclosedWells). */
+export interface Wells {
   kinds: Set<WellKind>;
   lowestRad: number; // refined angle of the lowest enclosed minimum
   lowestValue: number;
@@ -129,9 +131,11 @@ export function separatrixMargin(values: Float64Array, n: number, level: number,
  * minDistance(φ), the least distance over the planet's longitude at fixed φ, computed with the
  * body at a = a_P (averagedDisturbing.ts), linearly interpolated at the turning points.
  * Approximation (project choice, design note §1.4 "close approaches"): the offset x along the
- * curve is neglected; it is exact at the turning points (x = 0 there) and elsewhere moves the
- * body by up to |x| a_P, so the estimate errs towards flagging. Sampling at 0.5° in φ and λ_P
- * adds up to ~0.005 a_P.
+ * curve is neglected; it is exact at the turning points (x = 0 there, where tadpoles and
+ * horseshoes of small e and i come closest) and elsewhere changes the distance by up to ~|x| a_P.
+ * Sampling overestimates the least distance by at most half a sample step of the relative
+ * motion: ~(e + sin i) · 0.013 a_P for 240 planet longitudes, ~0.004 a_P for the 0.5° φ step
+ * (Earth's 3 Hill radii are 0.030 a_P).
  */
 export function minDistanceOnArc(minDistance: Float64Array, n: number, loRad: number, hiRad: number): number {
   const h = TWO_PI / n;
@@ -166,14 +170,20 @@ export function readPhasePortrait(values: Float64Array, minDistance: Float64Arra
   };
 }
 
+/**
+ * Circulation: no turning point. Its margin is the height of L above the highest V, over L − the
+ * lowest V (project choice): 0 on the separatrix, towards 1 far from the planet.
+ */
 function passingPortrait(values: Float64Array, minDistance: Float64Array, n: number, level: number, mu: number): PhasePortrait {
-  let vMin = Infinity, dMin = Infinity;
+  let vMin = Infinity, vMax = -Infinity, dMin = Infinity;
   for (let j = 0; j < n; j++) {
     vMin = Math.min(vMin, values[j]);
+    vMax = Math.max(vMax, values[j]);
     dMin = Math.min(dMin, minDistance[j]);
   }
   return {
-    state: 'passing', compoundWith: 'none', level, loRad: NaN, hiRad: NaN, centreRad: NaN, bottomRad: NaN, bottomValue: NaN, separatrixMargin: NaN,
+    state: 'passing', compoundWith: 'none', level, loRad: NaN, hiRad: NaN, centreRad: NaN, bottomRad: NaN, bottomValue: NaN,
+    separatrixMargin: (level - vMax) / (level - vMin),
     maxOffsetRel: Math.sqrt((8 / 3) * mu * Math.max(0, level - vMin)), minDistance: dMin,
   };
 }

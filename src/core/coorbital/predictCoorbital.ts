@@ -18,7 +18,7 @@ import { DEG_PER_RAD } from '../constants.js';
 import { wrapPi } from '../math.js';
 import { createDisturbingGrid, fillAveragedDisturbing, type DisturbingGrid } from './averagedDisturbing.js';
 import {
-  circulationPeriodYears, DEFAULT_PERIOD_NODES, librationPeriodYears, LINEAR_LIMIT_DEPTH, smallAmplitudePeriodYears,
+  circulationPeriodYears, DEFAULT_PERIOD_NODES, isLinearLimit, librationPeriodYears, smallAmplitudePeriodYears,
 } from './librationPeriod.js';
 import { readPhasePortrait } from './phasePortrait.js';
 import type { AveragedOrbitShape, CoorbitalPrediction } from './types.js';
@@ -75,7 +75,7 @@ export function predictCoorbital(
   const p = readPhasePortrait(ws.values, ws.minDistance, n, x0, phi0Rad, muPlanet);
   const periodYears = p.state === 'passing'
     ? circulationPeriodYears(ws.values, n, p.level, muPlanet, planetPeriodDays)
-    : p.level - p.bottomValue < LINEAR_LIMIT_DEPTH
+    : isLinearLimit(p.level, p.bottomValue)
       ? smallAmplitudePeriodYears(ws.values, n, p.bottomRad, muPlanet, planetPeriodDays)
       : librationPeriodYears(ws.values, n, p.level, p.loRad, p.hiRad, muPlanet, planetPeriodDays, opts.periodNodes ?? DEFAULT_PERIOD_NODES);
   const minDistanceHill = p.minDistance / hillRadiusRel(muPlanet);

@@ -30,7 +30,7 @@ export interface CoorbitalPrediction {
   centreDeg: number; // libration centre (the enclosed minimum of the potential; for horseshoe and compound the middle of the arc); NaN for passing
   phiMinDeg: number; // extent of φ along the level curve (turning points); NaN for passing. φ runs from phiMinDeg ∈ (−180°, 180°]
   phiMaxDeg: number; //   up to phiMaxDeg = phiMinDeg + arc length, so phiMaxDeg exceeds 180° for an arc across 180° (horseshoe)
-  separatrixMargin: number; // 0 on a separatrix … 1 at the centre of a single well; NaN for passing
+  separatrixMargin: number; // 0 on a separatrix … 1 at the centre of a single well; passing: (L − max V)/(L − min V), 0 on the separatrix
   periodYears: number; // libration (or, passing, circulation) period from the level curve
   closeApproach: boolean; // the level curve comes within 3 Hill radii: averaging unreliable there
   compoundWith: 'horseshoe' | 'tadpole-L4' | 'tadpole-L5' | 'none'; // the non-quasi-satellite part of a compound orbit; 'none' otherwise
