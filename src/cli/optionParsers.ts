@@ -17,6 +17,18 @@ export function parsePlanet(value: string): PlanetName {
   return v as PlanetName;
 }
 
+/** A planet name, or 'all' for the eight: the planets whose 1:1 zones are screened. */
+export function parsePlanetList(value: string): PlanetName[] {
+  if (value.trim().toLowerCase() === 'all') return [...PLANETS];
+  const names = value.split(',').map((s) => s.trim()).filter(Boolean);
+  if (names.length === 0) throw new InvalidArgumentError(`no planet in '${value}'; one or more of: ${PLANETS.join(', ')}, or all`);
+  return [...new Set(names.map((n) => {
+    const v = n.toLowerCase();
+    if (!(PLANETS as readonly string[]).includes(v)) throw new InvalidArgumentError(`unknown planet '${n}'; one of: ${PLANETS.join(', ')}, or all`);
+    return v as PlanetName;
+  }))];
+}
+
 export function parseDetectorList(value: string): string[] {
   const ids = value.split(',').map((s) => s.trim()).filter(Boolean);
   const known = DETECTORS.map((d) => d.id);

@@ -1,6 +1,7 @@
 /** The wayward command-line program: every command registered on one commander program. */
 import { Command } from 'commander';
 import { packageVersion } from './packageInfo.js';
+import { registerCoorbitals } from './coorbitals.js';
 import { registerPropagate } from './propagate.js';
 import { registerScan } from './scan.js';
 
@@ -14,5 +15,6 @@ export function buildProgram(): Command {
     .configureOutput({ writeErr: (s) => process.stderr.write(s) });
   registerScan(program);
   registerPropagate(program);
+  registerCoorbitals(program);
   return program;
 }

@@ -27,7 +27,7 @@ import { loadCatalogue } from './loadCatalogue.js';
 import { withDefault } from './optionDefault.js';
 import {
   INPUT_FORMATS, parseColumnMapping, parseCsvKind, parseDetectorList, parseFiniteNumber, parseInputFormat,
-  parseNonNegativeNumber, parseOutputFormat, parsePlanet, parsePositiveInteger,
+  parseNonNegativeNumber, parseOutputFormat, parsePlanet, parsePlanetList, parsePositiveInteger,
 } from './optionParsers.js';
 import { demoFiles, packageVersion } from './packageInfo.js';
 import { scanStdoutTable } from './scanTable.js';
@@ -44,7 +44,7 @@ export interface ScanOptions {
   inputFormat?: InputFormat;
   columns?: Record<string, string>;
   csvKind?: CsvKindChoice; // CSV rows: by designation pattern ('auto', default) or all one kind
-  coorbitalPlanets?: PlanetName[]; // default: COORBITAL_DEFAULTS.planets
+  coorbitalPlanet?: PlanetName[]; // --coorbital-planet; default: COORBITAL_DEFAULTS.planets
   coorbitalYears?: number; // N-body window ± years
   coorbitalBudget?: number; // N-body budget, CPU-seconds (bodies at the nominal cost)
   threads?: number; // worker threads for N-body work
@@ -143,7 +143,7 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
     },
     coorbital: {
       ...COORBITAL_DEFAULTS,
-      planets: opts.coorbitalPlanets ?? COORBITAL_DEFAULTS.planets,
+      planets: opts.coorbitalPlanet ?? COORBITAL_DEFAULTS.planets,
       windowYears: opts.coorbitalYears ?? COORBITAL_DEFAULTS.windowYears,
       budgetCpuSeconds: opts.coorbitalBudget ?? COORBITAL_DEFAULTS.budgetCpuSeconds,
       threads: opts.threads ?? COORBITAL_DEFAULTS.threads,
@@ -209,6 +209,14 @@ export function registerScan(program: Command): void {
     .addOption(withDefault('--tisserand-margin <dT>', 'half-width of the boundary band flagged rather than ranked (≥ 0)',
       TISSERAND_DEFAULTS.margin, String(TISSERAND_DEFAULTS.margin), parseNonNegativeNumber))
     .option('--include-exterior', 'also screen bodies whose perihelion lies beyond the planet')
+    .addOption(withDefault('--coorbital-planet <names>', `planets whose 1:1 zones the co-orbital detector screens: ${PLANETS.join(', ')}, a comma list, or all`,
+      [...COORBITAL_DEFAULTS.planets], COORBITAL_DEFAULTS.planets.join(','), parsePlanetList))
+    .addOption(withDefault('--coorbital-years <n>', 'N-body window of the co-orbital confirmation: the epoch ± n years',
+      COORBITAL_DEFAULTS.windowYears, String(COORBITAL_DEFAULTS.windowYears), parsePositiveInteger))
+    .addOption(withDefault('--coorbital-budget <s>', 'CPU-seconds of N-body confirmation, as a body count at a fixed nominal cost (outputs do not depend on machine speed)',
+      COORBITAL_DEFAULTS.budgetCpuSeconds, String(COORBITAL_DEFAULTS.budgetCpuSeconds), parseNonNegativeNumber))
+    .addOption(withDefault('--threads <n>', 'worker threads for N-body work (outputs identical for any number)',
+      COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
     .addOption(new Option('--input-format <format>',
       `force the input format, one of: ${INPUT_FORMATS.join(', ')} (without it: detected from each file's content)`).argParser(parseInputFormat))
     .option('--columns <map>', 'CSV column mapping field=header,…, e.g. designation=objname,a=semimajor', parseColumnMapping)

@@ -5,7 +5,9 @@
  *
  * Score (libration cycles): for a confirmed body, the number of libration periods it stays
  * in its present resonant state within the integrated window, minus one — so a state held
- * for less than one full cycle (a transient) scores ≤ 0 and is a boundary case. A body not
+ * for less than one full cycle scores ≤ 0 and is a boundary case: a transient, or a state
+ * the window is too short to establish (held over the whole window but shorter than one
+ * period, as for Neptune's Trojans over ±500 years: flag 'window-shorter-than-period'). A body not
  * confirmed (time budget, an orbit too poor to integrate, the window outside the ephemeris)
  * scores 0 and is a boundary case flagged 'coorbital-unconfirmed': a prediction alone.
  */
@@ -39,6 +41,11 @@ function round(x: number, digits: number): number {
 
 const yearsOf = (days: number) => days / DAYS_PER_JULIAN_YEAR;
 
+/** Whether the state now is the only one over the whole integrated window. */
+function heldWholeWindow(h: CoorbitalHistory): boolean {
+  return h.segments.length === 1;
+}
+
 /** Score and the duration it rests on (see the file comment). */
 function firmness(r: CoorbitalBodyResult): { score: number; years: number; periodYears: number } {
   if (!r.history) return { score: 0, years: NaN, periodYears: r.prediction.periodYears };
@@ -63,7 +70,8 @@ function whyFor(r: CoorbitalBodyResult, state: CoorbitalState, f: ReturnType<typ
   const close = r.history.minDistanceAu;
   return `${state} of ${p} now (${agree}): φ librates about ${seg.centreDeg.toFixed(0)}° with amplitude ${seg.amplitudeDeg.toFixed(0)}°, ` +
     `period ${f.periodYears.toFixed(0)} yr, held ${f.years.toFixed(0)} yr of the integrated window (score ${f.score.toFixed(2)} cycles beyond the first); ` +
-    `closest approach ${close.toFixed(4)} au (${Math.round(close * KM_PER_AU).toLocaleString('en-US')} km).`;
+    `closest approach ${close.toFixed(4)} au (${Math.round(close * KM_PER_AU).toLocaleString('en-US')} km)` +
+    (f.score < 0 && heldWholeWindow(r.history) ? '; the window is shorter than one libration period, so the state is not established: integrate longer.' : '.');
 }
 
 /** The candidate of a body whose state now is resonant, or null for a passing body. */
@@ -75,6 +83,7 @@ export function coorbitalCandidate(cat: Catalogue, r: CoorbitalBodyResult, tailF
   if (!r.history) flags.push('coorbital-unconfirmed');
   if (r.history && r.history.captures.length > 0) flags.push('temporary-capture');
   if (r.prediction.closeApproach) flags.push('close-approach-averaging-unreliable');
+  if (r.history && f.score < 0 && heldWholeWindow(r.history)) flags.push('window-shorter-than-period');
   const k = r.entry.index;
   return {
     designation: cat.designation[k], index: k, detector: 'coorbital', class: state,

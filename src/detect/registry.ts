@@ -1,8 +1,9 @@
 /** Every detector the project has, in the order `scan` runs them by default. */
+import { coorbitalDetector } from './coorbital.js';
 import { tisserandDetector } from './tisserand.js';
 import type { Detector } from './types.js';
 
-export const DETECTORS: readonly Detector[] = [tisserandDetector];
+export const DETECTORS: readonly Detector[] = [tisserandDetector, coorbitalDetector];
 
 /** Detector by id, or undefined. */
 export function detectorById(id: string): Detector | undefined {

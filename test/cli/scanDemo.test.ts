@@ -12,7 +12,7 @@ import { expectEveryRowAccounted } from './rowAccounting.js';
 // detector uses, so finding them checks reading, cleaning, classing and reporting, not the
 // formula. The formula is checked against T_J published for real bodies in
 // test/core/tisserand.test.ts, and the scan against real samples in scanRealSamples.test.ts.
-interface TruthRow { designation: string; file: string; line: string; class: string; detector: string }
+interface TruthRow { designation: string; file: string; line: string; class: string; detector: string; note: string }
 interface CandidateRecord { designation: string; detector: string; class: string; flags: string[]; source: { file: string; line: number } }
 
 const truth = parse(readFileSync(join(ROOT, 'data/demo/truth.csv')), { columns: true }) as TruthRow[];
@@ -84,7 +84,7 @@ describe('scan on the bundled demo catalogue', () => {
     expect(t.notScreened['hilda-zone']).toBe(308);
     // Tail fractions are over the screened bodies of one catalogue: the two populations
     // of the candidates' tailPopulation add up to the screened count.
-    const populations = new Set(candidates.map((c) => (c as unknown as { tailPopulation: number }).tailPopulation));
+    const populations = new Set(candidates.filter((c) => c.detector === 'tisserand').map((c) => (c as unknown as { tailPopulation: number }).tailPopulation));
     expect([...populations].reduce((a, b) => a + b, 0)).toBe(t.screened);
     const report = readFileSync(join(out, 'report.md'), 'utf8');
     expect(report).toContain(`| screened | ${t.screened} |`);
@@ -130,7 +130,7 @@ describe('scan on the bundled demo catalogue', () => {
   });
 
   it('--top N is the number of rows per class in the stdout table', () => {
-    const r = runCli(['scan', '--out', tempDir(), '--reproducible', '--top', '2']);
+    const r = runCli(['scan', '--out', tempDir(), '--reproducible', '--top', '2', '--detectors', 'tisserand']);
     expect(r.status).toBe(0);
     const blocks = r.stdout.split(/\n(?=comet-like-T:|asteroid-like-T:|boundary cases:|tail fraction:)/);
     const rowsOf = (head: string) => {
@@ -163,9 +163,29 @@ describe('scan on the bundled demo catalogue', () => {
     for (const row of csv) expect(Object.keys(row)).toEqual(expect.arrayContaining(['epoch_jd_tt', 'arc_days', 'oppositions', 'observations', 'U']));
   });
 
-  it('reruns byte-identically (every output file)', () => {
+  it('finds every planted Earth co-orbital, confirmed by N-body in its planted state', () => {
+    // Earth is the co-orbital detector's default planet; truth.csv notes name the planet.
+    const planted = truth.filter((t) => t.detector === 'coorbital' && /^Earth/.test(t.note));
+    expect(planted.length).toBe(7);
+    const raised = candidates.filter((c) => c.detector === 'coorbital') as unknown as
+      { designation: string; class: string; flags: string[]; boundary: boolean; details: Record<string, string> }[];
+    for (const t of planted) {
+      const c = raised.find((x) => x.designation === t.designation);
+      expect(c, t.designation).toBeDefined();
+      expect(c!.class, t.designation).toBe(t.class);
+      expect(c!.flags).not.toContain('coorbital-unconfirmed');
+      expect(c!.details.agree, t.designation).toBe('true'); // prediction and N-body agree
+      expect(c!.boundary, t.designation).toBe(false);
+    }
+    const s = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
+    const co = s.detectors.coorbital;
+    const notScreened = Object.values(co.notScreened as Record<string, number>).reduce((a, b) => a + b, 0);
+    expect(co.screened + notScreened).toBe(s.rows.accepted);
+  });
+
+  it('reruns byte-identically (every output file), with one worker thread instead of two', () => {
     const again = tempDir();
-    expect(runCli(['scan', '--out', again, '--reproducible']).status).toBe(0);
+    expect(runCli(['scan', '--out', again, '--reproducible', '--threads', '1']).status).toBe(0);
     for (const f of ['candidates.jsonl', 'candidates.csv', 'rejects.csv', 'report.md', 'summary.json']) {
       expect(readFileSync(join(again, f)).equals(readFileSync(join(out, f))), f).toBe(true);
     }

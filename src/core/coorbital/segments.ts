@@ -83,9 +83,15 @@ function makeSegment(
     const turns = Math.abs(phiBar[b] - phiBar[a]) / TWO_PI;
     if (turns >= 1) periodYears = (times[b] - times[a]) / turns / DAYS_PER_JULIAN_YEAR;
   } else {
-    let s = 0, c = 0;
-    for (let k = a; k <= b; k++) { s += Math.sin(phiBar[k]); c += Math.cos(phiBar[k]); }
-    centreDeg = wrapDeg180(Math.atan2(s, c)); // circular mean (common practice)
+    if (state === 'horseshoe' || state === 'compound') {
+      // The middle of the range: a horseshoe lingers near its turning points beside the
+      // planet, so its time-weighted mean points at the planet (0°) instead of at L3 (180°).
+      centreDeg = wrapDeg180(0.5 * (mm[0] + mm[1]));
+    } else {
+      let s = 0, c = 0;
+      for (let k = a; k <= b; k++) { s += Math.sin(phiBar[k]); c += Math.cos(phiBar[k]); }
+      centreDeg = wrapDeg180(Math.atan2(s, c)); // circular mean (common practice)
+    }
     amplitudeDeg = 0.5 * (mm[1] - mm[0]) * DEG_PER_RAD;
     // A libration cycle is two half-cycles.
     if (complete >= 2) periodYears = (2 * (times[tpLast] - times[tpFirst])) / complete / DAYS_PER_JULIAN_YEAR;

@@ -1,0 +1,125 @@
+/**
+ * `wayward coorbitals`: every body in a planet's 1:1 zone, predicted by the averaged problem
+ * and confirmed by N-body integration (all of them, within the budget), with the segment
+ * table of each history. Outputs (staged, put in place together): coorbitals.csv (one row
+ * per screened body), segments.csv (one row per segment), coorbitals.json (both, with the
+ * run's accounting) and report.md.
+ */
+import { Command } from 'commander';
+import { PLANETS } from '../core/constants.js';
+import { analyseCoorbitals, coorbitalCandidates } from '../detect/coorbital.js';
+import { stateNow, type CoorbitalBodyResult } from '../detect/coorbitalCandidate.js';
+import { COORBITAL_DEFAULTS, type CoorbitalOptions } from '../detect/coorbitalOptions.js';
+import { COORBITAL_NOT_SCREENED } from '../detect/coorbitalZone.js';
+import type { Catalogue } from '../clean/types.js';
+import { BODY_COLUMNS, bodyRow, SEGMENT_COLUMNS, segmentRows } from '../report/coorbitalTables.js';
+import { csvRecord } from '../report/csvField.js';
+import { writeFileAtomic } from '../report/atomicWrite.js';
+import { OutputStage } from '../report/outputStage.js';
+import { SCREENING_CAVEAT } from '../report/reportMarkdown.js';
+import { markdownTable, textTable } from '../report/textTable.js';
+import { inputErrorLine } from './inputErrorLine.js';
+import { loadCatalogue } from './loadCatalogue.js';
+import { withDefault } from './optionDefault.js';
+import { parseNonNegativeNumber, parsePlanetList, parsePositiveInteger } from './optionParsers.js';
+import { demoFiles } from './packageInfo.js';
+import { relative } from 'node:path';
+
+export interface CoorbitalsOptions {
+  files: string[]; // empty: the bundled demo catalogue
+  out: string;
+  planet: CoorbitalOptions['planets'];
+  years: number;
+  budget: number;
+  threads: number;
+}
+
+export interface CoorbitalsResult {
+  cat: Catalogue;
+  bodies: CoorbitalBodyResult[];
+  notScreened: Record<string, number>;
+  errors: string[];
+}
+
+function csvText(header: readonly string[], rows: readonly (string | number)[][]): string {
+  return [csvRecord([...header]), ...rows.map(csvRecord)].join('\n') + '\n';
+}
+
+/** coorbitals.json: the accounting, then every body with its prediction and history. */
+function jsonText(r: CoorbitalsResult, opts: CoorbitalsOptions): string {
+  return JSON.stringify({
+    tool: 'wayward', command: 'coorbitals',
+    options: { planets: opts.planet, windowYears: opts.years, budgetCpuSeconds: opts.budget },
+    accepted: r.cat.size, screened: r.bodies.length, notScreened: r.notScreened,
+    bodies: r.bodies.map((b) => ({
+      designation: r.cat.designation[b.entry.index], planet: b.entry.planet,
+      deltaAOverA: b.entry.x, phiDeg: (b.entry.phiRad * 180) / Math.PI,
+      prediction: b.prediction, history: b.history, unconfirmedReason: b.unconfirmedReason,
+    })),
+  }, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2) + '\n';
+}
+
+function reportText(r: CoorbitalsResult, opts: CoorbitalsOptions): string {
+  const resonant = r.bodies.filter((b) => stateNow(b) !== 'passing');
+  const rows = resonant.map((b) => bodyRow(r.cat, b)).map((row) => [row[0], row[1], row[6], row[11] || 'not confirmed', row[8], row[14], row[17]].map(String));
+  const not = Object.entries(r.notScreened).map(([id, n]) => [`not screened: ${COORBITAL_NOT_SCREENED[id as keyof typeof COORBITAL_NOT_SCREENED]}`, String(n)]);
+  return [
+    '# wayward co-orbital report', '', `> ${SCREENING_CAVEAT}`, '',
+    `Planets: ${opts.planet.join(', ')}; N-body window ±${opts.years} years; ${r.cat.size} bodies accepted.`, '',
+    markdownTable(['bodies', 'count'], [['screened (in a 1:1 zone)', String(r.bodies.length)], ...not], [false, true]), '',
+    `## Resonant now (${resonant.length})`, '',
+    resonant.length ? markdownTable(['designation', 'planet', 'predicted', 'N-body now', 'predicted period (yr)', 'closest approach (au)', 'unconfirmed because'], rows) : 'None.',
+    '', 'Every screened body is in coorbitals.csv; every segment of every N-body history in segments.csv.', '',
+  ].join('\n');
+}
+
+export async function runCoorbitals(opts: CoorbitalsOptions): Promise<CoorbitalsResult> {
+  const files = opts.files.length > 0 ? opts.files : demoFiles().map((f) => relative(process.cwd(), f) || f);
+  const stage = await OutputStage.open(opts.out);
+  try {
+    const loaded = await loadCatalogue(files);
+    const errors = loaded.errors.map(inputErrorLine);
+    if (loaded.files.length > 0 && errors.length === loaded.files.length) throw new Error(`no input could be read; nothing written, ${opts.out} left as it was`);
+    const co: CoorbitalOptions = { ...COORBITAL_DEFAULTS, planets: opts.planet, windowYears: opts.years, confirm: 'all', budgetCpuSeconds: opts.budget, threads: opts.threads };
+    const { results, notScreened } = await analyseCoorbitals(loaded.catalogue, co);
+    const result: CoorbitalsResult = { cat: loaded.catalogue, bodies: results, notScreened, errors };
+    await writeFileAtomic(stage.path('coorbitals.csv'), csvText(BODY_COLUMNS, results.map((b) => bodyRow(loaded.catalogue, b))));
+    await writeFileAtomic(stage.path('segments.csv'), csvText(SEGMENT_COLUMNS, segmentRows(loaded.catalogue, results)));
+    await writeFileAtomic(stage.path('coorbitals.json'), jsonText(result, opts));
+    await writeFileAtomic(stage.path('report.md'), reportText(result, opts));
+    await stage.commit();
+    return result;
+  } catch (err) {
+    await stage.abort();
+    throw err;
+  }
+}
+
+/** The stdout table: the resonant bodies and the accounting line. */
+export function coorbitalsStdout(r: CoorbitalsResult, out: string): string {
+  const cands = coorbitalCandidates(r.cat, r.bodies);
+  const rows = cands.map((c) => [c.designation, String(c.details.planet), c.class, String(c.details.predicted), c.score.toFixed(2), c.flags.join(', ') || 'none']);
+  return [
+    `${r.bodies.length} bodies in the 1:1 zones screened; ${cands.length} resonant now.`,
+    rows.length ? textTable(['designation', 'planet', 'state now', 'predicted', 'score', 'flags'], rows, [false, false, false, false, true, false]) : '',
+    `Outputs in ${out}/ (coorbitals.csv, segments.csv, coorbitals.json, report.md). Screening candidates only.`,
+  ].filter(Boolean).join('\n') + '\n';
+}
+
+export function registerCoorbitals(program: Command): void {
+  program
+    .command('coorbitals')
+    .description("bodies in 1:1 resonance with a planet: every body in the planet's zone predicted and confirmed by N-body (default: the bundled demo catalogue)")
+    .argument('[files...]', 'orbit dumps, as for scan')
+    .addOption(withDefault('--planet <names>', `${PLANETS.join(', ')}, a comma list, or all`, [...COORBITAL_DEFAULTS.planets], COORBITAL_DEFAULTS.planets.join(','), parsePlanetList))
+    .addOption(withDefault('--years <n>', 'N-body window: the epoch ± n years', COORBITAL_DEFAULTS.windowYears, String(COORBITAL_DEFAULTS.windowYears), parsePositiveInteger))
+    .addOption(withDefault('--budget <s>', 'CPU-seconds of N-body work, as a body count at a fixed nominal cost', 3600, '3600', parseNonNegativeNumber))
+    .addOption(withDefault('--threads <n>', 'worker threads (outputs identical for any number)', COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
+    .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-coorbitals', 'wayward-coorbitals'))
+    .action(async (files: string[], flags: Omit<CoorbitalsOptions, 'files'>) => {
+      const r = await runCoorbitals({ files, ...flags });
+      for (const line of r.errors) process.stderr.write(`wayward: ${line}\n`);
+      process.stdout.write(coorbitalsStdout(r, flags.out));
+      if (r.errors.length > 0) process.exitCode = 1;
+    });
+}

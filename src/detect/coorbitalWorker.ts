@@ -1,0 +1,50 @@
+/**
+ * Worker-thread side of the co-orbital confirmations (coorbitalConfirm.ts): rebuilds the
+ * planets' Chebyshev cache from the tables the main thread filled, once, then integrates
+ * each body it is sent. confirmTask is also what a single-threaded run calls directly.
+ */
+import { workerData } from 'node:worker_threads';
+import type { PlanetName } from '../core/constants.js';
+import { confirmCoorbital } from '../core/coorbital/confirm.js';
+import type { CoorbitalHistory } from '../core/coorbital/types.js';
+import { EphemerisCache, type EphemerisCacheOptions } from '../core/ephemeris/ephemerisCache.js';
+import type { CacheBodyTable } from '../core/ephemeris/ephemerisCacheTable.js';
+import { Vsop87Ephemeris } from '../core/ephemeris/vsop87Ephemeris.js';
+import { serveWorkerTasks } from '../core/workerTasks.js';
+
+/** One body to integrate: heliocentric J2000-ecliptic state (au, au/day) at its epoch. */
+export interface ConfirmTask {
+  state: number[];
+  epochJdTDB: number;
+  planet: PlanetName;
+  windowYears: number;
+}
+
+/** The planets, filled: the cache's options and one table per planet system body. */
+export interface ConfirmWorkerData {
+  cache: EphemerisCacheOptions;
+  tables: CacheBodyTable[];
+}
+
+const built = new WeakMap<ConfirmWorkerData, EphemerisCache>();
+
+function ephemerisOf(data: ConfirmWorkerData): EphemerisCache {
+  let cache = built.get(data);
+  if (!cache) {
+    cache = new EphemerisCache(new Vsop87Ephemeris(), data.cache);
+    for (const t of data.tables) cache.importBody(t);
+    built.set(data, cache);
+  }
+  return cache;
+}
+
+export function confirmTask(task: ConfirmTask, data: ConfirmWorkerData): CoorbitalHistory {
+  return confirmCoorbital(Float64Array.from(task.state), task.epochJdTDB, task.planet, {
+    windowYears: task.windowYears, ephemeris: ephemerisOf(data),
+  });
+}
+
+if (workerData !== null && typeof workerData === 'object' && 'tables' in workerData) {
+  const data = workerData as ConfirmWorkerData;
+  serveWorkerTasks((task: ConfirmTask) => confirmTask(task, data));
+}
