@@ -4,12 +4,12 @@
  */
 import { createCoorbitalWorkspace, predictCoorbital } from '../core/coorbital/predictCoorbital.js';
 import type { CoorbitalPrediction } from '../core/coorbital/types.js';
-import { GM_SUN_AU3_PER_DAY2, planetGmAu3PerDay2 } from '../core/constants.js';
+import { planetKeplerGmAu3PerDay2 } from '../core/coorbital/resonantAngle.js';
 import { planetMassRatio, type ZoneEntry } from './coorbitalZone.js';
 
 /** Osculating period of the planet (days) from its a at the body's epoch, with GM_sun + GM_planet (Kepler's third law). */
 function planetPeriodDaysOf(e: ZoneEntry): number {
-  return 2 * Math.PI * Math.sqrt(e.planetAAu ** 3 / (GM_SUN_AU3_PER_DAY2 + planetGmAu3PerDay2(e.planet)));
+  return 2 * Math.PI * Math.sqrt(e.planetAAu ** 3 / planetKeplerGmAu3PerDay2(e.planet));
 }
 
 export function predictEntries(entries: readonly ZoneEntry[]): CoorbitalPrediction[] {

@@ -37,9 +37,14 @@ export function planetMassRatio(planet: PlanetName): number {
   return gm / (GM_SUN_AU3_PER_DAY2 + gm);
 }
 
+/** Largest half-width in a/aP of tadpole orbits, √(8μ/3) (Murray & Dermott 1999, §3.9). */
+export function tadpoleHalfWidth(planet: PlanetName): number {
+  return Math.sqrt((8 * planetMassRatio(planet)) / 3);
+}
+
 /** Default relative half-width of a planet's 1:1 zone (file comment). */
 export function defaultZoneHalfWidth(planet: PlanetName): number {
-  return Math.max(2 * Math.sqrt((8 * planetMassRatio(planet)) / 3), 0.017);
+  return Math.max(2 * tadpoleHalfWidth(planet), 0.017);
 }
 
 /** One screened body: the planet it is near and the averaged problem's inputs. */

@@ -35,7 +35,8 @@
  * that side, the body itself included (empiricalTail.ts): a rank within this catalogue. No
  * false-alarm probability: the screen states no null model of natural bodies' T.
  */
-import { PLANET_MEAN_A_AU, PLANETS, planetGmAu3PerDay2, GM_SUN_AU3_PER_DAY2, DEG_PER_RAD } from '../core/constants.js';
+import { PLANET_MEAN_A_AU, PLANETS, DEG_PER_RAD } from '../core/constants.js';
+import { tadpoleHalfWidth } from './coorbitalZone.js';
 import type { PlanetName } from '../core/constants.js';
 import { tisserandParameter } from '../core/orbit/tisserand.js';
 import { KIND_COMET, qualityNames, type Catalogue } from '../clean/types.js';
@@ -63,8 +64,7 @@ type NotScreenedReason = keyof typeof TISSERAND_NOT_SCREENED;
 
 /** Half-width in a/aP of the planet's co-orbital zone, sqrt(8μ/3) (Murray & Dermott §3.9). */
 export function coorbitalHalfWidth(planet: PlanetName): number {
-  const mu = planetGmAu3PerDay2(planet) / (GM_SUN_AU3_PER_DAY2 + planetGmAu3PerDay2(planet));
-  return Math.sqrt((8 * mu) / 3);
+  return tadpoleHalfWidth(planet);
 }
 
 /** coorbitalHalfWidth of every planet, computed once (tisserandZone runs once a row). */

@@ -11,9 +11,10 @@
  * between the normals, the ascending node on that plane lies along N = W_P × W, and the
  * argument of perihelion is the angle from N to P measured in the body's plane.
  */
-import { GM_SUN_AU3_PER_DAY2, planetGmAu3PerDay2, type PlanetName } from '../constants.js';
+import type { PlanetName } from '../constants.js';
 import { acosClamped, wrapPi, wrapTwoPi } from '../math.js';
 import { stateToSemimajorElements } from '../orbit/stateToElements.js';
+import { planetKeplerGmAu3PerDay2 } from './resonantAngle.js';
 import type { AveragedOrbitShape } from './types.js';
 
 /** The planet's osculating orbit at one epoch, as the co-orbital screen needs it. */
@@ -38,7 +39,7 @@ export function orbitNormal(iRad: number, nodeRad: number): [number, number, num
 
 /** The planet's orbit at the epoch of `state` (heliocentric J2000 ecliptic, au, au/day). */
 export function planetOrbitAtEpoch(planet: PlanetName, state: Float64Array): PlanetOrbitAtEpoch {
-  stateToSemimajorElements(state, GM_SUN_AU3_PER_DAY2 + planetGmAu3PerDay2(planet), EL);
+  stateToSemimajorElements(state, planetKeplerGmAu3PerDay2(planet), EL);
   return { aAu: EL[0], meanLongitudeRad: meanLongitudeFromElementsRad(EL[3], EL[4], EL[5]), normal: orbitNormal(EL[2], EL[3]) };
 }
 
