@@ -55,7 +55,7 @@ export function coorbitalCandidates(cat: Catalogue, results: readonly CoorbitalB
 export const coorbitalDetector: Detector = {
   id: 'coorbital',
   description: '1:1 mean-motion resonance with a planet: quasi-satellites, tadpole (Trojan) and horseshoe orbiters, compound orbits',
-  scoreMeaning: 'libration cycles the body stays in its present resonant state within the N-body window, minus one (≤ 0: a transient, or not confirmed)',
+  scoreMeaning: 'libration cycles the body stays in its present resonant state within the N-body window, minus one (≤ 0: a transient, a window shorter than one libration period, or not confirmed)',
   tailMeaning: "bodies screened in the planets' 1:1 zones scoring at least as high, the body itself included",
   falseAlarmModel: null,
   notScreenedReasons: COORBITAL_NOT_SCREENED,
