@@ -7,6 +7,7 @@ import { Vsop87Ephemeris } from '../../src/core/ephemeris/vsop87Ephemeris.js';
 import { loadCatalogue } from '../../src/cli/loadCatalogue.js';
 import type { Catalogue } from '../../src/clean/types.js';
 import { defaultZoneHalfWidth, screenCoorbitalZone, type ZoneEntry } from '../../src/detect/coorbitalZone.js';
+import { predictEntries } from '../../src/detect/coorbitalPredict.js';
 
 const ROOT = resolve(import.meta.dirname, '../..');
 
@@ -57,5 +58,17 @@ describe('co-orbital screen on the demo catalogue', () => {
       expect(Math.abs(e!.phiRad - phiDeg * RAD_PER_DEG) / RAD_PER_DEG, t.designation).toBeLessThan(0.5);
       expect(Math.abs(e!.x), t.designation).toBeLessThan(0.01);
     }
+  });
+
+  it("Jupiter's Trojan swarms: bodies near φ = ±60° with small e and δa are tadpoles on their side", () => {
+    // The restricted three-body problem's triangular points (Murray & Dermott 1999, ch. 3):
+    // small-amplitude libration about L4 (+60°) or L5 (−60°). The demo's natural Trojans
+    // are invented bodies placed there (data/demo/README.md).
+    const jupiter = entries.filter((e) => e.planet === 'jupiter');
+    const swarm = jupiter.filter((e) => Math.abs(Math.abs(e.phiRad) - Math.PI / 3) < 20 * RAD_PER_DEG && e.shape.e < 0.1 && Math.abs(e.x) < 0.02);
+    expect(swarm.length).toBeGreaterThan(400);
+    const predicted = predictEntries(swarm);
+    const wrong = swarm.filter((e, k) => predicted[k].state !== (e.phiRad > 0 ? 'tadpole-L4' : 'tadpole-L5')).map((e) => cat.designation[e.index]);
+    expect(wrong).toEqual([]);
   });
 });

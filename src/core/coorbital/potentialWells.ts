@@ -5,8 +5,10 @@
  * Labelling (project choice, following the co-orbital design note §1.4 item 5; the classes
  * are those of Namouni, Christou & Murray 1999, PRL 83, 2506 — journal details from memory):
  * - quasi-satellite: the minimum lies between the two barrier peaks that flank φ = 0, i.e.
- *   walking from φ = 0 towards it no local maximum of V is met. If φ = 0 is itself a maximum
- *   (e = i = 0: the planet) there is no quasi-satellite well.
+ *   walking from φ = 0 towards it no local maximum of V is met, and both peaks lie within
+ *   ±120° of the planet (a side whose first maximum is the L3 one near 180° has no barrier:
+ *   φ = 0 is then on the slope of a tadpole well). If φ = 0 is itself a maximum (e = i = 0:
+ *   the planet) there is no quasi-satellite well.
  * - otherwise by half-plane, not by the ±60° values (the centres move away from ±60° at larger
  *   e; Leleu et al. 2017, CMDA, doi 10.1007/s10569-017-9802-8): φ in (0°, 180°] → L4 (leads
  *   the planet; Morais 2001, A&A 369, 677, footnote), φ in (−180°, 0°) → L5.
@@ -47,7 +49,10 @@ export function barrierSteps(values: Float64Array, n: number): [number, number] 
 export function wellKind(n: number, j: number, centreRad: number, barriers: [number, number]): WellKind {
   const [up, down] = barriers;
   const k = ((j % n) + n) % n;
-  if (k < up || (k > 0 && n - k < down) || (k === 0 && up > 0)) return 'qs';
+  // Both flanking maxima must be barrier peaks near the planet, within ±120°: when one side
+  // has none before L3 (180°), φ = 0 lies on the slope of a tadpole well, not in a QS well.
+  const flanked = up < n / 3 && down < n / 3;
+  if ((k === 0 && up > 0) || (flanked && (k < up || n - k < down))) return 'qs'; // a minimum at φ = 0 itself is always one
   const s = Math.sin(centreRad);
   return s > 0 || (s === 0 && Math.cos(centreRad) < 0) ? 'l4' : 'l5';
 }
