@@ -3,7 +3,8 @@
  * and confirmed by N-body integration (all of them, within the budget), with the segment
  * table of each history. Outputs (staged, put in place together): coorbitals.csv (one row
  * per screened body), segments.csv (one row per segment), coorbitals.json (both, with the
- * run's accounting) and report.md.
+ * run's accounting), report.md, and per body resonant now by N-body two charts in plots/
+ * (coorbitalPlots.ts), linked from report.md.
  */
 import { Command } from 'commander';
 import { PLANETS } from '../core/constants.js';
@@ -13,6 +14,7 @@ import { COORBITAL_DEFAULTS, type CoorbitalOptions } from '../detect/coorbitalOp
 import { COORBITAL_NOT_SCREENED } from '../detect/coorbitalZone.js';
 import type { Catalogue } from '../clean/types.js';
 import { BODY_COLUMNS, bodyRow, SEGMENT_COLUMNS, segmentRows } from '../report/coorbitalTables.js';
+import { writeCoorbitalPlots, type BodyPlots } from '../report/coorbitalPlots.js';
 import { csvRecord } from '../report/csvField.js';
 import { writeFileAtomic } from '../report/atomicWrite.js';
 import { OutputStage } from '../report/outputStage.js';
@@ -54,12 +56,30 @@ function jsonText(r: CoorbitalsResult, opts: CoorbitalsOptions): string {
     bodies: r.bodies.map((b) => ({
       designation: r.cat.designation[b.entry.index], planet: b.entry.planet,
       deltaAOverA: b.entry.x, phiDeg: (b.entry.phiRad * 180) / Math.PI,
-      prediction: b.prediction, history: b.history, unconfirmedReason: b.unconfirmedReason,
+      // the plot series stay out of the JSON (they are in the charts)
+      prediction: b.prediction, history: b.history && { ...b.history, series: undefined }, unconfirmedReason: b.unconfirmedReason,
     })),
   }, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2) + '\n';
 }
 
-function reportText(r: CoorbitalsResult, opts: CoorbitalsOptions): string {
+/** Markdown text of a designation inside link or image text. */
+function linkText(s: string): string {
+  return s.replace(/[[\]\\]/g, (c) => `\\${c}`);
+}
+
+/** The charts of each plotted body as Markdown images, each linking its SVG. */
+function plotsSection(r: CoorbitalsResult, plots: ReadonlyMap<CoorbitalBodyResult, BodyPlots>): string[] {
+  if (plots.size === 0) return [];
+  const lines = ['## Plots', '', 'φ(t) over the N-body state segments, and the path in the frame rotating with the planet (Sun at the origin, planet on +x, L4 at y > 0); each picture links its SVG.', ''];
+  for (const [b, p] of plots) {
+    const d = linkText(r.cat.designation[b.entry.index]);
+    lines.push(`### ${d} (${b.entry.planet}, ${stateNow(b)})`, '',
+      `[![${d}: φ(t)](${p.phi}.png)](${p.phi}.svg) [![${d}: rotating frame](${p.rotating}.png)](${p.rotating}.svg)`, '');
+  }
+  return lines;
+}
+
+function reportText(r: CoorbitalsResult, opts: CoorbitalsOptions, plots: ReadonlyMap<CoorbitalBodyResult, BodyPlots>): string {
   const resonant = r.bodies.filter((b) => stateNow(b) !== 'passing');
   const rows = resonant.map((b) => bodyRow(r.cat, b)).map((row) => [row[0], row[1], row[6], row[11] || 'not confirmed', row[8], row[14], row[17]].map(String));
   const not = Object.entries(r.notScreened).map(([id, n]) => [`not screened: ${COORBITAL_NOT_SCREENED[id as keyof typeof COORBITAL_NOT_SCREENED]}`, String(n)]);
@@ -70,6 +90,7 @@ function reportText(r: CoorbitalsResult, opts: CoorbitalsOptions): string {
     `## Resonant now (${resonant.length})`, '',
     resonant.length ? markdownTable(['designation', 'planet', 'predicted', 'N-body now', 'predicted period (yr)', 'closest approach (au)', 'unconfirmed because'], rows) : 'None.',
     '', 'Every screened body is in coorbitals.csv; every segment of every N-body history in segments.csv.', '',
+    ...plotsSection(r, plots),
   ].join('\n');
 }
 
@@ -80,13 +101,15 @@ export async function runCoorbitals(opts: CoorbitalsOptions): Promise<Coorbitals
     const loaded = await loadCatalogue(files);
     const errors = loaded.errors.map(inputErrorLine);
     if (loaded.files.length > 0 && errors.length === loaded.files.length) throw new Error(`no input could be read; nothing written, ${opts.out} left as it was`);
-    const co: CoorbitalOptions = { ...COORBITAL_DEFAULTS, planets: opts.planet, windowYears: opts.years, confirm: 'all', budgetCpuSeconds: opts.budget, threads: opts.threads };
+    const co: CoorbitalOptions = { ...COORBITAL_DEFAULTS, planets: opts.planet, windowYears: opts.years, confirm: 'all', budgetCpuSeconds: opts.budget, threads: opts.threads, series: true };
     const { results, notScreened } = await analyseCoorbitals(loaded.catalogue, co);
     const result: CoorbitalsResult = { cat: loaded.catalogue, bodies: results, notScreened, errors };
     await writeFileAtomic(stage.path('coorbitals.csv'), csvText(BODY_COLUMNS, results.map((b) => bodyRow(loaded.catalogue, b))));
     await writeFileAtomic(stage.path('segments.csv'), csvText(SEGMENT_COLUMNS, segmentRows(loaded.catalogue, results)));
     await writeFileAtomic(stage.path('coorbitals.json'), jsonText(result, opts));
-    await writeFileAtomic(stage.path('report.md'), reportText(result, opts));
+    // charts for the bodies resonant now by N-body (an unconfirmed body has no series)
+    const plots = await writeCoorbitalPlots(stage, loaded.catalogue, results.filter((b) => b.history && stateNow(b) !== 'passing'));
+    await writeFileAtomic(stage.path('report.md'), reportText(result, opts, plots));
     await stage.commit();
     return result;
   } catch (err) {
@@ -102,7 +125,7 @@ export function coorbitalsStdout(r: CoorbitalsResult, out: string): string {
   return [
     `${r.bodies.length} bodies in the 1:1 zones screened; ${cands.length} resonant now.`,
     rows.length ? textTable(['designation', 'planet', 'state now', 'predicted', 'score', 'flags'], rows, [false, false, false, false, true, false]) : '',
-    `Outputs in ${out}/ (coorbitals.csv, segments.csv, coorbitals.json, report.md). Screening candidates only.`,
+    `Outputs in ${out}/ (coorbitals.csv, segments.csv, coorbitals.json, report.md, plots/). Screening candidates only.`,
   ].filter(Boolean).join('\n') + '\n';
 }
 

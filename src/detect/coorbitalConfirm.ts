@@ -45,11 +45,11 @@ function byPriority(entries: readonly ZoneEntry[], predictions: readonly Coorbit
   };
 }
 
-function taskOf(cat: Catalogue, e: ZoneEntry, windowYears: number): ConfirmTask {
+function taskOf(cat: Catalogue, e: ZoneEntry, windowYears: number, series: boolean): ConfirmTask {
   const k = e.index;
   const state = new Float64Array(6);
   semimajorElementsToState(cat.a[k], cat.e[k], cat.i[k], cat.node[k], cat.peri[k], cat.meanAnomaly[k], GM_SUN_AU3_PER_DAY2, state);
-  return { state: Array.from(state), epochJdTDB: e.epochJdTDB, planet: e.planet, windowYears };
+  return { state: Array.from(state), epochJdTDB: e.epochJdTDB, planet: e.planet, windowYears, series };
 }
 
 /** The planets over the union of the windows, filled in parallel, as tables for the workers. */
@@ -71,7 +71,7 @@ export async function confirmEntries(
   const paid = bodiesWithinBudget(opts);
   for (const k of queue.slice(paid)) reasons[k] = 'beyond the N-body budget (--coorbital-budget)';
   const chosen = queue.slice(0, paid);
-  const tasks = chosen.map((k) => taskOf(cat, entries[k], opts.windowYears));
+  const tasks = chosen.map((k) => taskOf(cat, entries[k], opts.windowYears, opts.series ?? false));
   const histories: CoorbitalHistory[] = [];
   if (tasks.length > 0) {
     const data = await workerData(tasks, opts.windowYears, opts.threads);

@@ -18,6 +18,7 @@ export interface ConfirmTask {
   epochJdTDB: number;
   planet: PlanetName;
   windowYears: number;
+  series: boolean; // also return the thinned series for plots (CoorbitalHistory.series)
 }
 
 /** The planets, filled: the cache's options and one table per planet system body. */
@@ -40,7 +41,7 @@ function ephemerisOf(data: ConfirmWorkerData): EphemerisCache {
 
 export function confirmTask(task: ConfirmTask, data: ConfirmWorkerData): CoorbitalHistory {
   return confirmCoorbital(Float64Array.from(task.state), task.epochJdTDB, task.planet, {
-    windowYears: task.windowYears, ephemeris: ephemerisOf(data),
+    windowYears: task.windowYears, ephemeris: ephemerisOf(data), series: task.series,
   });
 }
 

@@ -11,6 +11,10 @@
  * set is not, but the window is the few renames at the very end, after every check that
  * can be made beforehand (no target is a directory).
  *
+ * Outputs may also go one level down, into a subfolder declared with folder() (for example
+ * plots/): the subfolder is created in the output directory at commit() if missing, and
+ * files already in it that this run does not write are left alone.
+ *
  * Directories are created one level at a time, not with a recursive mkdir: that reports
  * the real cause (EROFS, EACCES, ENOTDIR) on the level that failed; Node 20's recursive
  * mkdir was seen to report ENOENT for a read-only file system and to loop without end
@@ -100,8 +104,14 @@ async function removeEmpty(dirs: readonly string[]): Promise<void> {
   for (const d of [...dirs].reverse()) await fs.rmdir(d).catch(() => undefined);
 }
 
+/** A plain file or folder name: not empty, no separator, not starting with '.'. */
+function isPlainName(name: string): boolean {
+  return name !== '' && !name.includes('/') && !name.includes('\\') && !name.startsWith('.');
+}
+
 export class OutputStage {
   private readonly names: string[] = [];
+  private readonly folders: string[] = [];
   private done = false;
 
   private constructor(
@@ -124,11 +134,22 @@ export class OutputStage {
     return new OutputStage(outDir, staging, created);
   }
 
-  /** Where to write the output `name` (a plain file name) now; it reaches outDir on commit(). */
+  /** Declares the subfolder `name` (a plain name) of the outputs; create it in the stage. */
+  async folder(name: string): Promise<void> {
+    if (!isPlainName(name)) throw new RangeError(`output folder '${name}' is not a plain name`);
+    if (this.folders.includes(name)) return;
+    await fs.mkdir(join(this.stagingDir, name));
+    this.folders.push(name);
+  }
+
+  /**
+   * Where to write the output `name` now: a plain file name, or 'FOLDER/NAME' inside a folder
+   * declared with folder(); it reaches outDir on commit().
+   */
   path(name: string): string {
-    if (name.includes('/') || name.includes('\\') || name === '' || name.startsWith('.')) {
-      throw new RangeError(`output name '${name}' is not a plain file name`);
-    }
+    const parts = name.split('/');
+    const plain = parts.every(isPlainName) && (parts.length === 1 || (parts.length === 2 && this.folders.includes(parts[0])));
+    if (!plain) throw new RangeError(`output name '${name}' is not a plain file name or one in a declared folder`);
     if (!this.names.includes(name)) this.names.push(name);
     return join(this.stagingDir, name);
   }
@@ -137,6 +158,18 @@ export class OutputStage {
   async commit(): Promise<void> {
     if (this.done) throw new RangeError('output stage already committed or aborted');
     try {
+      for (const folder of this.folders) {
+        const target = await fs.stat(join(this.outDir, folder)).catch(() => null);
+        if (target && !target.isDirectory()) throw new OutputDirectoryError(this.outDir, `${folder} exists and is not a directory (ENOTDIR)`, 'ENOTDIR');
+      }
+      for (const folder of this.folders) {
+        try {
+          await fs.mkdir(join(this.outDir, folder));
+          this.created.push(resolve(this.outDir, folder));
+        } catch (err) {
+          if (errnoCode(err) !== 'EEXIST') throw err;
+        }
+      }
       for (const name of this.names) {
         const target = await fs.stat(join(this.outDir, name)).catch(() => null);
         if (target?.isDirectory()) throw new OutputDirectoryError(this.outDir, `${name} is a directory (EISDIR)`, 'EISDIR');

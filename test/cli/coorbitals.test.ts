@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -56,6 +56,40 @@ describe('wayward coorbitals on the demo catalogue', () => {
     expect(j.screened).toBe(bodies.length);
     for (const t of truth) expect(stdout).toContain(t.designation);
     expect(readFileSync(join(out, 'report.md'), 'utf8')).toContain('## Resonant now');
+  });
+
+  it('draws φ(t) and the rotating-frame path of every planted Earth co-orbital as PNG and SVG, linked from report.md', () => {
+    const report = readFileSync(join(out, 'report.md'), 'utf8');
+    const earth = truth.filter((t) => t.note.startsWith('Earth'));
+    expect(earth.length).toBe(7);
+    for (const t of earth) {
+      // the body's heading, then one line with its two pictures, each linking its SVG
+      const at = report.indexOf(`### ${t.designation} (earth, ${t.class})`);
+      expect(at, t.designation).toBeGreaterThan(report.indexOf('## Plots'));
+      const line = report.slice(at).split('\n')[2];
+      const links = [...line.matchAll(/\]\((plots\/[^)]+)\.(png|svg)\)/g)].map((m) => `${m[1]}.${m[2]}`);
+      expect(links.length, t.designation).toBe(4);
+      expect(links.filter((l) => /-phi\.(png|svg)$/.test(l)).length).toBe(2);
+      expect(links.filter((l) => /-rotating\.(png|svg)$/.test(l)).length).toBe(2);
+      for (const l of links) {
+        expect(l, 'safe file name').toMatch(/^plots\/[A-Za-z0-9_-]+\.(png|svg)$/);
+        const bytes = readFileSync(join(out, l));
+        if (l.endsWith('.png')) {
+          // PNG signature and the IHDR width (PNG specification, ISO/IEC 15948 §5.2, §11.2.2)
+          expect(bytes.subarray(0, 8).toString('hex')).toBe('89504e470d0a1a0a');
+          expect(bytes.subarray(12, 16).toString('latin1')).toBe('IHDR');
+          expect(bytes.readUInt32BE(16)).toBe(1200);
+        } else {
+          expect(bytes.toString('utf8')).toMatch(/^<svg[^>]*xmlns="http:\/\/www\.w3\.org\/2000\/svg"/);
+        }
+      }
+    }
+    // one pair of charts per body resonant now by N-body, no more, and no series in the JSON
+    const resonant = bodies.filter((b) => b.confirmed_now !== '' && b.confirmed_now !== 'passing');
+    expect(readdirSync(join(out, 'plots')).length).toBe(4 * resonant.length);
+    const j = JSON.parse(readFileSync(join(out, 'coorbitals.json'), 'utf8'));
+    for (const b of j.bodies) expect(b.history?.series).toBeUndefined();
+    expect(readdirSync(out).filter((f) => f.startsWith('.'))).toEqual([]); // nothing left staged
   });
 
   it('an unknown planet is a usage error listing the valid names', () => {

@@ -63,6 +63,7 @@ describe('N-body confirmation of planted co-orbitals', () => {
     expect(s.amplitudeDeg).toBeLessThan(20);
     expect(h.captures).toEqual([]);
     expect(h.minDistanceAu).toBeGreaterThan(3); // never leaves the triangular region (~5.2 au away)
+    expect(h.series).toBeUndefined(); // series only when asked for
     // The window, cut to whole φ steps (≤ P_J/20 = 217 d) at each end.
     const cutDays = h.segments[0].startJdTDB - (J2000_JD - WINDOW_YEARS * YEAR);
     expect(cutDays).toBeGreaterThanOrEqual(0);
@@ -73,7 +74,7 @@ describe('N-body confirmation of planted co-orbitals', () => {
     const states = new Float64Array(12);
     states.set(planted('earth', -72), 0);
     states.set(planted('earth', 50), 6);
-    const [l5, l4] = confirmCoorbitalBatch(states, J2000_JD, 'earth', { windowYears: WINDOW_YEARS, ephemeris: eph });
+    const [l5, l4] = confirmCoorbitalBatch(states, J2000_JD, 'earth', { windowYears: WINDOW_YEARS, ephemeris: eph, series: true });
     expect(l5.segments.map((s) => s.state)).toEqual(['tadpole-L5']);
     expect(l4.segments.map((s) => s.state)).toEqual(['tadpole-L4']);
     // Measured 222.2 yr for both against 220.7 yr (0.7%).
@@ -81,6 +82,33 @@ describe('N-body confirmation of planted co-orbitals', () => {
     expect(Math.abs(l5.segments[0].centreDeg + 60)).toBeLessThan(5);
     expect(l5.captures).toEqual([]);
     expect(l5.minDistanceAu).toBeGreaterThan(0.5);
+
+    // The plot series. In the frame rotating with the Earth (planet on +x, prograde motion
+    // counter-clockwise seen from the ecliptic north) L4, 60° ahead of the planet, is at
+    // y > 0 and L5 at y < 0 (L4 leads: Morais 2001, as above). These tadpoles keep φ within
+    // about 60° ± 15°, and the true longitude differs from the mean longitude by at most
+    // ~2e ≈ 2° (equation of the centre, e ≈ 0.017: common practice), so every sample lies
+    // on its side, at about 1 au from the Sun, at a polar angle within a few degrees of φ.
+    for (const [h, side] of [[l4, 1], [l5, -1]] as const) {
+      const s = h.series!;
+      const n = s.tYears.length;
+      expect(n).toBeLessThanOrEqual(2000);
+      expect(n).toBeGreaterThan(1000);
+      expect(s.totalSamples).toBeGreaterThan(n); // thinned: 500 yr at ≤ P/20 is ~10 000 samples
+      for (const a of [s.phiDeg, s.xAu, s.yAu]) expect(a.length).toBe(n);
+      expect(s.tYears[0]).toBeCloseTo(-WINDOW_YEARS, 0);
+      expect(s.tYears[n - 1]).toBeCloseTo(WINDOW_YEARS, 0);
+      expect(Math.abs(s.planetDistanceAu - 1)).toBeLessThan(0.02);
+      for (let k = 0; k < n; k++) {
+        expect(s.phiDeg[k]).toBeGreaterThan(-180);
+        expect(s.phiDeg[k]).toBeLessThanOrEqual(180);
+        expect(side * s.yAu[k]).toBeGreaterThan(0);
+        expect(Math.abs(Math.hypot(s.xAu[k], s.yAu[k]) - 1)).toBeLessThan(0.05);
+        expect(Math.abs((Math.atan2(s.yAu[k], s.xAu[k]) * 180) / Math.PI - s.phiDeg[k])).toBeLessThan(4);
+      }
+    }
+    // Plain arrays (they cross worker threads by structured clone).
+    expect(Array.isArray(l4.series!.xAu)).toBe(true);
   });
 
   it('a body at a = 1.05 au circulates: passing, with the synodic period', () => {

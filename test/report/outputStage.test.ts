@@ -87,6 +87,43 @@ describe('staged output directory', () => {
     const stage = await OutputStage.open(join(temp(), 'out'));
     expect(() => stage.path('../escape.txt')).toThrow(RangeError);
     expect(() => stage.path('.hidden')).toThrow(RangeError);
+    expect(() => stage.path('plots/a.svg')).toThrow(RangeError); // folder not declared
+    await stage.folder('plots');
+    expect(() => stage.path('plots/../a.svg')).toThrow(RangeError);
+    expect(() => stage.path('plots/x/a.svg')).toThrow(RangeError);
+    expect(() => stage.path('plots/.a')).toThrow(RangeError);
+    await expect(stage.folder('a/b')).rejects.toThrow(RangeError);
     await stage.abort();
+  });
+
+  it('files in a declared folder reach it only on commit; the folder is made if missing, others in it are kept', async () => {
+    const out = join(temp(), 'out');
+    const stage = await OutputStage.open(out);
+    await stage.folder('plots');
+    writeFileSync(stage.path('plots/a.svg'), 'a\n');
+    writeFileSync(stage.path('report.md'), 'r\n');
+    expect(existsSync(join(out, 'plots'))).toBe(false);
+    await stage.commit();
+    expect(readdirSync(out).sort()).toEqual(['plots', 'report.md']);
+    expect(readFileSync(join(out, 'plots', 'a.svg'), 'utf8')).toBe('a\n');
+    writeFileSync(join(out, 'plots', 'old.svg'), 'old\n');
+    const again = await OutputStage.open(out);
+    await again.folder('plots');
+    writeFileSync(again.path('plots/a.svg'), 'a2\n');
+    await again.commit();
+    expect(readdirSync(join(out, 'plots')).sort()).toEqual(['a.svg', 'old.svg']);
+    expect(readFileSync(join(out, 'plots', 'a.svg'), 'utf8')).toBe('a2\n');
+  });
+
+  it('a declared folder that is a file in the output directory stops the commit before any file is moved', async () => {
+    const out = join(temp(), 'out');
+    mkdirSync(out);
+    writeFileSync(join(out, 'plots'), 'a file\n');
+    const stage = await OutputStage.open(out);
+    writeFileSync(stage.path('report.md'), 'r\n');
+    await stage.folder('plots');
+    writeFileSync(stage.path('plots/a.svg'), 'a\n');
+    await expect(stage.commit()).rejects.toThrow(`cannot write output directory ${out}: plots exists and is not a directory (ENOTDIR)`);
+    expect(readdirSync(out)).toEqual(['plots']);
   });
 });

@@ -10,6 +10,7 @@
  * Earth–Moon barycentre with the Earth + Moon GM.
  */
 import { DAYS_PER_JULIAN_YEAR, type PlanetName } from '../constants.js';
+import { wrapPi } from '../math.js';
 import type { Ephemeris } from '../types.js';
 import { CAPTURE_HILL_RADII, findCaptureEpisodes, hillRadiusAu } from './capture.js';
 import {
@@ -17,11 +18,51 @@ import {
   type CoorbitalSamples, type CoorbitalSampling, type CoorbitalSamplingOptions,
 } from './sampleCoorbital.js';
 import { segmentResonantAngle } from './segments.js';
-import type { CoorbitalHistory, CoorbitalSegment, CoorbitalState } from './types.js';
+import type { CoorbitalHistory, CoorbitalSegment, CoorbitalSeries, CoorbitalState } from './types.js';
 
 export interface ConfirmOptions extends CoorbitalSamplingOptions {
   /** Turning-point hysteresis of the smoothed φ (deg); default segments.ts. */
   hysteresisDeg?: number;
+  /** Also return thinned φ and rotating-frame series (CoorbitalHistory.series); default false. */
+  series?: boolean;
+}
+
+/** Most samples kept in a CoorbitalSeries: enough for a chart, small to pass between threads [design]. */
+export const SERIES_MAX_POINTS = 2000;
+
+/** Indices 0, k, 2k, … and n − 1, k the smallest stride leaving at most maxPoints of them. */
+function thinnedIndices(n: number, maxPoints: number): number[] {
+  if (n <= maxPoints) return Array.from({ length: n }, (_, i) => i);
+  const stride = Math.ceil((n - 1) / (maxPoints - 1));
+  const out: number[] = [];
+  for (let i = 0; i < n - 1; i += stride) out.push(i);
+  out.push(n - 1);
+  return out;
+}
+
+/** φ (rad, unwrapped) as degrees on (−180, 180]; NaN stays NaN. */
+function wrappedDeg(phiRad: number): number {
+  let d = (-wrapPi(-phiRad) * 180) / Math.PI; // −wrapPi(−x) lies in (−π, π]
+  if (d > 180) d = 180;
+  if (d <= -180) d += 360;
+  return d;
+}
+
+/** The thinned series of one body (sampled with rotatingFrame). */
+function seriesOf(sampling: CoorbitalSampling, s: CoorbitalSamples, epochJdTDB: number): CoorbitalSeries {
+  const t = sampling.phiTimesJd;
+  const keep = thinnedIndices(t.length, SERIES_MAX_POINTS);
+  const r = sampling.planetDistanceAu!;
+  let sum = 0;
+  for (let k = 0; k < r.length; k++) sum += r[k];
+  return {
+    tYears: keep.map((k) => (t[k] - epochJdTDB) / DAYS_PER_JULIAN_YEAR),
+    phiDeg: keep.map((k) => wrappedDeg(s.phiUnwrappedRad[k])),
+    xAu: keep.map((k) => s.rotatingXAu![k]),
+    yAu: keep.map((k) => s.rotatingYAu![k]),
+    planetDistanceAu: sum / r.length,
+    totalSamples: t.length,
+  };
 }
 
 /** The state of the segment holding `jd` (the last one when jd is at the very end). */
@@ -33,7 +74,7 @@ function stateAt(segments: readonly CoorbitalSegment[], jd: number): CoorbitalSt
 /** History of one sampled body. */
 function historyOf(
   sampling: CoorbitalSampling, s: CoorbitalSamples, epochJdTDB: number, planet: PlanetName, periodDays: number,
-  hysteresisDeg: number | undefined,
+  hysteresisDeg: number | undefined, series: boolean,
 ): CoorbitalHistory {
   const t = sampling.phiTimesJd;
   // No elliptic heliocentric orbit at any sample (φ all NaN): not bound to the Sun, hence
@@ -47,6 +88,7 @@ function historyOf(
   return {
     epochJdTDB, segments, stateAtEpoch: stateAt(segments, epochJdTDB),
     minDistanceAu: s.minDistanceAu, minDistanceJdTDB: s.minDistanceJdTDB, captures,
+    ...(series ? { series: seriesOf(sampling, s, epochJdTDB) } : {}),
   };
 }
 
@@ -59,10 +101,11 @@ export function confirmCoorbitalBatch(
 ): CoorbitalHistory[] {
   const windowDays = (opts.windowYears ?? DEFAULT_WINDOW_YEARS) * DAYS_PER_JULIAN_YEAR;
   const eph: Ephemeris = opts.ephemeris ?? createWindowEphemeris(epochJdTDB - windowDays, epochJdTDB + windowDays);
-  const sampling = sampleCoorbitalMotion(states, epochJdTDB, planet, { ...opts, ephemeris: eph });
+  const series = opts.series ?? false;
+  const sampling = sampleCoorbitalMotion(states, epochJdTDB, planet, { ...opts, ephemeris: eph, rotatingFrame: series });
   // Smoothing window: one orbital period of the planet (design note §6 [design]).
   const periodDays = planetPeriodDays(eph, planet, epochJdTDB);
-  return sampling.bodies.map((s) => historyOf(sampling, s, epochJdTDB, planet, periodDays, opts.hysteresisDeg));
+  return sampling.bodies.map((s) => historyOf(sampling, s, epochJdTDB, planet, periodDays, opts.hysteresisDeg, series));
 }
 
 /** Confirm (or not) the co-orbital motion of one body: its state (6 numbers) at `epochJdTDB`. */

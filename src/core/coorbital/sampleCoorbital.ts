@@ -37,6 +37,16 @@ export interface CoorbitalSamplingOptions {
   relativity?: boolean;
   /** Integrator options; the tolerance defaults to CONFIRM_EPSILON. */
   integrator?: GaussRadauOptions;
+  /**
+   * Also keep the body's position in the frame rotating with the planet at every φ sample
+   * (rotatingXAu, rotatingYAu) and the planet's distance there; default false, so a run
+   * that does not plot pays nothing. Frame: the heliocentric J2000-ecliptic position
+   * projected on the ecliptic and turned about the ecliptic pole by −L_P, with L_P the
+   * planet's heliocentric ecliptic longitude at that instant (atan2 of its y and x), so the
+   * Sun is at the origin and the planet on +x at its projected distance; the planet moves
+   * counter-clockwise seen from the ecliptic's north, so the leading point L4 is at y > 0.
+   */
+  rotatingFrame?: boolean;
 }
 
 /**
@@ -69,6 +79,9 @@ export interface CoorbitalSamples {
   planetocentric: PlanetocentricSeries;
   minDistanceAu: number; // between samples by straight-line closest approach (within half a step)
   minDistanceJdTDB: number;
+  /** Rotating-frame position (au) at phiTimesJd; present only with the rotatingFrame option. */
+  rotatingXAu?: Float64Array;
+  rotatingYAu?: Float64Array;
 }
 
 /** The grids and the bodies' sampled motion. */
@@ -79,6 +92,8 @@ export interface CoorbitalSampling {
   phiStride: number;
   bodies: CoorbitalSamples[];
   integratorSteps: number; // accepted steps, both directions
+  /** The planet's distance (au) from the Sun in the ecliptic plane at phiTimesJd; with rotatingFrame only. */
+  planetDistanceAu?: Float64Array;
 }
 
 /** The planet's ephemeris body: 'emb' for 'earth' (the Earth–Moon barycentre). */
@@ -130,6 +145,7 @@ interface SampleContext {
   planetState: Float64Array; // 6
   bodyState: Float64Array; // 6
   approach: Float64Array; // 2: closest-approach scratch
+  planetDistanceAu: Float64Array | null; // at the φ samples, with the rotatingFrame option
 }
 
 /**
@@ -152,11 +168,20 @@ function recordSample(ctx: SampleContext, k: number, tJd: number, x: Float64Arra
   ctx.eph.helioState(ctx.planetBody, tJd, ps, 0);
   const withPhi = k % ctx.phiStride === 0;
   const lambdaP = withPhi ? meanLongitudeRad(ps, ctx.planetKeplerGm) : NaN;
+  // Rotation by −L_P about the ecliptic pole (the frame of CoorbitalSamplingOptions.rotatingFrame).
+  const rotating = withPhi && ctx.planetDistanceAu !== null;
+  const rPlanet = rotating ? Math.hypot(ps[0], ps[1]) : NaN;
+  const cosL = ps[0] / rPlanet, sinL = ps[1] / rPlanet;
+  if (rotating) ctx.planetDistanceAu![k / ctx.phiStride] = rPlanet;
   for (let i = 0; i < ctx.out.length; i++) {
     for (let c = 0; c < 3; c++) { bs[c] = x[xo + 3 * i + c]; bs[3 + c] = v[vo + 3 * i + c]; }
     const s = ctx.out[i];
     // φ in (−π, π]; NaN (a non-elliptic orbit) stays NaN.
     if (withPhi) s.phiUnwrappedRad[k / ctx.phiStride] = -wrapPi(lambdaP - meanLongitudeRad(bs, GM_SUN_AU3_PER_DAY2));
+    if (rotating && s.rotatingXAu && s.rotatingYAu) {
+      s.rotatingXAu[k / ctx.phiStride] = cosL * bs[0] + sinL * bs[1];
+      s.rotatingYAu[k / ctx.phiStride] = -sinL * bs[0] + cosL * bs[1];
+    }
     planetocentricSampleInto(bs, 0, ps, 0, ctx.planetGm, s.planetocentric, k);
     closestApproachInto(bs, ps, ctx.halfStepDays, ctx.approach);
     if (ctx.approach[0] < s.minDistanceAu) { s.minDistanceAu = ctx.approach[0]; s.minDistanceJdTDB = tJd + ctx.approach[1]; }
@@ -210,7 +235,7 @@ function checkedGrid(eph: Ephemeris, planet: PlanetName, epochJdTDB: number, opt
 }
 
 /** The per-run context: planet constants, scratch, and the bodies' output columns. */
-function sampleContext(eph: Ephemeris, planet: PlanetName, grid: SampleGrid, nBodies: number): SampleContext {
+function sampleContext(eph: Ephemeris, planet: PlanetName, grid: SampleGrid, nBodies: number, rotatingFrame: boolean): SampleContext {
   const n = grid.timesJd.length;
   const nPhi = (n - 1) / grid.phiStride + 1;
   const out: CoorbitalSamples[] = [];
@@ -218,12 +243,14 @@ function sampleContext(eph: Ephemeris, planet: PlanetName, grid: SampleGrid, nBo
     out.push({
       phiUnwrappedRad: new Float64Array(nPhi), planetocentric: createPlanetocentricSeries(n),
       minDistanceAu: Infinity, minDistanceJdTDB: NaN,
+      ...(rotatingFrame ? { rotatingXAu: new Float64Array(nPhi), rotatingYAu: new Float64Array(nPhi) } : {}),
     });
   }
   return {
     eph, planetBody: planetEphemerisBody(planet), planetGm: planetGmAu3PerDay2(planet),
     planetKeplerGm: planetKeplerGmAu3PerDay2(planet), halfStepDays: grid.stepDays / 2, phiStride: grid.phiStride, out,
     planetState: new Float64Array(6), bodyState: new Float64Array(6), approach: new Float64Array(2),
+    planetDistanceAu: rotatingFrame ? new Float64Array(nPhi) : null,
   };
 }
 
@@ -241,7 +268,7 @@ export function sampleCoorbitalMotion(
   const { timesJd, epochIndex } = grid;
   const n = timesJd.length;
   const nPhi = (n - 1) / grid.phiStride + 1;
-  const ctx = sampleContext(eph, planet, grid, states.length / 6);
+  const ctx = sampleContext(eph, planet, grid, states.length / 6, opts.rotatingFrame ?? false);
   const req = {
     epochJdTDB, states, forces: { planets: PLANETS, ephemeris: eph, relativity: opts.relativity ?? true },
     integrator: { epsilon: CONFIRM_EPSILON, ...opts.integrator },
@@ -259,5 +286,8 @@ export function sampleCoorbitalMotion(
   }
   const phiTimesJd = new Float64Array(nPhi);
   for (let j = 0; j < nPhi; j++) phiTimesJd[j] = timesJd[j * grid.phiStride];
-  return { timesJd, epochIndex, phiTimesJd, phiStride: grid.phiStride, bodies: ctx.out, integratorSteps: steps };
+  return {
+    timesJd, epochIndex, phiTimesJd, phiStride: grid.phiStride, bodies: ctx.out, integratorSteps: steps,
+    ...(ctx.planetDistanceAu ? { planetDistanceAu: ctx.planetDistanceAu } : {}),
+  };
 }

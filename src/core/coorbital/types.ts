@@ -64,4 +64,22 @@ export interface CoorbitalHistory {
   minDistanceAu: number; // closest approach to the planet over the window
   minDistanceJdTDB: number;
   captures: CaptureEpisode[]; // filled for Earth only
+  series?: CoorbitalSeries; // only when asked for (ConfirmOptions.series)
+}
+
+/**
+ * Thinned samples of one N-body history, for plotting: plain arrays of equal length (they
+ * cross worker threads as they are), at most SERIES_MAX_POINTS (confirm.ts), every k-th φ
+ * sample with the first and the last. The rotating frame is the one of
+ * CoorbitalSamplingOptions.rotatingFrame (sampleCoorbital.ts): heliocentric position
+ * projected on the J2000 ecliptic and turned by −(the planet's heliocentric longitude), so
+ * the Sun is at the origin, the planet on +x, and L4 (60° ahead of it) at y > 0.
+ */
+export interface CoorbitalSeries {
+  tYears: number[]; // Julian years from the epoch
+  phiDeg: number[]; // φ = λ − λ_P wrapped to (−180, 180]
+  xAu: number[]; // rotating frame
+  yAu: number[];
+  planetDistanceAu: number; // the planet's mean distance on +x over the sampled window
+  totalSamples: number; // φ samples before thinning
 }
