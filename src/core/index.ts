@@ -8,3 +8,4 @@ export * from './frames/index.js';
 export * from './orbit/index.js';
 export * from './random.js';
 export * from './coorbital/index.js';
+export * from './strideIndices.js';

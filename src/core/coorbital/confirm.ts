@@ -9,6 +9,7 @@
  * Input: heliocentric J2000-ecliptic states (au, au/day) at `epochJdTDB`. 'earth' is the
  * Earth–Moon barycentre with the Earth + Moon GM.
  */
+import { strideIndices } from '../strideIndices.js';
 import { DAYS_PER_JULIAN_YEAR, type PlanetName } from '../constants.js';
 import { wrapPi } from '../math.js';
 import type { Ephemeris } from '../types.js';
@@ -30,16 +31,6 @@ export interface ConfirmOptions extends CoorbitalSamplingOptions {
 /** Most samples kept in a CoorbitalSeries: enough for a chart, small to pass between threads [design]. */
 export const SERIES_MAX_POINTS = 2000;
 
-/** Indices 0, k, 2k, … and n − 1, k the smallest stride leaving at most maxPoints of them. */
-function thinnedIndices(n: number, maxPoints: number): number[] {
-  if (n <= maxPoints) return Array.from({ length: n }, (_, i) => i);
-  const stride = Math.ceil((n - 1) / (maxPoints - 1));
-  const out: number[] = [];
-  for (let i = 0; i < n - 1; i += stride) out.push(i);
-  out.push(n - 1);
-  return out;
-}
-
 /** φ (rad, unwrapped) as degrees on (−180, 180]; NaN stays NaN. */
 function wrappedDeg(phiRad: number): number {
   let d = (-wrapPi(-phiRad) * 180) / Math.PI; // −wrapPi(−x) lies in (−π, π]
@@ -51,7 +42,7 @@ function wrappedDeg(phiRad: number): number {
 /** The thinned series of one body (sampled with rotatingFrame). */
 function seriesOf(sampling: CoorbitalSampling, s: CoorbitalSamples, epochJdTDB: number): CoorbitalSeries {
   const t = sampling.phiTimesJd;
-  const keep = thinnedIndices(t.length, SERIES_MAX_POINTS);
+  const keep = Array.from(strideIndices(t.length, SERIES_MAX_POINTS));
   const r = sampling.planetDistanceAu!;
   let sum = 0;
   for (let k = 0; k < r.length; k++) sum += r[k];
