@@ -33,7 +33,7 @@ export async function analyseCoorbitals(cat: Catalogue, opts: CoorbitalOptions):
   const planets = opts.planets.length > 0 ? opts.planets : PLANETS;
   const widths = planets.map((p) => opts.zoneHalfWidth ?? defaultZoneHalfWidth(p));
   const { entries, notScreened } = screenCoorbitalZone(cat, planets, widths, new Vsop87Ephemeris());
-  const predictions = predictEntries(entries);
+  const predictions = await predictEntries(entries, opts.threads);
   const results = await confirmEntries(cat, entries, predictions, opts);
   return { results, notScreened };
 }
