@@ -36,7 +36,7 @@ import type { CoorbitalBodyResult } from '../src/detect/coorbitalCandidate.js';
 import { COORBITAL_DEFAULTS, type CoorbitalOptions } from '../src/detect/coorbitalOptions.js';
 import { predictEntries } from '../src/detect/coorbitalPredict.js';
 import { defaultZoneHalfWidth, screenCoorbitalZone } from '../src/detect/coorbitalZone.js';
-import { encounterBody, turned } from './bench/coorbital.js';
+import { encounterBody, timed, turned } from './bench/coorbital.js';
 import { NEAR_EARTH_DEFAULT_SEED, writeNearEarthList } from './bench/nearEarthList.js';
 import { generateDemo } from './demo/generate.js';
 import { DEFAULT_SEED } from './demo/scenario.js';
@@ -66,14 +66,6 @@ function partList(value: string): Part[] {
 
 const fmtInt = (n: number): string => Math.round(n).toLocaleString('en-US').replace(/,/g, ' ');
 const verdict = (ok: boolean): string => (ok ? 'met' : 'NOT met');
-
-function timed<T>(f: () => T): { value: T; wallS: number; cpuS: number } {
-  const cpu0 = process.cpuUsage();
-  const t0 = performance.now();
-  const value = f();
-  const cpu = process.cpuUsage(cpu0);
-  return { value, wallS: (performance.now() - t0) / 1000, cpuS: (cpu.user + cpu.system) / 1e6 };
-}
 
 async function timedAsync<T>(f: () => Promise<T>): Promise<{ value: T; wallS: number }> {
   const t0 = performance.now();

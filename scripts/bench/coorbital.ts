@@ -27,7 +27,7 @@ import type { Ephemeris } from '../../src/core/types.js';
 const DAYS_PER_YEAR = 365.25;
 const DEG = Math.PI / 180;
 
-function timed<T>(f: () => T): { value: T; wallS: number; cpuS: number } {
+export function timed<T>(f: () => T): { value: T; wallS: number; cpuS: number } {
   const cpu0 = process.cpuUsage();
   const t0 = performance.now();
   const value = f();
