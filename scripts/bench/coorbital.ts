@@ -27,7 +27,7 @@ import type { Ephemeris } from '../../src/core/types.js';
 const DAYS_PER_YEAR = 365.25;
 const DEG = Math.PI / 180;
 
-function timed<T>(f: () => T): { value: T; wallS: number; cpuS: number } {
+export function timed<T>(f: () => T): { value: T; wallS: number; cpuS: number } {
   const cpu0 = process.cpuUsage();
   const t0 = performance.now();
   const value = f();
@@ -35,7 +35,7 @@ function timed<T>(f: () => T): { value: T; wallS: number; cpuS: number } {
   return { value, wallS: (performance.now() - t0) / 1000, cpuS: (cpu.user + cpu.system) / 1e6 };
 }
 
-function turned(eph: Ephemeris, planet: PlanetName, angleDeg: number): Float64Array {
+export function turned(eph: Ephemeris, planet: PlanetName, angleDeg: number): Float64Array {
   const p = new Float64Array(6);
   eph.helioState(planetEphemerisBody(planet), J2000_JD, p, 0);
   const out = new Float64Array(6);
@@ -44,7 +44,7 @@ function turned(eph: Ephemeris, planet: PlanetName, angleDeg: number): Float64Ar
 }
 
 /** 0.02 au ahead of the EMB, velocity turned by 0.1 |v| radially and 0.01 |v| normally. */
-function encounterBody(eph: Ephemeris): Float64Array {
+export function encounterBody(eph: Ephemeris): Float64Array {
   const e = new Float64Array(6);
   eph.helioState('emb', J2000_JD, e, 0);
   const r = Math.hypot(e[0], e[1], e[2]), v = Math.hypot(e[3], e[4], e[5]);

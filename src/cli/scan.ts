@@ -47,7 +47,7 @@ export interface ScanOptions {
   coorbitalPlanet?: PlanetName[]; // --coorbital-planet; default: COORBITAL_DEFAULTS.planets
   coorbitalYears?: number; // N-body window ± years
   coorbitalBudget?: number; // N-body budget, CPU-seconds (bodies at the nominal cost)
-  threads?: number; // worker threads for N-body work
+  threads?: number; // worker threads for N-body work and co-orbital predictions
   reproducible: boolean; // leave timings and memory out of summary.json
 }
 
@@ -215,7 +215,7 @@ export function registerScan(program: Command): void {
       COORBITAL_DEFAULTS.windowYears, String(COORBITAL_DEFAULTS.windowYears), parsePositiveInteger))
     .addOption(withDefault('--coorbital-budget <s>', 'CPU-seconds of N-body confirmation, as a body count at a fixed nominal cost (outputs do not depend on machine speed)',
       COORBITAL_DEFAULTS.budgetCpuSeconds, String(COORBITAL_DEFAULTS.budgetCpuSeconds), parseNonNegativeNumber))
-    .addOption(withDefault('--threads <n>', 'worker threads for N-body work (outputs identical for any number)',
+    .addOption(withDefault('--threads <n>', 'worker threads for co-orbital predictions and N-body work (outputs identical for any number)',
       COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
     .addOption(new Option('--input-format <format>',
       `force the input format, one of: ${INPUT_FORMATS.join(', ')} (without it: detected from each file's content)`).argParser(parseInputFormat))

@@ -4,7 +4,8 @@
  *   1. screen (coorbitalZone.ts): bodies whose a lies in the planet's 1:1 zone, with δa/aP,
  *      φ = λ − λ_P and the orbit shape relative to the planet's plane at their own epoch;
  *   2. predict (core/coorbital, the averaged problem): the kind of trajectory through the
- *      body's (δa, φ) on the phase portrait at its e, i, ω — every screened body;
+ *      body's (δa, φ) on the phase portrait at its e, i, ω — every screened body, spread
+ *      over worker threads in fixed chunks with results in entry order;
  *   3. confirm (core/coorbital, N-body over the epoch ± windowYears with the eight planets
  *      and the Sun's 1PN term): φ(t) segmented into states, closest approach, temporary
  *      capture — for the bodies predicted resonant (scan) or every screened body
@@ -33,7 +34,7 @@ export async function analyseCoorbitals(cat: Catalogue, opts: CoorbitalOptions):
   const planets = opts.planets.length > 0 ? opts.planets : PLANETS;
   const widths = planets.map((p) => opts.zoneHalfWidth ?? defaultZoneHalfWidth(p));
   const { entries, notScreened } = screenCoorbitalZone(cat, planets, widths, new Vsop87Ephemeris());
-  const predictions = predictEntries(entries);
+  const predictions = await predictEntries(entries, opts.threads);
   const results = await confirmEntries(cat, entries, predictions, opts);
   return { results, notScreened };
 }

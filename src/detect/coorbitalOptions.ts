@@ -12,7 +12,7 @@ export interface CoorbitalOptions {
   windowYears: number; // the N-body window is the epoch ± this
   confirm: 'resonant' | 'all'; // confirm bodies predicted resonant (scan) or every screened body (coorbitals)
   budgetCpuSeconds: number; // N-body budget, as a body count at NOMINAL_CPU_SECONDS_PER_1000_YEARS
-  threads: number; // worker threads for the N-body confirmations (output identical for any count)
+  threads: number; // worker threads for the predictions and the N-body confirmations (output identical for any count)
   series?: boolean; // keep thinned φ and rotating-frame series for plots (default false: scan pays nothing)
 }
 

@@ -60,14 +60,14 @@ describe('co-orbital screen on the demo catalogue', () => {
     }
   });
 
-  it("Jupiter's Trojan swarms: bodies near φ = ±60° with small e and δa are tadpoles on their side", () => {
+  it("Jupiter's Trojan swarms: bodies near φ = ±60° with small e and δa are tadpoles on their side", async () => {
     // The restricted three-body problem's triangular points (Murray & Dermott 1999, ch. 3):
     // small-amplitude libration about L4 (+60°) or L5 (−60°). The demo's natural Trojans
     // are invented bodies placed there (data/demo/README.md).
     const jupiter = entries.filter((e) => e.planet === 'jupiter');
     const swarm = jupiter.filter((e) => Math.abs(Math.abs(e.phiRad) - Math.PI / 3) < 20 * RAD_PER_DEG && e.shape.e < 0.1 && Math.abs(e.x) < 0.02);
     expect(swarm.length).toBeGreaterThan(400);
-    const predicted = predictEntries(swarm);
+    const predicted = await predictEntries(swarm);
     const wrong = swarm.filter((e, k) => predicted[k].state !== (e.phiRad > 0 ? 'tadpole-L4' : 'tadpole-L5')).map((e) => cat.designation[e.index]);
     expect(wrong).toEqual([]);
   });
