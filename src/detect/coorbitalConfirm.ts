@@ -10,6 +10,7 @@
 import { DAYS_PER_JULIAN_YEAR, GM_SUN_AU3_PER_DAY2 } from '../core/constants.js';
 import type { CoorbitalHistory, CoorbitalPrediction } from '../core/coorbital/types.js';
 import { createEphemeris } from '../core/ephemeris/ephemeris.js';
+import type { EphemerisCache } from '../core/ephemeris/ephemerisCache.js';
 import { PLANET_SYSTEM_BODIES } from '../core/ephemeris/ephemerisBody.js';
 import { DYNAMICS_FIT_TOLERANCE_AU } from '../core/ephemeris/ephemerisCacheOptions.js';
 import { prefillParallel } from '../core/ephemeris/ephemerisParallelFill.js';
@@ -52,13 +53,18 @@ function taskOf(cat: Catalogue, e: ZoneEntry, windowYears: number, series: boole
   return { state: Array.from(state), epochJdTDB: e.epochJdTDB, planet: e.planet, windowYears, series };
 }
 
-/** The planets over the union of the windows, filled in parallel, as tables for the workers. */
-async function workerData(tasks: readonly ConfirmTask[], windowYears: number, threads: number): Promise<ConfirmWorkerData> {
+/** The planets over the union of the windows, filled in parallel. */
+async function filledPlanets(tasks: readonly ConfirmTask[], windowYears: number, threads: number): Promise<EphemerisCache> {
   const w = windowYears * DAYS_PER_JULIAN_YEAR;
   const start = Math.min(...tasks.map((t) => t.epochJdTDB)) - w - 2;
   const end = Math.max(...tasks.map((t) => t.epochJdTDB)) + w + 2;
   const cache = createEphemeris({ startJdTDB: start, endJdTDB: end, fitToleranceAu: DYNAMICS_FIT_TOLERANCE_AU });
   await prefillParallel(cache, start, end, PLANET_SYSTEM_BODIES, threads);
+  return cache;
+}
+
+/** The filled planets as tables a worker thread rebuilds its cache from. */
+function workerData(cache: EphemerisCache): ConfirmWorkerData {
   return { cache: cache.options, tables: PLANET_SYSTEM_BODIES.map((b) => cache.exportBody(b)) };
 }
 
@@ -74,9 +80,9 @@ export async function confirmEntries(
   const tasks = chosen.map((k) => taskOf(cat, entries[k], opts.windowYears, opts.series ?? false));
   const histories: CoorbitalHistory[] = [];
   if (tasks.length > 0) {
-    const data = await workerData(tasks, opts.windowYears, opts.threads);
-    if (opts.threads === 1) histories.push(...tasks.map((t) => confirmTask(t, data)));
-    else histories.push(...await mapInWorkers<ConfirmTask, CoorbitalHistory>(import.meta.url, 'coorbitalWorker', tasks, { threads: opts.threads, workerData: data }));
+    const planets = await filledPlanets(tasks, opts.windowYears, opts.threads);
+    if (opts.threads === 1) histories.push(...tasks.map((t) => confirmTask(t, planets)));
+    else histories.push(...await mapInWorkers<ConfirmTask, CoorbitalHistory>(import.meta.url, 'coorbitalWorker', tasks, { threads: opts.threads, workerData: workerData(planets) }));
   }
   const byEntry = new Map<number, CoorbitalHistory>(chosen.map((k, j) => [k, histories[j]]));
   return entries.map((entry, k) => ({

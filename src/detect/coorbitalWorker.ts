@@ -1,7 +1,8 @@
 /**
  * Worker-thread side of the co-orbital confirmations (coorbitalConfirm.ts): rebuilds the
  * planets' Chebyshev cache from the tables the main thread filled, once, then integrates
- * each body it is sent. confirmTask is also what a single-threaded run calls directly.
+ * each body it is sent. confirmTask is also what a single-threaded run calls directly, with
+ * the cache the main thread filled.
  */
 import { workerData } from 'node:worker_threads';
 import type { PlanetName } from '../core/constants.js';
@@ -11,6 +12,7 @@ import { EphemerisCache, type EphemerisCacheOptions } from '../core/ephemeris/ep
 import type { CacheBodyTable } from '../core/ephemeris/ephemerisCacheTable.js';
 import { Vsop87Ephemeris } from '../core/ephemeris/vsop87Ephemeris.js';
 import { serveWorkerTasks } from '../core/workerTasks.js';
+import type { Ephemeris } from '../core/types.js';
 
 /** One body to integrate: heliocentric J2000-ecliptic state (au, au/day) at its epoch. */
 export interface ConfirmTask {
@@ -39,13 +41,14 @@ function ephemerisOf(data: ConfirmWorkerData): EphemerisCache {
   return cache;
 }
 
-export function confirmTask(task: ConfirmTask, data: ConfirmWorkerData): CoorbitalHistory {
+/** One body's history with the planets of `ephemeris` (filled over the task's window). */
+export function confirmTask(task: ConfirmTask, ephemeris: Ephemeris): CoorbitalHistory {
   return confirmCoorbital(Float64Array.from(task.state), task.epochJdTDB, task.planet, {
-    windowYears: task.windowYears, ephemeris: ephemerisOf(data), series: task.series,
+    windowYears: task.windowYears, ephemeris, series: task.series,
   });
 }
 
 if (workerData !== null && typeof workerData === 'object' && 'tables' in workerData) {
   const data = workerData as ConfirmWorkerData;
-  serveWorkerTasks((task: ConfirmTask) => confirmTask(task, data));
+  serveWorkerTasks((task: ConfirmTask) => confirmTask(task, ephemerisOf(data)));
 }
