@@ -13,7 +13,7 @@
 //    it "has been a quasi-satellite of Earth for nearly 100 years and should remain so for
 //    hundreds of years into the future", with transitions to horseshoe motion outside that span
 //    (encyclopedia page of the fixture's README).
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { runCli, tempDir } from './cliHarness.js';
@@ -28,10 +28,11 @@ interface Body {
   history: { stateAtEpoch: string; epochJdTDB: number; segments: Segment[]; captures: unknown[] };
 }
 let bodies: Body[] = [];
+let out = '';
 
 beforeAll(() => {
-  const out = tempDir();
-  const r = runCli(['coorbitals', 'test/fixtures/csv/published-coorbitals.csv', '--out', out]);
+  out = tempDir();
+  const r = runCli(['coorbitals', 'test/fixtures/csv/published-coorbitals.csv', '--threads', '2', '--out', out]);
   expect(r.status, r.stderr).toBe(0);
   bodies = JSON.parse(readFileSync(join(out, 'coorbitals.json'), 'utf8')).bodies;
 });
@@ -77,5 +78,28 @@ describe('published Earth co-orbitals', () => {
     expect((s.endJdTDB - JD_2016_0) / JULIAN_YEAR_DAYS).toBeGreaterThan(200); // "hundreds of years"; measured 268 yr
     // outside the quasi-satellite span the history holds other states (published: transitions)
     expect(b.history.segments.some((x) => x.state !== 'quasi-satellite')).toBe(true);
+  });
+});
+
+/** Every file under dir (one level of subfolders), relative path → bytes. */
+function tree(dir: string): Map<string, Buffer> {
+  const files = new Map<string, Buffer>();
+  for (const name of readdirSync(dir).sort()) {
+    const path = join(dir, name);
+    if (statSync(path).isDirectory()) for (const sub of readdirSync(path).sort()) files.set(`${name}/${sub}`, readFileSync(join(path, sub)));
+    else files.set(name, readFileSync(path));
+  }
+  return files;
+}
+
+describe('worker threads', () => {
+  it('one thread writes the same bytes as two, every file and plot', () => {
+    const single = tempDir();
+    const r = runCli(['coorbitals', 'test/fixtures/csv/published-coorbitals.csv', '--threads', '1', '--out', single]);
+    expect(r.status, r.stderr).toBe(0);
+    const a = tree(out), b = tree(single);
+    expect([...b.keys()]).toEqual([...a.keys()]);
+    expect(a.size).toBeGreaterThan(4); // tables, report and the two bodies' plots
+    for (const [name, bytes] of a) expect(b.get(name)!.equals(bytes), name).toBe(true);
   });
 });
