@@ -41,6 +41,13 @@ export function stateBands(h: CoorbitalHistory): StateBand[] {
     .filter((b) => b.startYears < b.endYears);
 }
 
+/** "years −74.9 to +74.9 from the epoch" for the path's first and last times. */
+function pathSpan(tYears: readonly number[]): string {
+  if (tYears.length === 0) return '';
+  const signed = (y: number): string => `${y < 0 ? '−' : '+'}${Math.abs(y).toFixed(1)}`;
+  return `years ${signed(tYears[0])} to ${signed(tYears[tYears.length - 1])} from the epoch`;
+}
+
 /**
  * Render and stage the two charts of every body given that has a series (the others get
  * none); returns each plotted body's chart files.
@@ -61,7 +68,9 @@ export async function writeCoorbitalPlots(
     const planet = planetTitle(b.entry.planet);
     const names = { phi: `${stems[j]}-phi`, rotating: `${stems[j]}-rotating` };
     const phi = await renderChart(resonantAngleChart({ designation, planet, tYears: s.tYears, phiDeg: s.phiDeg, bands: stateBands(h) }));
-    const rot = await renderChart(rotatingFrameChart({ designation, planet, xAu: s.xAu, yAu: s.yAu, planetDistanceAu: s.planetDistanceAu }));
+    const rot = await renderChart(rotatingFrameChart({
+      designation, planet, xAu: s.xAu, yAu: s.yAu, planetDistanceAu: s.planetDistanceAu, span: pathSpan(s.pathTYears),
+    }));
     for (const [name, chart] of [[names.phi, phi], [names.rotating, rot]] as const) {
       const svgPath = stage.path(`${PLOTS_FOLDER}/${name}.svg`);
       stage.path(`${PLOTS_FOLDER}/${name}.png`);

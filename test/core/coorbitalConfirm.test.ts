@@ -95,17 +95,34 @@ describe('N-body confirmation of planted co-orbitals', () => {
       expect(n).toBeLessThanOrEqual(2000);
       expect(n).toBeGreaterThan(1000);
       expect(s.totalSamples).toBeGreaterThan(n); // thinned: 500 yr at ≤ P/20 is ~10 000 samples
-      for (const a of [s.phiDeg, s.xAu, s.yAu]) expect(a.length).toBe(n);
+      expect(s.phiDeg.length).toBe(n);
       expect(s.tYears[0]).toBeCloseTo(-WINDOW_YEARS, 0);
       expect(s.tYears[n - 1]).toBeCloseTo(WINDOW_YEARS, 0);
       expect(Math.abs(s.planetDistanceAu - 1)).toBeLessThan(0.02);
       for (let k = 0; k < n; k++) {
         expect(s.phiDeg[k]).toBeGreaterThan(-180);
         expect(s.phiDeg[k]).toBeLessThanOrEqual(180);
+      }
+      // The path: 3000 consecutive φ samples (no thinning: a thinned yearly loop aliases),
+      // equally spaced, centred on the epoch.
+      const m = s.pathTYears.length;
+      expect(m).toBe(3000);
+      for (const a of [s.xAu, s.yAu]) expect(a.length).toBe(m);
+      const step = s.pathTYears[1] - s.pathTYears[0];
+      expect(step * 365.25).toBeLessThanOrEqual(365.26 / 20); // at most P/20
+      for (let k = 1; k < m; k++) expect(Math.abs(s.pathTYears[k] - s.pathTYears[k - 1] - step)).toBeLessThan(1e-9);
+      expect(Math.abs(s.pathTYears[0] + s.pathTYears[m - 1])).toBeLessThanOrEqual(step + 1e-9);
+      const phiAt = new Map(s.tYears.map((t, k) => [t.toFixed(6), s.phiDeg[k]]));
+      let compared = 0;
+      for (let k = 0; k < m; k++) {
         expect(side * s.yAu[k]).toBeGreaterThan(0);
         expect(Math.abs(Math.hypot(s.xAu[k], s.yAu[k]) - 1)).toBeLessThan(0.05);
-        expect(Math.abs((Math.atan2(s.yAu[k], s.xAu[k]) * 180) / Math.PI - s.phiDeg[k])).toBeLessThan(4);
+        const phi = phiAt.get(s.pathTYears[k].toFixed(6));
+        if (phi === undefined) continue; // a φ sample thinned out of the φ series
+        compared++;
+        expect(Math.abs((Math.atan2(s.yAu[k], s.xAu[k]) * 180) / Math.PI - phi)).toBeLessThan(4);
       }
+      expect(compared).toBeGreaterThan(100);
     }
     // Plain arrays (they cross worker threads by structured clone).
     expect(Array.isArray(l4.series!.xAu)).toBe(true);

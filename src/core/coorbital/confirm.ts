@@ -28,8 +28,14 @@ export interface ConfirmOptions extends CoorbitalSamplingOptions {
   series?: boolean;
 }
 
-/** Most samples kept in a CoorbitalSeries: enough for a chart, small to pass between threads [design]. */
+/** Most φ samples kept in a CoorbitalSeries: enough for a chart, small to pass between threads [design]. */
 export const SERIES_MAX_POINTS = 2000;
+/**
+ * Longest rotating-frame path in a CoorbitalSeries, in consecutive φ samples: with the Earth's
+ * φ step of at most P/20 (~18 d) about ±75 years around the epoch, a few quasi-satellite
+ * loops or most of a tadpole cycle, each yearly epicycle drawn with 20 points or more [design].
+ */
+export const PATH_MAX_POINTS = 3000;
 
 /** φ (rad, unwrapped) as degrees on (−180, 180]; NaN stays NaN. */
 function wrappedDeg(phiRad: number): number {
@@ -39,21 +45,34 @@ function wrappedDeg(phiRad: number): number {
   return d;
 }
 
-/** The thinned series of one body (sampled with rotatingFrame). */
+/** The chart series of one body (sampled with rotatingFrame): thinned φ, unthinned path about the epoch. */
 function seriesOf(sampling: CoorbitalSampling, s: CoorbitalSamples, epochJdTDB: number): CoorbitalSeries {
   const t = sampling.phiTimesJd;
   const keep = Array.from(strideIndices(t.length, SERIES_MAX_POINTS));
   const r = sampling.planetDistanceAu!;
   let sum = 0;
   for (let k = 0; k < r.length; k++) sum += r[k];
+  const [from, to] = pathRange(t, epochJdTDB);
+  const path = Array.from({ length: to - from }, (_, j) => from + j);
+  const years = (k: number): number => (t[k] - epochJdTDB) / DAYS_PER_JULIAN_YEAR;
   return {
-    tYears: keep.map((k) => (t[k] - epochJdTDB) / DAYS_PER_JULIAN_YEAR),
+    tYears: keep.map(years),
     phiDeg: keep.map((k) => wrappedDeg(s.phiUnwrappedRad[k])),
-    xAu: keep.map((k) => s.rotatingXAu![k]),
-    yAu: keep.map((k) => s.rotatingYAu![k]),
+    pathTYears: path.map(years),
+    xAu: path.map((k) => s.rotatingXAu![k]),
+    yAu: path.map((k) => s.rotatingYAu![k]),
     planetDistanceAu: sum / r.length,
     totalSamples: t.length,
   };
+}
+
+/** Indices [from, to) of at most PATH_MAX_POINTS consecutive samples centred on the epoch, within the grid. */
+function pathRange(t: Float64Array, epochJdTDB: number): [number, number] {
+  let centre = 0;
+  while (centre + 1 < t.length && t[centre + 1] <= epochJdTDB) centre++;
+  const n = Math.min(PATH_MAX_POINTS, t.length);
+  const from = Math.max(0, Math.min(centre - Math.floor(n / 2), t.length - n));
+  return [from, from + n];
 }
 
 /** The state of the segment holding `jd` (the last one when jd is at the very end). */

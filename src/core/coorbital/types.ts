@@ -68,9 +68,12 @@ export interface CoorbitalHistory {
 }
 
 /**
- * Thinned samples of one N-body history, for plotting: plain arrays of equal length (they
- * cross worker threads as they are), at most SERIES_MAX_POINTS (confirm.ts), every k-th φ
- * sample with the first and the last. The rotating frame is the one of
+ * Samples of one N-body history, for plotting: plain arrays (they cross worker threads as
+ * they are). φ over the whole window, thinned to at most SERIES_MAX_POINTS (confirm.ts):
+ * every k-th φ sample with the first and the last. The path in the rotating frame is NOT
+ * thinned (every k-th point of a loop made once a year aliases into a zigzag): it is the run
+ * of consecutive φ samples centred on the epoch, at most PATH_MAX_POINTS (confirm.ts) long,
+ * cut at the window's ends. The rotating frame is the one of
  * CoorbitalSamplingOptions.rotatingFrame (sampleCoorbital.ts): heliocentric position
  * projected on the J2000 ecliptic and turned by −(the planet's heliocentric longitude), so
  * the Sun is at the origin, the planet on +x, and L4 (60° ahead of it) at y > 0.
@@ -78,7 +81,8 @@ export interface CoorbitalHistory {
 export interface CoorbitalSeries {
   tYears: number[]; // Julian years from the epoch
   phiDeg: number[]; // φ = λ − λ_P wrapped to (−180, 180]
-  xAu: number[]; // rotating frame
+  pathTYears: number[]; // the path's times, Julian years from the epoch: consecutive φ samples
+  xAu: number[]; // rotating frame, at pathTYears
   yAu: number[];
   planetDistanceAu: number; // the planet's mean distance on +x over the sampled window
   totalSamples: number; // φ samples before thinning

@@ -15,6 +15,7 @@ export interface RotatingFrameChartInput {
   xAu: ArrayLike<number>; // rotating frame, Sun at origin, planet on +x; in time order
   yAu: ArrayLike<number>;
   planetDistanceAu: number; // aP: the planet sits at (aP, 0)
+  span?: string; // what part of the history the path covers, for the subtitle (e.g. "−75 to +75 years from the epoch")
   maxPoints?: number; // default DEFAULT_MAX_POINTS
 }
 
@@ -63,7 +64,7 @@ export function rotatingFrameChart(input: RotatingFrameChartInput): TopLevelSpec
     { x: 0, y: 0, name: 'Sun', colour: OKABE_ITO.orange },
     { x: input.planetDistanceAu, y: 0, name: input.planet, colour: OKABE_ITO.blue },
   ];
-  const note = thinningNote(input.xAu.length, keep.length, 'positions');
+  const note = [input.span ?? '', thinningNote(input.xAu.length, keep.length, 'positions')].filter((x) => x !== '').join('; ');
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
     title: { text: `${input.designation}: path in the frame rotating with ${input.planet}`, ...(note ? { subtitle: note } : {}) },
@@ -72,7 +73,7 @@ export function rotatingFrameChart(input: RotatingFrameChartInput): TopLevelSpec
     layer: [
       {
         data: { values: path },
-        mark: { type: 'line', color: 'black', strokeWidth: 0.8, invalid: 'break-paths-show-domains', aria: false },
+        mark: { type: 'line', color: 'black', strokeWidth: 0.5, opacity: 0.55, invalid: 'break-paths-show-domains', aria: false },
         encoding: { x, y, order: { field: 'k', type: 'quantitative' } },
       },
       {
@@ -82,7 +83,7 @@ export function rotatingFrameChart(input: RotatingFrameChartInput): TopLevelSpec
       },
       {
         data: { values: markers },
-        mark: { type: 'text', dy: -12, fontSize: 12 },
+        mark: { type: 'text', dy: -14, fontSize: 12, fontWeight: 'bold' },
         encoding: { x, y, text: { field: 'name' } },
       },
     ],
