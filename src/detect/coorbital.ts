@@ -22,21 +22,21 @@ import { memberUpperTailFraction } from './empiricalTail.js';
 import { coorbitalCandidate, type CoorbitalBodyResult } from './coorbitalCandidate.js';
 import { confirmEntries } from './coorbitalConfirm.js';
 import { predictEntries } from './coorbitalPredict.js';
-import { COORBITAL_NOT_SCREENED, defaultZoneHalfWidth, screenCoorbitalZone } from './coorbitalZone.js';
+import { COORBITAL_NOT_SCREENED, defaultZoneHalfWidth, screenCoorbitalZone, type ZoneSkip } from './coorbitalZone.js';
 import type { Candidate, Detector, DetectorResult } from './types.js';
 import type { Catalogue } from '../clean/types.js';
 import type { CoorbitalOptions } from './coorbitalOptions.js';
 
 /** Every screened body's result, in screening order (the `coorbitals` command writes them all). */
 export async function analyseCoorbitals(cat: Catalogue, opts: CoorbitalOptions): Promise<{
-  results: CoorbitalBodyResult[]; notScreened: Record<string, number>;
+  results: CoorbitalBodyResult[]; notScreened: Record<string, number>; skipped: ZoneSkip[];
 }> {
   const planets = opts.planets.length > 0 ? opts.planets : PLANETS;
   const widths = planets.map((p) => opts.zoneHalfWidth ?? defaultZoneHalfWidth(p));
-  const { entries, notScreened } = screenCoorbitalZone(cat, planets, widths, new Vsop87Ephemeris());
+  const { entries, notScreened, skipped } = screenCoorbitalZone(cat, planets, widths, new Vsop87Ephemeris());
   const predictions = await predictEntries(entries, opts.threads);
   const results = await confirmEntries(cat, entries, predictions, opts);
-  return { results, notScreened };
+  return { results, notScreened, skipped };
 }
 
 /** Candidates of the resonant bodies, with tail fractions over every screened body. */

@@ -86,20 +86,32 @@ function planetOfZone(a: number, planets: readonly PlanetName[], widths: readonl
   return -1;
 }
 
-/** Screens every body; counts the others by reason (ids of COORBITAL_NOT_SCREENED). */
+/** A body not screened for a reason of its own (not merely outside every zone). */
+export interface ZoneSkip {
+  index: number; // catalogue row
+  reason: Exclude<CoorbitalNotScreened, 'outside-coorbital-zone'>;
+}
+
+/**
+ * Screens every body; counts the others by reason (ids of COORBITAL_NOT_SCREENED) and lists
+ * those not screened for a reason of their own (unbound, elements missing, epoch outside the
+ * ephemeris), so each can be named in the output.
+ */
 export function screenCoorbitalZone(
   cat: Catalogue, planets: readonly PlanetName[], widths: readonly number[], eph: Ephemeris,
-): { entries: ZoneEntry[]; notScreened: Record<CoorbitalNotScreened, number> } {
+): { entries: ZoneEntry[]; notScreened: Record<CoorbitalNotScreened, number>; skipped: ZoneSkip[] } {
   const notScreened = Object.fromEntries(Object.keys(COORBITAL_NOT_SCREENED).map((r) => [r, 0])) as Record<CoorbitalNotScreened, number>;
   const memo = new PlanetOrbitMemo(eph);
   const entries: ZoneEntry[] = [];
+  const skipped: ZoneSkip[] = [];
+  const skip = (index: number, reason: ZoneSkip['reason']): void => { notScreened[reason]++; skipped.push({ index, reason }); };
   for (let k = 0; k < cat.size; k++) {
-    if (cat.e[k] >= 1) { notScreened.unbound++; continue; }
-    if (elementsMissing(cat, k)) { notScreened['missing-elements']++; continue; }
+    if (cat.e[k] >= 1) { skip(k, 'unbound'); continue; }
+    if (elementsMissing(cat, k)) { skip(k, 'missing-elements'); continue; }
     const p = planetOfZone(cat.a[k], planets, widths);
     if (p < 0) { notScreened['outside-coorbital-zone']++; continue; }
     const epochJdTDB = cat.epochJdTT[k] + tdbMinusTtSeconds(cat.epochJdTT[k]) / SECONDS_PER_DAY;
-    if (epochJdTDB < eph.startJdTDB || epochJdTDB > eph.endJdTDB) { notScreened['epoch-outside-ephemeris']++; continue; }
+    if (epochJdTDB < eph.startJdTDB || epochJdTDB > eph.endJdTDB) { skip(k, 'epoch-outside-ephemeris'); continue; }
     const planet = planets[p];
     const orbit = memo.at(planet, epochJdTDB);
     entries.push({
@@ -110,5 +122,5 @@ export function screenCoorbitalZone(
       planetAAu: orbit.aAu,
     });
   }
-  return { entries, notScreened };
+  return { entries, notScreened, skipped };
 }
