@@ -75,7 +75,7 @@ async function timedAsync<T>(f: () => Promise<T>): Promise<{ value: T; wallS: nu
 
 /** Part 1: screen and predict over a population-only dump, all eight planets. */
 async function benchPredict(dir: string, rows: number, seed: number): Promise<void> {
-  const gen = timed(() => generateDemo({ seed, outDir: join(dir, 'dump'), bodies: rows, populationOnly: true }));
+  const gen = await timedAsync(() => generateDemo({ seed, outDir: join(dir, 'dump'), bodies: rows, populationOnly: true }));
   const file = gen.value.files[0];
   console.log(`1. screen + predict, all eight planets: ${fmtInt(rows)}-row dump (seed ${seed}), ${(statSync(file).size / 1e6).toFixed(1)} MB`);
   console.log(`   generation (not measured below): ${gen.wallS.toFixed(2)} s`);

@@ -121,7 +121,7 @@ function reportScan(scan: ScanRun, summary: ScanSummaryView | null, generatedRow
   }
 }
 
-function main(): void {
+async function main(): Promise<void> {
   const o = new Command('bench-ingest')
     .option('--rows <n>', 'rows in the generated dump', integerAtLeast(100), 1_500_000)
     .option('--seed <n>', 'generator seed', integerAtLeast(0), DEFAULT_SEED)
@@ -132,7 +132,7 @@ function main(): void {
   const dir = mkdtempSync(join(tmpdir(), 'wayward-bench-ingest-'));
   try {
     const t0 = process.hrtime.bigint();
-    const gen = generateDemo({ seed: o.seed, outDir: join(dir, 'dump'), bodies: o.rows, populationOnly: true });
+    const gen = await generateDemo({ seed: o.seed, outDir: join(dir, 'dump'), bodies: o.rows, populationOnly: true });
     const genSeconds = secondsSince(t0);
     const file = gen.files[0];
     const mb = statSync(file).size / 1e6;
@@ -153,4 +153,4 @@ function main(): void {
   }
 }
 
-main();
+await main();

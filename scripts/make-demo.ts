@@ -1,6 +1,6 @@
 /**
  * Writes the demo catalogue: `npx tsx scripts/make-demo.ts [--seed N] [--out DIR]
- * [--bodies N] [--comets N] [--population-only]`. Deterministic: a seed gives the same bytes.
+ * [--bodies N] [--comets N] [--population-only] [--no-integrate]`. Deterministic: a seed gives the same bytes.
  */
 import { Command, InvalidArgumentError } from 'commander';
 import { generateDemo } from './demo/generate.js';
@@ -19,9 +19,12 @@ const program = new Command('make-demo')
   .option('--bodies <n>', 'natural rows in the asteroid file', integer, DEFAULT_BODIES)
   .option('--comets <n>', 'natural comets', integer, DEFAULT_COMETS)
   .option('--population-only', 'asteroid file only, nothing planted', false)
+  .option('--no-integrate', 'do not judge the co-orbital plants by N-body (fast; truth.csv then makes no claim on their state)')
   .parse();
 
-const o = program.opts<{ seed: number; out: string; bodies: number; comets: number; populationOnly: boolean }>();
-const result = generateDemo({ seed: o.seed, outDir: o.out, bodies: o.bodies, comets: o.comets, populationOnly: o.populationOnly });
+const o = program.opts<{ seed: number; out: string; bodies: number; comets: number; populationOnly: boolean; integrate: boolean }>();
+const result = await generateDemo({
+  seed: o.seed, outDir: o.out, bodies: o.bodies, comets: o.comets, populationOnly: o.populationOnly, integrate: o.integrate,
+});
 for (const f of result.files) console.log(`wrote ${f}`);
 console.log(`orbits: ${result.orbitLines} lines, comets: ${result.cometLines} lines, truth rows: ${result.truth.length}`);

@@ -17,6 +17,7 @@ import { asteroidFileHeader } from './header.js';
 import { LineWriter } from './lineWriter.js';
 import { fillAsteroidRow, roundAsteroidElements } from './orbitRows.js';
 import type { PlantedAsteroid } from './plantedAsteroids.js';
+import type { CoorbitalTruthRow } from './coorbitalTruthTable.js';
 import { pickAsteroidClass, sampleNaturalAsteroid } from './population.js';
 import { sampleQuality } from './quality.js';
 import type { Random } from './random.js';
@@ -39,6 +40,7 @@ export interface AsteroidFileSpec {
   allocator: DesignationAllocator;
   truth: TruthRow[]; // appended to
   classCounts: Record<string, number>; // natural rows per class, appended to
+  coorbitals: CoorbitalTruthRow[]; // co-orbital plants as written, appended to
 }
 
 type Special =
@@ -112,6 +114,7 @@ function writeSpecial(spec: AsteroidFileSpec, w: LineWriter, row: OrbitRow, s: S
     const p = s.plant;
     const written = writeBody(spec, w, row, p.el, p.q, section);
     spec.truth.push(truthOf('orbits.txt', written, p.plantedClass, p.detector, p.el, p.note));
+    if (p.coorbital) spec.coorbitals.push({ designation: written.designation, line: written.line, plant: p.coorbital });
   } else if (s.kind === 'bad') {
     if (s.bad === 'garbage') {
       const line = w.write(spoilLine('garbage', ''));

@@ -1,20 +1,23 @@
 /**
- * The demo catalogue generator: one seeded PRNG drives everything, in a fixed order, so a
- * seed gives byte-identical files. Writes orbits.txt and, unless `populationOnly`,
- * comets.txt, truth.csv and README.md into `outDir`.
+ * The demo catalogue generator: seeded PRNGs drive everything, in a fixed order, so a seed
+ * gives byte-identical files. The co-orbital plants have a stream of their own (they are
+ * drawn again until the N-body integration gives the kind asked for: coorbitalPlan.ts), so
+ * their redraws do not move the rest of the catalogue. Writes orbits.txt and, unless
+ * `populationOnly`, comets.txt, truth.csv, coorbital-truth.csv and README.md into `outDir`.
  */
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { writeAsteroidFile } from './asteroidFile.js';
 import { writeCometFile } from './cometFile.js';
 import { DesignationAllocator } from './designations.js';
-import { planetMeanLongitudeDeg } from './planets.js';
+import { planCoorbitals } from './coorbitalPlan.js';
+import { writeCoorbitalTruthCsv, type CoorbitalTruthRow } from './coorbitalTruthTable.js';
+import { demoPlanetOrbits, planetLongitudeDeg, SCENARIO_PLANETS, type ScenarioPlanet } from './planets.js';
 import { planAsteroidPlants } from './plantedAsteroids.js';
 import { planCometPlants } from './plantedComets.js';
-import type { PlanetLongitudes } from './plantedCoorbitals.js';
 import { mulberry32 } from './random.js';
 import { writeDemoReadme } from './readme.js';
-import { DEFAULT_BODIES, DEFAULT_COMETS, DEMO_EPOCH_JD_TT } from './scenario.js';
+import { DEFAULT_BODIES, DEFAULT_COMETS } from './scenario.js';
 import { writeTruthCsv } from './truthTable.js';
 import type { TruthRow } from './types.js';
 
@@ -25,6 +28,7 @@ export interface DemoOptions {
   comets?: number; // natural comets (default 300)
   populationOnly?: boolean; // orbits.txt only: no plants, bad rows, duplicates or other files
   duplicates?: number; // older re-submitted orbits (default 5)
+  integrate?: boolean; // judge co-orbital plants by N-body (default true; false: fast tests, no claim on their state)
 }
 
 export interface DemoResult {
@@ -34,20 +38,16 @@ export interface DemoResult {
   truth: TruthRow[];
   asteroidClassCounts: Record<string, number>;
   cometClassCounts: Record<string, number>;
-  planetLongitudesDeg: PlanetLongitudes;
+  planetLongitudesDeg: Readonly<Record<ScenarioPlanet, number>>; // osculating λ_P at the epoch (VSOP87B)
+  coorbitals: CoorbitalTruthRow[]; // the co-orbital plants and controls as written
 }
 
-/** Mean longitudes of Earth, Mars, Jupiter and Neptune at the demo epoch (planets.ts). */
-export function demoPlanetLongitudes(): PlanetLongitudes {
-  return {
-    earth: planetMeanLongitudeDeg('earth', DEMO_EPOCH_JD_TT),
-    mars: planetMeanLongitudeDeg('mars', DEMO_EPOCH_JD_TT),
-    jupiter: planetMeanLongitudeDeg('jupiter', DEMO_EPOCH_JD_TT),
-    neptune: planetMeanLongitudeDeg('neptune', DEMO_EPOCH_JD_TT),
-  };
+/** Seed of the co-orbital plants' own stream: the demo seed moved by the golden-ratio Weyl constant (common practice). */
+export function coorbitalSeed(seed: number): number {
+  return (seed + 0x9e3779b9) >>> 0;
 }
 
-export function generateDemo(opts: DemoOptions): DemoResult {
+export async function generateDemo(opts: DemoOptions): Promise<DemoResult> {
   const bodies = opts.bodies ?? DEFAULT_BODIES;
   const comets = opts.comets ?? DEFAULT_COMETS;
   const populationOnly = opts.populationOnly ?? false;
@@ -55,18 +55,21 @@ export function generateDemo(opts: DemoOptions): DemoResult {
   if (!Number.isInteger(comets) || comets < 0) throw new RangeError(`generateDemo: comets must be an integer ≥ 0, got ${comets}`);
   mkdirSync(opts.outDir, { recursive: true });
   const random = mulberry32(opts.seed);
-  const lon = demoPlanetLongitudes();
+  const orbits = demoPlanetOrbits();
+  const lon = Object.fromEntries(SCENARIO_PLANETS.map((p) => [p, planetLongitudeDeg(orbits, p)])) as Record<ScenarioPlanet, number>;
   const allocator = new DesignationAllocator();
   const truth: TruthRow[] = [];
   const asteroidClassCounts: Record<string, number> = {};
   const cometClassCounts: Record<string, number> = {};
-  const plants = populationOnly ? [] : planAsteroidPlants(random, lon);
+  const coorbitalPlants = populationOnly ? [] : await planCoorbitals(mulberry32(coorbitalSeed(opts.seed)), orbits, opts.integrate ?? true);
+  const plants = populationOnly ? [] : planAsteroidPlants(random, coorbitalPlants);
+  const coorbitals: CoorbitalTruthRow[] = [];
   const cometPlants = populationOnly ? [] : planCometPlants(random);
   const orbitsPath = join(opts.outDir, 'orbits.txt');
   const orbitLines = writeAsteroidFile({
     path: orbitsPath, seed: opts.seed, random, bodies, plants, badRows: !populationOnly,
     duplicates: populationOnly ? 0 : (opts.duplicates ?? 5), jupiterLambdaDeg: lon.jupiter, allocator, truth,
-    classCounts: asteroidClassCounts,
+    classCounts: asteroidClassCounts, coorbitals,
   }, populationOnly);
   const files = [orbitsPath];
   let cometLines = 0;
@@ -75,10 +78,12 @@ export function generateDemo(opts: DemoOptions): DemoResult {
     cometLines = writeCometFile({ path: cometsPath, random, comets, plants: cometPlants, allocator, truth, classCounts: cometClassCounts });
     const truthPath = join(opts.outDir, 'truth.csv');
     writeTruthCsv(truthPath, truth);
+    const coorbitalPath = join(opts.outDir, 'coorbital-truth.csv');
+    writeCoorbitalTruthCsv(coorbitalPath, coorbitals);
     const readmePath = join(opts.outDir, 'README.md');
-    const result = { files, orbitLines, cometLines, truth, asteroidClassCounts, cometClassCounts, planetLongitudesDeg: lon };
+    const result = { files, orbitLines, cometLines, truth, asteroidClassCounts, cometClassCounts, planetLongitudesDeg: lon, coorbitals };
     writeDemoReadme(readmePath, opts, result);
-    files.push(cometsPath, truthPath, readmePath);
+    files.push(cometsPath, truthPath, coorbitalPath, readmePath);
   }
-  return { files, orbitLines, cometLines, truth, asteroidClassCounts, cometClassCounts, planetLongitudesDeg: lon };
+  return { files, orbitLines, cometLines, truth, asteroidClassCounts, cometClassCounts, planetLongitudesDeg: lon, coorbitals };
 }

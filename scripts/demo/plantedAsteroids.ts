@@ -4,8 +4,7 @@
  * note for truth.csv. Good-quality plants sit among numbered or multi-opposition orbits;
  * poor ones among one-opposition orbits.
  */
-import type { CoorbitalKind, PlanetLongitudes } from './plantedCoorbitals.js';
-import { sampleEarthCoorbital, samplePlanetTrojan } from './plantedCoorbitals.js';
+import type { CoorbitalPlant } from './coorbitalPlan.js';
 import type { OutlierVariant } from './plantedOutliers.js';
 import { sampleFamilyOutlier } from './plantedOutliers.js';
 import type { CometLikeVariant } from './plantedTisserand.js';
@@ -24,6 +23,7 @@ export interface PlantedAsteroid {
   el: DemoElements; // rounded as written
   q: DemoQuality;
   note: string;
+  coorbital?: CoorbitalPlant; // a co-orbital plant or control, with its judgement (coorbital-truth.csv)
 }
 
 const COMET_LIKE_PLAN: readonly (readonly [CometLikeVariant, boolean])[] = [
@@ -31,9 +31,6 @@ const COMET_LIKE_PLAN: readonly (readonly [CometLikeVariant, boolean])[] = [
   ...Array.from({ length: 5 }, () => ['ordinary', true] as const),
   ...Array.from({ length: 5 }, () => ['high-inclination', false] as const),
   ['retrograde', false], ['retrograde', false],
-];
-const COORBITAL_PLAN: readonly CoorbitalKind[] = [
-  'quasi-satellite', 'quasi-satellite', 'quasi-satellite', 'horseshoe', 'horseshoe', 'tadpole-L4', 'tadpole-L5',
 ];
 const OUTLIER_PLAN: readonly OutlierVariant[] = [
   'isolated-high-inclination', 'isolated-high-inclination', 'unusual-eccentricity',
@@ -58,8 +55,25 @@ function finish(
 
 const fmt = (x: number): string => (Math.round(x * 10) / 10).toFixed(1);
 
+/** truth.csv class of a co-orbital plant: the N-body state now ('not-integrated' without a run). */
+function coorbitalClass(c: CoorbitalPlant): string {
+  return c.judgement.history ? c.judgement.history.stateAtEpoch : 'not-integrated';
+}
+
+function coorbitalNote(c: CoorbitalPlant): string {
+  const planet = c.planet[0].toUpperCase() + c.planet.slice(1);
+  const j = c.judgement;
+  const phi = j.entry ? fmt((j.entry.phiRad * 180) / Math.PI) : '';
+  const what = c.plantedAs === 'passing' ? 'passing control in the 1:1 zone' : `co-orbital drawn as ${c.plantedAs}`;
+  const h = j.history;
+  const truth = h
+    ? `N-body (+-500 yr): ${h.stateAtEpoch} now${h.captures.length > 0 ? ', temporary capture' : ''}; predicted ${j.prediction!.state}`
+    : 'not integrated: no claim on its state';
+  return `${planet} ${what}, lambda - lambda_${planet} = ${phi} deg at epoch; ${truth} (coorbital-truth.csv)`;
+}
+
 /** Every planted asteroid-file body, in a fixed order (deterministic for a seed). */
-export function planAsteroidPlants(random: Random, lon: PlanetLongitudes): PlantedAsteroid[] {
+export function planAsteroidPlants(random: Random, coorbitals: readonly CoorbitalPlant[]): PlantedAsteroid[] {
   const out: PlantedAsteroid[] = [];
   for (const [variant, poor] of COMET_LIKE_PLAN) {
     const el = emptyElements();
@@ -71,16 +85,9 @@ export function planAsteroidPlants(random: Random, lon: PlanetLongitudes): Plant
     sampleBoundaryAsteroid(random, el);
     out.push(finish(random, 'boundary', 'tisserand', false, el, 'T_J just below 3 (within 0.05): boundary band, not an anomaly'));
   }
-  for (const kind of COORBITAL_PLAN) {
-    const el = emptyElements();
-    const d = sampleEarthCoorbital(random, kind, lon, el);
-    out.push(finish(random, kind, 'coorbital', false, el, `Earth co-orbital, lambda - lambda_Earth = ${fmt(d)} deg at epoch`));
-  }
-  for (const [planet, l4] of [['mars', false], ['mars', false], ['mars', true], ['neptune', true], ['neptune', true], ['neptune', false]] as const) {
-    const el = emptyElements();
-    const d = samplePlanetTrojan(random, planet, l4, lon, el);
-    out.push(finish(random, l4 ? 'tadpole-L4' : 'tadpole-L5', 'coorbital', false, el,
-      `${planet === 'mars' ? 'Mars' : 'Neptune'} Trojan, lambda - lambda_planet = ${fmt(d)} deg at epoch`));
+  for (const c of coorbitals) {
+    const p = finish(random, coorbitalClass(c), 'coorbital', false, { ...c.el }, coorbitalNote(c));
+    out.push({ ...p, coorbital: c });
   }
   OUTLIER_PLAN.forEach((variant, k) => {
     const el = emptyElements();

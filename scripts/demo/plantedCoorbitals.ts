@@ -1,70 +1,124 @@
 /**
- * Planted co-orbitals (1:1 mean-motion resonance) for the co-orbital detector: Earth
- * quasi-satellites, horseshoe and tadpole (L4/L5) orbits, Mars and Neptune Trojans.
- * Plausible initial conditions only: a close to the planet's mean a (PLANET_MEAN_A_AU,
- * Standish table) and the mean longitude λ = Ω + ω + M placed relative to the planet's mean
- * longitude at the epoch (planets.ts). Libration types in the co-orbital problem: Murray &
- * Dermott 1999 §3.9 (tadpole about ±60°, horseshoe spanning 180°, quasi-satellite λ − λ_p
- * near 0 with e larger than the a-offset); the ranges below are from memory.
+ * Draws of planted co-orbitals (1:1 mean-motion resonance), placed relative to the planet's
+ * osculating orbit at the demo epoch from the ephemeris (planets.ts), as the co-orbital
+ * detector sees it: a = a_P (1 + x) and λ = λ_P + φ with λ = Ω + ω + M. A draw is only a
+ * starting point: the N-body integration (coorbitalTruth.ts) says what it is, and a draw that
+ * does not come out as the kind it was drawn for is drawn again (coorbitalPlan.ts).
+ * Libration types of the co-orbital problem: Murray & Dermott 1999 §3.9 (tadpoles about ±60°
+ * within |x| ≲ √(8μ/3), horseshoes spanning 180°, quasi-satellites with φ near 0 and e
+ * larger than the a-offset); the ranges below are the project's choices, from memory.
  */
-import { PLANET_MEAN_A_AU } from '../../src/core/constants.js';
+import { DEG_PER_RAD, GM_SUN_AU3_PER_DAY2, planetGmAu3PerDay2 } from '../../src/core/constants.js';
+import { hillRadiusAu } from '../../src/core/coorbital/capture.js';
+import { Vsop87Ephemeris } from '../../src/core/ephemeris/vsop87Ephemeris.js';
+import { wrapDeg360 } from '../../src/core/math.js';
+import { stateToSemimajorElements } from '../../src/core/orbit/stateToElements.js';
 import { placeLongitudes } from './outerPopulation.js';
-import type { ScenarioPlanet } from './planets.js';
+import { demoEpochJdTDB, planetLongitudeDeg, type PlanetOrbits, type ScenarioPlanet } from './planets.js';
 import type { Random } from './random.js';
 import { normal, uniform, uniformAngleDeg } from './random.js';
 import type { DemoElements } from './types.js';
 
-export type CoorbitalKind = 'quasi-satellite' | 'horseshoe' | 'tadpole-L4' | 'tadpole-L5';
+/** What a co-orbital plant is drawn for: a state of φ, a temporary capture, or a passing control. */
+export type CoorbitalDraw =
+  | 'quasi-satellite' | 'horseshoe' | 'tadpole-L4' | 'tadpole-L5' | 'compound' | 'temporary-capture' | 'passing';
 
-/** Planet mean longitudes at the epoch, deg. */
-export type PlanetLongitudes = Readonly<Record<ScenarioPlanet, number>>;
+const sign = (random: Random): number => (random() < 0.5 ? -1 : 1);
 
-function plantAt(random: Random, out: DemoElements, lambdaDeg: number): void {
+/** Places a body at offset x from the planet's osculating a and at φ (deg) from λ_P. */
+function placeRelative(random: Random, orbits: PlanetOrbits, planet: ScenarioPlanet, x: number, phiDeg: number, out: DemoElements): void {
+  out.aAu = orbits[planet].aAu * (1 + x);
   out.nodeDeg = uniformAngleDeg(random);
-  placeLongitudes(out, lambdaDeg, uniformAngleDeg(random));
+  placeLongitudes(out, wrapDeg360(planetLongitudeDeg(orbits, planet) + phiDeg), uniformAngleDeg(random));
 }
 
-/** An Earth co-orbital of the given kind; returns λ − λ_E in degrees as planted. */
-export function sampleEarthCoorbital(random: Random, kind: CoorbitalKind, lon: PlanetLongitudes, out: DemoElements): number {
-  const aE = PLANET_MEAN_A_AU.earth;
-  let dLambda: number;
-  if (kind === 'quasi-satellite') {
-    out.aAu = aE + normal(random, 0, 0.0004);
-    out.e = uniform(random, 0.05, 0.2);
-    out.iDeg = uniform(random, 0.5, 8);
-    dLambda = uniform(random, -3, 3);
-  } else if (kind === 'horseshoe') {
-    out.aAu = aE + (random() < 0.5 ? -1 : 1) * uniform(random, 0.002, 0.01);
-    out.e = uniform(random, 0.02, 0.15);
-    out.iDeg = uniform(random, 0.5, 10);
-    dLambda = (random() < 0.5 ? -1 : 1) * uniform(random, 120, 175);
-  } else {
-    out.aAu = aE + uniform(random, -0.003, 0.003);
-    out.e = uniform(random, 0.05, 0.2);
-    out.iDeg = uniform(random, 1, 20);
-    dLambda = (kind === 'tadpole-L4' ? 60 : -60) + uniform(random, -5, 5);
+/** Relative offset x, e, i (deg), φ (deg) of one draw for a planet's resonant kinds. */
+interface Shape { x: number; e: number; iDeg: number; phiDeg: number }
+
+function earthShape(random: Random, kind: CoorbitalDraw): Shape {
+  switch (kind) {
+    case 'quasi-satellite':
+      return { x: normal(random, 0, 0.0004), e: uniform(random, 0.05, 0.2), iDeg: uniform(random, 0.5, 8), phiDeg: uniform(random, -3, 3) };
+    case 'horseshoe':
+      return { x: sign(random) * uniform(random, 0.002, 0.008), e: uniform(random, 0.02, 0.15), iDeg: uniform(random, 0.5, 10), phiDeg: sign(random) * uniform(random, 120, 175) };
+    case 'compound': // eccentric, near φ = 0 and just outside the quasi-satellite well: φ sweeps over 0 and ±60° or 180°
+      return { x: sign(random) * uniform(random, 0.003, 0.005), e: uniform(random, 0.15, 0.3), iDeg: uniform(random, 0.5, 5), phiDeg: uniform(random, -10, 10) };
+    case 'passing': // inside the 1:1 zone (|x| ≤ 0.017) but beyond the horseshoe widths
+      return { x: sign(random) * uniform(random, 0.011, 0.016), e: uniform(random, 0.02, 0.15), iDeg: uniform(random, 0.5, 10), phiDeg: uniform(random, -180, 180) };
+    default: // tadpoles: |x| within √(8μ/3) ≈ 0.0029 for the Earth–Moon system
+      return { x: uniform(random, -0.0025, 0.0025), e: uniform(random, 0.05, 0.2), iDeg: uniform(random, 1, 20), phiDeg: (kind === 'tadpole-L4' ? 60 : -60) + uniform(random, -5, 5) };
   }
-  plantAt(random, out, lon.earth + dLambda);
-  out.H = uniform(random, 20, 26);
-  return dLambda;
 }
 
-/** A Trojan of Mars or Neptune about L4 (+60°) or L5 (−60°); returns λ − λ_p, degrees. */
-export function samplePlanetTrojan(
-  random: Random, planet: 'mars' | 'neptune', l4: boolean, lon: PlanetLongitudes, out: DemoElements,
-): number {
+/** Trojans (about ±60°) and passing controls of Mars, Jupiter and Neptune. */
+function outerShape(random: Random, planet: Exclude<ScenarioPlanet, 'earth'>, kind: CoorbitalDraw): Shape {
+  const side = kind === 'tadpole-L4' ? 60 : -60;
   if (planet === 'mars') {
-    out.aAu = PLANET_MEAN_A_AU.mars + uniform(random, -0.002, 0.002);
-    out.e = uniform(random, 0.01, 0.1);
-    out.iDeg = uniform(random, 10, 30);
-    out.H = uniform(random, 16, 20);
-  } else {
-    out.aAu = PLANET_MEAN_A_AU.neptune + uniform(random, -0.05, 0.05);
-    out.e = uniform(random, 0.01, 0.1);
-    out.iDeg = uniform(random, 1, 30);
-    out.H = uniform(random, 7, 9.5);
+    return kind === 'passing'
+      ? { x: sign(random) * uniform(random, 0.011, 0.016), e: uniform(random, 0.01, 0.1), iDeg: uniform(random, 1, 20), phiDeg: uniform(random, -180, 180) }
+      : { x: uniform(random, -0.0013, 0.0013), e: uniform(random, 0.01, 0.1), iDeg: uniform(random, 10, 30), phiDeg: side + uniform(random, -5, 5) };
   }
-  const dLambda = (l4 ? 60 : -60) + uniform(random, planet === 'mars' ? -5 : -10, planet === 'mars' ? 5 : 10);
-  plantAt(random, out, lon[planet] + dLambda);
-  return dLambda;
+  if (planet === 'jupiter') {
+    // zone |x| ≤ 2√(8μ/3) ≈ 0.10; tadpoles within √(8μ/3) ≈ 0.05. A control outside the
+    // Trojan band of the Tisserand screen keeps e ≤ 0.04 and i ≤ 2° so that its
+    // T_J = 1/(1+x) + 2 cos i √((1+x)(1−e²)) stays above 3 (at |x| ≥ 0.085 that needs
+    // cos i √(1−e²) > 0.9979; here ≥ 0.9986) and the Tisserand screen does not call it a boundary case.
+    return kind === 'passing'
+      ? { x: sign(random) * uniform(random, 0.085, 0.095), e: uniform(random, 0.01, 0.04), iDeg: uniform(random, 0.5, 2), phiDeg: uniform(random, -180, 180) }
+      : { x: uniform(random, -0.004, 0.004), e: uniform(random, 0.02, 0.1), iDeg: uniform(random, 1, 15), phiDeg: side + uniform(random, -8, 8) };
+  }
+  // Neptune: tadpoles within √(8μ/3) ≈ 0.012 (no passing control: coorbitalPlan.ts)
+  if (kind === 'passing') throw new RangeError('drawCoorbital: no passing control is drawn for Neptune (coorbitalPlan.ts)');
+  return { x: uniform(random, -0.0017, 0.0017), e: uniform(random, 0.01, 0.1), iDeg: uniform(random, 1, 30), phiDeg: side + uniform(random, -10, 10) };
+}
+
+/** Absolute magnitude range by planet (plausible sizes; project choice). */
+const H_RANGE: Readonly<Record<ScenarioPlanet, readonly [number, number]>> = {
+  earth: [20, 26], mars: [16, 20], jupiter: [11, 14], neptune: [7, 9.5],
+};
+
+/**
+ * A temporary capture: a body put at epoch within 1.2–2 Hill radii of the Earth–Moon
+ * barycentre with a planetocentric speed of 0.3–0.6 of the escape speed √(2GM/r) (common
+ * practice), so its geocentric two-body energy is negative there (capture.ts definition);
+ * its heliocentric osculating elements (GM_sun, as the catalogue's are) are written.
+ */
+function sampleCapture(random: Random, out: DemoElements): void {
+  const eph = new Vsop87Ephemeris();
+  const s = new Float64Array(6);
+  eph.helioState('emb', demoEpochJdTDB(), s);
+  const r = uniform(random, 1.2, 2) * hillRadiusAu('earth');
+  const v = uniform(random, 0.3, 0.6) * Math.sqrt((2 * planetGmAu3PerDay2('earth')) / r);
+  const unit = (): number[] => {
+    const lon = uniform(random, 0, 2 * Math.PI), z = uniform(random, -0.3, 0.3), c = Math.sqrt(1 - z * z);
+    return [c * Math.cos(lon), c * Math.sin(lon), z];
+  };
+  const p = unit(), w = unit();
+  for (let k = 0; k < 3; k++) {
+    s[k] += r * p[k];
+    s[k + 3] += v * w[k];
+  }
+  const el = new Float64Array(6);
+  stateToSemimajorElements(s, GM_SUN_AU3_PER_DAY2, el);
+  out.aAu = el[0];
+  out.e = el[1];
+  out.iDeg = el[2] * DEG_PER_RAD;
+  out.nodeDeg = wrapDeg360(el[3] * DEG_PER_RAD);
+  out.periDeg = wrapDeg360(el[4] * DEG_PER_RAD);
+  out.meanAnomalyDeg = wrapDeg360(el[5] * DEG_PER_RAD);
+}
+
+/** One draw for `kind` about `planet` into `out` (elements not yet rounded). */
+export function drawCoorbital(random: Random, orbits: PlanetOrbits, planet: ScenarioPlanet, kind: CoorbitalDraw, out: DemoElements): void {
+  if (kind === 'temporary-capture') {
+    if (planet !== 'earth') throw new RangeError(`drawCoorbital: temporary captures are drawn for the Earth only, not ${planet}`);
+    sampleCapture(random, out);
+  } else {
+    const s = planet === 'earth' ? earthShape(random, kind) : outerShape(random, planet, kind);
+    out.e = s.e;
+    out.iDeg = s.iDeg;
+    placeRelative(random, orbits, planet, s.x, s.phiDeg, out);
+  }
+  const [hLo, hHi] = H_RANGE[planet];
+  out.H = uniform(random, hLo, hHi);
 }

@@ -7,6 +7,8 @@ import { ASTEROID_CLASSES } from './population.js';
 import { COMET_CLASSES } from './cometPopulation.js';
 import { DEFAULT_BODIES, DEFAULT_COMETS } from './scenario.js';
 import type { DemoOptions, DemoResult } from './generate.js';
+import { COORBITAL_PLAN } from './coorbitalPlan.js';
+import type { CoorbitalTruthRow } from './coorbitalTruthTable.js';
 
 /** The command line that regenerates a demo directory with these options. */
 export function regenerateCommand(opts: DemoOptions): string {
@@ -27,6 +29,50 @@ function plantedTable(result: DemoResult): string {
     counts.set(key, (counts.get(key) ?? 0) + 1);
   }
   return [...counts].map(([k, n]) => `${k} ${n} |`).join('\n');
+}
+
+/** Planted co-orbitals: counts of state now (N-body) by planet and the kind each was drawn as. */
+function coorbitalTable(result: DemoResult): string {
+  const counts = new Map<string, number>();
+  const order = (c: CoorbitalTruthRow): number => COORBITAL_PLAN.findIndex(([p, k]) => p === c.plant.planet && k === c.plant.plantedAs);
+  for (const c of [...result.coorbitals].sort((x, y) => order(x) - order(y))) {
+    const h = c.plant.judgement.history;
+    const now = h ? h.stateAtEpoch : 'not integrated';
+    const key = `| ${c.plant.planet} | ${c.plant.plantedAs} | ${now} | ${h ? (h.captures.length > 0 ? 'yes' : 'no') : ''} |`;
+    counts.set(key, (counts.get(key) ?? 0) + 1);
+  }
+  return [...counts].map(([k, n]) => `${k} ${n} |`).join('\n');
+}
+
+function coorbitalSection(result: DemoResult): string {
+  const integrated = result.coorbitals.some((c) => c.plant.judgement.history);
+  return `**Co-orbitals.** ${result.coorbitals.length} bodies are planted in the 1:1 zones of the Earth, Mars,
+Jupiter and Neptune (src/detect/coorbitalZone.ts): Earth quasi-satellites, horseshoes, L4 and L5
+tadpoles, a compound orbit and a temporary capture (a body put at the epoch within 2 Hill radii
+of the Earth with negative geocentric two-body energy), Mars and Neptune Trojans, a group of
+Jupiter Trojans at L4 and L5 with small e, and passing controls (in a zone, circulating). Each
+is placed with the ephemeris: a = a_P (1 + x) and lambda = lambda_P + phi with the osculating
+a_P and lambda_P above, phi = lambda - lambda_P as the detector computes it.
+${integrated
+    ? `**Their truth is what the dynamics does**, not what they were drawn for: the generator runs the
+detector's own stages on the written (rounded) elements - the screen, the averaged prediction and
+the N-body confirmation over the epoch +-500 years (eight planets and the Sun's 1PN term, the
+detector's default window and force model) - and \`truth.csv\` gives as class the N-body state at the
+epoch (\`passing\` for a control). A draw that did not come out as the kind it was drawn for was drawn
+again from the seeded stream (column \`draws\`). \`coorbital-truth.csv\` has one row per body:
+planet, kind drawn for, state now, the prediction and whether it agrees (with the reason where
+it does not), phi and delta a / a_P at the epoch, years spent in each state over the window,
+the number of transitions and the sequence of states, temporary capture (geocentric energy < 0
+within 3 Hill radii, src/core/coorbital/capture.ts) yes/no with the number of episodes and the
+first one's start, and the least distance to the planet and when (years from the epoch).
+Prediction and N-body disagree now for ${result.coorbitals.filter((c) => c.plant.judgement.history && c.plant.judgement.prediction!.state !== c.plant.judgement.history.stateAtEpoch).length} of them (column \`disagreement_reason\`). There is
+no passing control for Neptune: in its zone the synodic period is at least ~4 800 years, so
+nothing there circulates once in +-500 years.`
+    : 'Generated without the N-body judge (--no-integrate): truth.csv names their class `not-integrated` and claims nothing about their dynamics.'}
+
+| planet | drawn as | N-body now | temporary capture | bodies |
+|---|---|---|---|---|
+${coorbitalTable(result)}`;
 }
 
 export function writeDemoReadme(path: string, opts: DemoOptions, result: DemoResult): void {
@@ -57,13 +103,15 @@ natural comet has T_J <= 2.95, so the Tisserand detector's comet-like and astero
 should be exactly the planted ones. T_J = a_J/a + 2 cos i sqrt((a/a_J)(1 - e^2)) with
 a_J = 5.2028870 au (Murray & Dermott 1999, section 3.4).
 
-**Approximations.** Planet positions are mean longitudes from the Standish table of
-approximate planetary elements (JPL), not an ephemeris: Earth ${lon.earth.toFixed(3)} deg,
-Mars ${lon.mars.toFixed(3)} deg, Jupiter ${lon.jupiter.toFixed(3)} deg, Neptune
-${lon.neptune.toFixed(3)} deg at the epoch; true longitudes differ by up to about 2e rad (2 deg
-for Earth, 5.5 deg for Jupiter). Co-orbitals, Trojans and Hildas are plausible initial
-conditions only. Family members have osculating elements equal to proper elements plus small
-noise (real osculating elements scatter more).
+**Planets.** Planet positions are the co-orbital detector's own: the osculating orbit of
+each planet (Earth-Moon barycentre, Mars, Jupiter, Neptune) from the project's VSOP87B
+ephemeris state at the epoch, with the planet's heliocentric Kepler constant GM_sun + GM_planet.
+Osculating mean longitudes at the epoch: Earth ${lon.earth.toFixed(4)} deg, Mars ${lon.mars.toFixed(4)} deg,
+Jupiter ${lon.jupiter.toFixed(4)} deg, Neptune ${lon.neptune.toFixed(4)} deg (J2000 ecliptic). Hildas and the
+natural Jupiter Trojans are plausible initial conditions only. Family members have osculating
+elements equal to proper elements plus small noise (real osculating elements scatter more).
+
+${coorbitalSection(result)}
 
 **Accounting.** \`orbits.txt\` has ${result.orbitLines} lines: a header block ending in a dashed
 line, blank lines between blocks, 8 malformed lines (class \`bad-row\`, expected rejects)

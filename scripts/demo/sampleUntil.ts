@@ -18,3 +18,17 @@ export function sampleUntil(
       `e=${last.e}, i=${last.iDeg}°`,
   );
 }
+
+/**
+ * sampleUntil for an acceptance that takes time (an N-body run): draws until `accept` holds,
+ * at most `maxTries` times; returns the number of draws made. Fails loudly like sampleUntil.
+ */
+export async function sampleUntilAsync(
+  label: string, maxTries: number, draw: () => void, accept: () => Promise<boolean>, last: DemoElements,
+): Promise<number> {
+  for (let k = 1; k <= maxTries; k++) {
+    draw();
+    if (await accept()) return k;
+  }
+  throw new Error(`${label}: no acceptable draw in ${maxTries} tries; last a=${last.aAu} au, e=${last.e}, i=${last.iDeg}°`);
+}

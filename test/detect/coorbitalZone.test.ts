@@ -25,9 +25,9 @@ describe('co-orbital zone widths', () => {
 });
 
 // Pipeline check on the invented demo catalogue: the generator placed each planted
-// co-orbital at a stated φ (truth.csv note, from mean longitudes of the planets' mean
-// elements); the screen, which takes the planets from VSOP87B at the epoch, must find each
-// in its planet's zone within a fraction of a degree of that φ.
+// co-orbital against the planet's osculating orbit from VSOP87B at the epoch and recorded
+// the φ of its written elements (data/demo/coorbital-truth.csv, 6 decimals); the screen must
+// find each in its planet's zone at that φ.
 describe('co-orbital screen on the demo catalogue', () => {
   let cat: Catalogue;
   let entries: ZoneEntry[];
@@ -41,22 +41,18 @@ describe('co-orbital screen on the demo catalogue', () => {
   it('counts every body once: screened + not screened = catalogue size', () => {
     const not = Object.values(notScreened).reduce((a, b) => a + b, 0);
     expect(entries.length + not).toBe(cat.size);
-    expect(notScreened.unbound).toBe(3); // the demo's three hyperbolic comets (summary.json qualityFlags)
+    expect(notScreened.unbound).toBe(5); // the demo's five hyperbolic comets (comets.txt, e > 1)
   });
 
-  it('finds every planted co-orbital in its planet\'s zone at the planted φ', () => {
-    const truth = parse(readFileSync(join(ROOT, 'data/demo/truth.csv')), { columns: true }) as { designation: string; detector: string; note: string }[];
-    const planted = truth.filter((t) => t.detector === 'coorbital');
-    expect(planted.length).toBe(13);
+  it('finds every planted co-orbital in its planet\'s zone at the recorded φ', () => {
+    const planted = parse(readFileSync(join(ROOT, 'data/demo/coorbital-truth.csv')), { columns: true }) as { designation: string; planet: string; phi_deg: string }[];
+    expect(planted.length).toBeGreaterThan(30);
     for (const t of planted) {
       const e = entries.find((x) => cat.designation[x.index] === t.designation);
       expect(e, t.designation).toBeDefined();
-      const planet = /^Earth/.test(t.note) ? 'earth' : /^Mars/.test(t.note) ? 'mars' : /^Neptune/.test(t.note) ? 'neptune' : '?';
-      expect(e!.planet, t.designation).toBe(planet);
-      const phiDeg = Number(/= (-?\d+\.\d) deg/.exec(t.note)![1]);
-      // Measured: worst 0.2° (the planets' osculating vs mean longitudes); bound 0.5°.
-      expect(Math.abs(e!.phiRad - phiDeg * RAD_PER_DEG) / RAD_PER_DEG, t.designation).toBeLessThan(0.5);
-      expect(Math.abs(e!.x), t.designation).toBeLessThan(0.01);
+      expect(e!.planet, t.designation).toBe(t.planet);
+      // the file prints φ with 6 decimals
+      expect(Math.abs(e!.phiRad / RAD_PER_DEG - Number(t.phi_deg)), t.designation).toBeLessThan(1e-6);
     }
   });
 
