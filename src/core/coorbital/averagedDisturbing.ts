@@ -25,10 +25,12 @@
  *
  * Cost: M = λ_P + φ − ϖ, so with the φ step and the λ_P step multiples of one fine step the
  * body is needed only on one grid of mean anomalies: max(N, N_φ) Kepler solves per orbit,
- * then N_φ × N distance evaluations with no allocation.
+ * each started from the previous root (keplerNear.ts), then N_φ × N distance evaluations with no
+ * allocation.
  */
 import { TWO_PI } from '../math.js';
 import { solveKeplerElliptic } from '../orbit/kepler.js';
+import { nextKeplerGuess, solveKeplerEllipticNear } from '../orbit/keplerNear.js';
 import type { AveragedOrbitShape } from './types.js';
 
 /** Buffers and tables for one (N_φ, N) pair; reuse it for every body. */
@@ -105,8 +107,10 @@ function fillBodyPositions(grid: DisturbingGrid, shape: AveragedOrbitShape, aRat
   const b = aRatio * Math.sqrt(1 - e * e);
   const h = TWO_PI / grid.fineCount;
   const m0 = 0.5 * grid.planetStride * h - nodeRad - periRad; // M_m = λ_P + φ − Ω − ω on the fine grid
+  let eccRad = NaN;
   for (let m = 0; m < grid.fineCount; m++) {
-    const eccRad = solveKeplerElliptic(m0 + m * h, e);
+    // each solve starts from the previous root (keplerNear.ts; within 2e-16 rad of the bracketed solver)
+    eccRad = m === 0 ? solveKeplerElliptic(m0, e) : solveKeplerEllipticNear(m0 + m * h, e, nextKeplerGuess(eccRad, e, h));
     const u = aRatio * (Math.cos(eccRad) - e), v = b * Math.sin(eccRad);
     grid.bodyX[m] = u * px + v * qx;
     grid.bodyY[m] = u * py + v * qy;
