@@ -6,7 +6,8 @@
  * kept. Prints, per planet, the bodies and how many were predicted again on the fine grid;
  * then, over the bodies the coarse grid decided, the state and close-approach differences and
  * the largest differences of period (relative), separatrix margin, angles, largest offset and
- * least distance (relative); and the CPU time per body of each path (one thread).
+ * least distance (relative), for all of them and for those with e ≤ 0.6 and i ≤ 30°; and the
+ * CPU time per body of each path (one thread).
  * Figures only; nothing is asserted.
  * Usage: npx tsx scripts/bench/coorbitalTwoStage.ts [--rows N] [--every K]
  */
@@ -40,6 +41,7 @@ function cpuMs(f: () => void): number {
 
 /** Largest differences between the kept coarse predictions and the fine ones. */
 function compare(fast: CoorbitalPrediction[], fine: CoorbitalPrediction[], kept: boolean[]): string {
+  const n = kept.filter(Boolean).length;
   let states = 0, close = 0, period = 0, margin = 0, angle = 0, offset = 0, distance = 0, leastFineMarginOfStateDiff = Infinity;
   fast.forEach((c, k) => {
     const f = fine[k];
@@ -56,7 +58,7 @@ function compare(fast: CoorbitalPrediction[], fine: CoorbitalPrediction[], kept:
     distance = Math.max(distance, Math.abs(c.minDistanceHill / f.minDistanceHill - 1));
     if (c.state !== 'passing') angle = Math.max(angle, Math.abs(c.phiMinDeg - f.phiMinDeg), Math.abs(c.phiMaxDeg - f.phiMaxDeg), Math.abs(c.centreDeg - f.centreDeg));
   });
-  return `state differs ${states}${states > 0 ? ` (least fine margin among them ${leastFineMarginOfStateDiff.toFixed(3)})` : ''}, closeApproach differs ${close}; `
+  return `${n} bodies: state differs ${states}${states > 0 ? ` (least fine margin among them ${leastFineMarginOfStateDiff.toFixed(3)})` : ''}, closeApproach differs ${close}; `
     + `largest differences: period ${period.toExponential(1)} (relative), separatrix margin ${margin.toExponential(1)}, `
     + `angles ${angle.toExponential(1)}°, largest offset ${offset.toExponential(1)} (relative), least distance ${distance.toExponential(1)} (relative)`;
 }
@@ -100,7 +102,9 @@ async function main(): Promise<void> {
     }
     console.log(`two-stage ${(fastMs / entries.length).toFixed(3)} ms CPU a body (${ws.refined} of ${ws.predicted} refined); `
       + `fine grid alone ${(fineMs / entries.length).toFixed(3)} ms; ratio ${(fineMs / fastMs).toFixed(1)}`);
-    console.log(`kept on the coarse grid (${kept.filter(Boolean).length}): ${compare(fast, fine, kept)}`);
+    console.log(`kept on the coarse grid, ${compare(fast, fine, kept)}`);
+    const lowE = kept.map((k, j) => k && inputs[j].e.shape.e <= 0.6 && inputs[j].e.shape.iRad <= Math.PI / 6);
+    console.log(`the same, e ≤ 0.6 and i ≤ 30° only, ${compare(fast, fine, lowE)}`);
     const refinedEqual = fast.every((p, k) => kept[k] || JSON.stringify(p) === JSON.stringify(fine[k]));
     console.log(`refined bodies identical to the fine grid: ${refinedEqual ? 'yes' : 'NO'}`);
   } finally {

@@ -27,8 +27,14 @@ import type { AveragedOrbitShape, CoorbitalPrediction } from './types.js';
  */
 export const COARSE_PHI_COUNT = 360;
 export const COARSE_PLANET_SAMPLES = 40;
+/**
+ * Nodes of the coarse stage's period integral (librationPeriod.ts; 256 on the fine grid): on the
+ * coarse grid's kept bodies (every 8th of the benchmark's) periods moved by at most 1e-7
+ * relative from 256 nodes (64 nodes: 1e-4).
+ */
+export const COARSE_PERIOD_NODES = 128;
 /** Least separatrix margin of a coarse result that is kept (header; measured margin differences in FIGURES). */
-export const COARSE_ACCEPT_MARGIN = 0.1;
+export const COARSE_ACCEPT_MARGIN = 0.15;
 /** Safety factor on the sampling bound of the least distance (project choice). */
 const DISTANCE_SLACK_FACTOR = 2;
 
@@ -67,7 +73,7 @@ export function predictCoorbitalTwoStage(
   shape: AveragedOrbitShape, x0: number, phi0Rad: number, muPlanet: number, planetPeriodDays: number, ws: TwoStageWorkspace,
 ): CoorbitalPrediction {
   ws.predicted++;
-  const coarse = predictCoorbital(shape, x0, phi0Rad, muPlanet, planetPeriodDays, { workspace: ws.coarse });
+  const coarse = predictCoorbital(shape, x0, phi0Rad, muPlanet, planetPeriodDays, { workspace: ws.coarse, periodNodes: COARSE_PERIOD_NODES });
   if (coarseIsDecisive(coarse, shape, muPlanet, ws.coarse.grid.phiCount, ws.coarse.grid.planetSamples)) return coarse;
   ws.refined++;
   return predictCoorbital(shape, x0, phi0Rad, muPlanet, planetPeriodDays, { workspace: ws.fine });
