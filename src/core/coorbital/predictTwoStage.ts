@@ -9,7 +9,9 @@
  *     lie across a separatrix of the fine grid;
  *   - its level curve stays well away from the planet: the least distance along it, less twice
  *     the sampling bound of the coarse grid (distanceSamplingBound), is still beyond the
- *     close-approach radius, so closeApproach is false on both grids; the barrier about the
+ *     close-approach radius, so closeApproach is false on both grids (twice: the motion
+ *     relative to the planet per unit of λ_P reaches about 2e + sin i, the epicycle about the
+ *     guiding centre being 2e long along the track; common practice); the barrier about the
  *     planet is about as wide in φ as that distance (averagedDisturbing.ts), so the arc's ends
  *     are sampled by several coarse steps;
  *   - its period is finite.
@@ -20,10 +22,17 @@ import { CLOSE_APPROACH_HILL_RADII, createCoorbitalWorkspace, hillRadiusRel, pre
 import type { AveragedOrbitShape, CoorbitalPrediction } from './types.js';
 
 /**
- * Coarse grid: 1° in φ and 40 planet longitudes (9× fewer distance evaluations than the fine
+ * Coarse grid: 1° in φ and 40 planet longitudes (12× fewer distance evaluations than the fine
  * 720 × 240, half the Kepler solves). Measured against the fine grid with
  * scripts/bench/coorbitalTwoStage.ts on the 63 180 bodies the co-orbital benchmark screens in
- * its 1.5 M-row synthetic dump (all eight planets; 59 477 near Jupiter): FIGURES.
+ * its 1.5 M-row synthetic dump (all eight planets; 59 477 near Jupiter), 2026-12-03: the coarse
+ * grid decided 59 999 (all but 285 of Jupiter's; a quarter or less of the other planets',
+ * whose Hill radii are 1.5–15× smaller); among them no state and no close-approach flag changed,
+ * the separatrix margin moved by at most 0.044, periods by at most 9.0e-4 (relative) for
+ * e ≤ 0.6 and i ≤ 30° and 2.4e-3 beyond (a Mars body at e = 0.92), turning points and centres
+ * by 0.003° (e ≤ 0.6) and 0.84° (a Mars quasi-satellite at e = 0.83), the largest offset by
+ * 1.5e-3 and the least distance by 3.7e-2 (relative). CPU time on one thread: 0.32 ms a body
+ * against 1.95 ms for the fine grid alone (ratio 6.2; load average ≈ 3 from other work).
  */
 export const COARSE_PHI_COUNT = 360;
 export const COARSE_PLANET_SAMPLES = 40;
@@ -33,7 +42,7 @@ export const COARSE_PLANET_SAMPLES = 40;
  * relative from 256 nodes (64 nodes: 1e-4).
  */
 export const COARSE_PERIOD_NODES = 128;
-/** Least separatrix margin of a coarse result that is kept (header; measured margin differences in FIGURES). */
+/** Least separatrix margin of a coarse result that is kept (header): 3.4× the largest margin difference measured, 0.044. */
 export const COARSE_ACCEPT_MARGIN = 0.15;
 /** Safety factor on the sampling bound of the least distance (project choice). */
 const DISTANCE_SLACK_FACTOR = 2;
