@@ -4,7 +4,7 @@
  * what a single-threaded run calls directly, so both give the same numbers.
  */
 import { workerData } from 'node:worker_threads';
-import { createCoorbitalWorkspace, predictCoorbital } from '../core/coorbital/predictCoorbital.js';
+import { createTwoStageWorkspace, predictCoorbitalTwoStage, type TwoStageWorkspace } from '../core/coorbital/predictTwoStage.js';
 import type { AveragedOrbitShape, CoorbitalPrediction } from '../core/coorbital/types.js';
 import { serveWorkerTasks } from '../core/workerTasks.js';
 
@@ -20,13 +20,17 @@ export interface PredictInput {
 /** Marks the predicting workers' workerData (the module is also imported by the main thread). */
 export interface PredictWorkerData { predictWorker: true }
 
-/** The grid and buffers, built on first use and kept for the thread's later chunks (scratch only). */
-let workspace: ReturnType<typeof createCoorbitalWorkspace> | null = null;
+/**
+ * The grids and buffers, built on first use and kept for the thread's later chunks (scratch
+ * only: each body's prediction depends on its own inputs alone).
+ */
+let workspace: TwoStageWorkspace | null = null;
 
+/** Each body through the two-stage prediction (core/coorbital/predictTwoStage.ts), in order. */
 export function predictChunk(chunk: readonly PredictInput[]): CoorbitalPrediction[] {
-  workspace ??= createCoorbitalWorkspace();
+  workspace ??= createTwoStageWorkspace();
   const ws = workspace;
-  return chunk.map((b) => predictCoorbital(b.shape, b.x, b.phiRad, b.mu, b.planetPeriodDays, { workspace: ws }));
+  return chunk.map((b) => predictCoorbitalTwoStage(b.shape, b.x, b.phiRad, b.mu, b.planetPeriodDays, ws));
 }
 
 if (workerData !== null && typeof workerData === 'object' && 'predictWorker' in workerData) {

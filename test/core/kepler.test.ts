@@ -5,6 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { KeplerConvergenceError, solveBarker, solveKeplerElliptic, solveKeplerHyperbolic } from '../../src/core/orbit/kepler.js';
+import { nextKeplerGuess, solveKeplerEllipticNear, solveKeplerEllipticNearInto } from '../../src/core/orbit/keplerNear.js';
 import {
   eccentricFromTrue, hyperbolicFromTrue, meanAnomalyFromPerihelionTime, meanFromEccentric, meanFromHyperbolic,
   meanFromTrue, meanMotionRadPerDay, perihelionTimeFromMeanAnomaly, perihelionTimeOffsetDays,
@@ -75,6 +76,32 @@ describe('elliptic Kepler equation', () => {
     expect(() => solveKeplerElliptic(1, -0.1)).toThrow(/eccentricity -0.1 outside/);
     expect(() => solveKeplerElliptic(NaN, 0.1)).toThrow(RangeError);
     expect(() => solveKeplerHyperbolic(1, 0.5)).toThrow(RangeError);
+  });
+});
+
+describe('elliptic Kepler equation from a nearby start (sweeps)', () => {
+  it('a sweep of 720 mean anomalies over two turns, each from the previous root, agrees with the bracketed solver to 1e-14 rad, its sine and cosine too', () => {
+    for (const e of [0, 0.05, 0.3, 0.6, 0.8, 0.9, 0.99]) { // 0.9 and 0.99: above NEAR_MAX_ECCENTRICITY, the fallback
+      const h = (4 * Math.PI) / 720;
+      const m0 = -2.5;
+      const out = Float64Array.of(solveKeplerElliptic(m0, e), NaN, NaN);
+      out[2] = Math.cos(out[0]);
+      let worst = 0;
+      for (let k = 1; k < 720; k++) {
+        const m = m0 + k * h;
+        solveKeplerEllipticNearInto(m, e, nextKeplerGuess(out[0], out[2], e, h), out);
+        const ecc = out[0];
+        worst = Math.max(worst, Math.abs(ecc - solveKeplerElliptic(m, e)), Math.abs(ecc - e * Math.sin(ecc) - m)); // residual: common practice
+        worst = Math.max(worst, Math.abs(out[1] - Math.sin(ecc)), Math.abs(out[2] - Math.cos(ecc)));
+        expect(solveKeplerEllipticNear(m, e, ecc + 1e-3)).toBeCloseTo(ecc, 14);
+      }
+      expect(worst, `e = ${e}`).toBeLessThan(1e-14); // measured ≤ 9e-16
+    }
+  });
+
+  it('Meeus example 30.a from a poor start: e = 0.1, M = 5° → E = 5.554589° (Meeus 1998, from memory)', () => {
+    expect(Math.abs(solveKeplerEllipticNear(5 * DEG, 0.1, 0) / DEG - 5.554589)).toBeLessThan(5e-7);
+    expect(Math.abs(solveKeplerEllipticNear(5 * DEG, 0.1, NaN) / DEG - 5.554589)).toBeLessThan(5e-7); // no start: the bracketed solver
   });
 });
 

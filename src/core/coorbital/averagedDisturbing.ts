@@ -25,10 +25,12 @@
  *
  * Cost: M = λ_P + φ − ϖ, so with the φ step and the λ_P step multiples of one fine step the
  * body is needed only on one grid of mean anomalies: max(N, N_φ) Kepler solves per orbit,
- * then N_φ × N distance evaluations with no allocation.
+ * each started from the previous root (keplerNear.ts), then N_φ × N distance evaluations with no
+ * allocation.
  */
 import { TWO_PI } from '../math.js';
 import { solveKeplerElliptic } from '../orbit/kepler.js';
+import { nextKeplerGuess, solveKeplerEllipticNearInto } from '../orbit/keplerNear.js';
 import type { AveragedOrbitShape } from './types.js';
 
 /** Buffers and tables for one (N_φ, N) pair; reuse it for every body. */
@@ -90,6 +92,8 @@ function checkShape(shape: AveragedOrbitShape, aRatio: number): void {
   if (!(aRatio > 0 && Number.isFinite(aRatio))) throw new RangeError(`averaged disturbing function: a/aP ${aRatio} is not positive`);
 }
 
+const ECC = new Float64Array(3);
+
 /**
  * Body positions at the grid's mean anomalies, planet frame, a_P = 1. Perifocal unit vectors
  * P̂, Q̂ from (Ω, ω, i) and r = a(cos E − e) P̂ + a√(1 − e²) sin E Q̂ (Murray & Dermott 1999
@@ -105,9 +109,17 @@ function fillBodyPositions(grid: DisturbingGrid, shape: AveragedOrbitShape, aRat
   const b = aRatio * Math.sqrt(1 - e * e);
   const h = TWO_PI / grid.fineCount;
   const m0 = 0.5 * grid.planetStride * h - nodeRad - periRad; // M_m = λ_P + φ − Ω − ω on the fine grid
+  const ecc = ECC; // E, sin E, cos E
   for (let m = 0; m < grid.fineCount; m++) {
-    const eccRad = solveKeplerElliptic(m0 + m * h, e);
-    const u = aRatio * (Math.cos(eccRad) - e), v = b * Math.sin(eccRad);
+    // each solve starts from the previous root (keplerNear.ts; within 2e-16 rad of the bracketed solver)
+    if (m === 0) {
+      ecc[0] = solveKeplerElliptic(m0, e);
+      ecc[1] = Math.sin(ecc[0]);
+      ecc[2] = Math.cos(ecc[0]);
+    } else {
+      solveKeplerEllipticNearInto(m0 + m * h, e, nextKeplerGuess(ecc[0], ecc[2], e, h), ecc);
+    }
+    const u = aRatio * (ecc[2] - e), v = b * ecc[1];
     grid.bodyX[m] = u * px + v * qx;
     grid.bodyY[m] = u * py + v * qy;
     grid.bodyZ[m] = u * pz + v * qz;

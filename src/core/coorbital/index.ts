@@ -5,6 +5,7 @@ export * from './potentialWells.js';
 export * from './phasePortrait.js';
 export * from './librationPeriod.js';
 export * from './predictCoorbital.js';
+export * from './predictTwoStage.js';
 export * from './planetPlane.js';
 export * from './resonantAngle.js';
 export * from './triangularPoint.js';

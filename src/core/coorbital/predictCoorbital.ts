@@ -25,10 +25,13 @@ import type { AveragedOrbitShape, CoorbitalPrediction } from './types.js';
 
 /**
  * Grid defaults, chosen with scripts/bench/coorbitalPrediction.ts (400 synthetic Earth
- * candidates, e ≤ 0.6, i ≤ 30°): 0.5° in φ and 240 planet longitudes. Against 2880 longitudes no
- * state changed and periods agreed to 2e-10 (bodies without close approach); ~1.9 ms per body
- * on the development machine (Node 20), of which ~0.4 ms are the 720 Kepler solves. A 1° grid
- * in φ changed 4 states in 400 and periods by up to 8e-3.
+ * candidates, e ≤ 0.6, i ≤ 30°): 0.5° in φ and 240 planet longitudes. Measured 2026-12-03
+ * (load average ≈ 3 from other work): against 2880 longitudes no state changed and periods
+ * agreed to 1.6e-10 (bodies without close approach); 1.9 ms per body (Node 20), of which
+ * ~0.1 ms are the 720 Kepler solves (each from the previous root; ~0.4 ms with the bracketed
+ * solver alone). A 1° grid in φ changed 2 states in 400 and periods by up to 8e-3 on these
+ * Earth candidates: a grid that coarse is used only where it is decisive, in the two-stage
+ * prediction for whole catalogues (predictTwoStage.ts, where its measured accuracy is given).
  */
 export const DEFAULT_PHI_COUNT = 720;
 export const DEFAULT_PLANET_SAMPLES = 240;
