@@ -70,7 +70,7 @@ async function main(): Promise<void> {
     .parse().opts<{ rows: number; every: number }>();
   const dir = mkdtempSync(join(tmpdir(), 'wayward-two-stage-'));
   try {
-    const gen = generateDemo({ seed: DEFAULT_SEED, outDir: join(dir, 'dump'), bodies: o.rows, populationOnly: true });
+    const gen = await generateDemo({ seed: DEFAULT_SEED, outDir: join(dir, 'dump'), bodies: o.rows, populationOnly: true });
     const { catalogue } = await loadCatalogue([gen.files[0]]);
     const { entries: all } = screenCoorbitalZone(catalogue, PLANETS, PLANETS.map(defaultZoneHalfWidth), new Vsop87Ephemeris());
     const entries = all.filter((_, k) => k % o.every === 0);
