@@ -28,7 +28,7 @@
  */
 import type { Ephemeris, EphemerisBody } from '../types.js';
 import { assertInSpan, ephemerisBodyIndex, EPHEMERIS_BODIES } from './ephemerisBody.js';
-import { chebyshevFit, chebyshevNode, chebyshevValue3 } from '../series/chebyshev.js';
+import { chebyshevFit, chebyshevNode, chebyshevPosition3, chebyshevValue3 } from '../series/chebyshev.js';
 import { hasSegmentFitter } from './segmentFitter.js';
 import type { SegmentFitter } from './segmentFitter.js';
 import { assertSameTable } from './ephemerisCacheTable.js';
@@ -70,6 +70,8 @@ export class EphemerisCache implements Ephemeris {
   private readonly methods: CacheFillMethod[];
   private readonly nodeStates: Float64Array;
   private segmentsFitted = 0;
+  private lastBodies: readonly EphemerisBody[] | null = null; // helioPositions' last list
+  private lastIndices = new Int32Array(0);
 
   constructor(readonly source: Ephemeris, opts: EphemerisCacheOptions) {
     const { startJdTDB, endJdTDB } = opts;
@@ -264,6 +266,30 @@ export class EphemerisCache implements Ephemeris {
       chebyshevValue3(t.coeffs, base + 3 * t.n, t.n, x, 0, out, offset + 3);
     } else {
       chebyshevValue3(t.coeffs, base, t.n, x, 2 / t.segmentDays, out, offset);
+    }
+  }
+
+  /**
+   * Positions only of bodies[j] at jdTDB into out[offset + stride·j .. +2]: the same segment
+   * and the same arithmetic as helioState (bit for bit; 'fitted' and 'derivative' share the
+   * position polynomial), without the velocity sums, with one span check for all and the
+   * body indices looked up once per list (the force model asks with the same list every time).
+   */
+  helioPositions(bodies: readonly EphemerisBody[], jdTDB: number, out: Float64Array, offset: number, stride: number): void {
+    assertInSpan(this.name, jdTDB, this.startJdTDB, this.endJdTDB);
+    if (bodies !== this.lastBodies) {
+      this.lastIndices = Int32Array.from(bodies.map((b) => ephemerisBodyIndex(b)));
+      this.lastBodies = bodies;
+    }
+    const idx = this.lastIndices;
+    for (let j = 0; j < idx.length; j++) {
+      const b = idx[j];
+      const t = this.tables[b];
+      const u = (jdTDB - this.startJdTDB) / t.segmentDays;
+      let s = Math.floor(u);
+      if (s >= t.segmentCount) s = t.segmentCount - 1; // jdTDB === endJdTDB
+      if (t.built[s] === 0) this.fitAround(b, s);
+      chebyshevPosition3(t.coeffs, s * t.stride, t.n, 2 * (u - s) - 1, out, offset + stride * j);
     }
   }
 
