@@ -208,4 +208,23 @@ describe('planet positions in the force model', () => {
     }
     expect(fast).toBe(11); // the last time was remembered
   });
+
+  it('gravity-only bodies (summed in locals) get bit for bit the accelerations of the general path', () => {
+    // Reference: the general path (addPointMassAcceleration, addSchwarzschildAcceleration on
+    // the output array), taken with the variational equations on, whose extra terms are zero
+    // for the body's own components; it must agree to the last bit with the gravity-only sum.
+    const eph = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_452_000 });
+    for (const relativity of [true, false]) {
+      const plain = new TestBodyForceModel(1, null, { planets: PLANETS, ephemeris: eph, relativity });
+      const general = new TestBodyForceModel(1, null, { planets: PLANETS, ephemeris: eph, relativity, variational: true });
+      const x = new Float64Array(general.dim), v = new Float64Array(general.dim);
+      const outPlain = new Float64Array(3), outGeneral = new Float64Array(general.dim);
+      for (const [jd, r] of [[2_451_100, [0.9, 0.4, 0.01]], [2_451_345.7, [-0.3, 0.2, -0.05]], [2_451_900, [5.1, -0.2, 0.1]]] as const) {
+        x.set(r); v.set([-0.007, 0.015, 0.0001]);
+        plain.accel(jd, x.subarray(0, 3), v.subarray(0, 3), outPlain);
+        general.accel(jd, x, v, outGeneral);
+        expect(Array.from(outPlain)).toEqual(Array.from(outGeneral.subarray(0, 3)));
+      }
+    }
+  });
 });

@@ -168,6 +168,10 @@ export class TestBodyForceModel implements SecondOrderSystem {
     const partials = variational ? this.partials : null;
     const nb = this.nBodies;
     for (let k = 0; k < nb; k++) {
+      if (!variational && this.hasNonGrav[k] === 0 && this.hasRadiation[k] === 0) {
+        this.gravityOnly(k, x, v, out, ps, pBase, indX, indY, indZ);
+        continue;
+      }
       const o = 3 * k;
       const rx = x[o], ry = x[o + 1], rz = x[o + 2];
       out[o] = 0; out[o + 1] = 0; out[o + 2] = 0;
@@ -194,6 +198,52 @@ export class TestBodyForceModel implements SecondOrderSystem {
       }
       if (variational) this.variationalAccel(k, x, v, out);
     }
+  }
+
+  /**
+   * Body k with gravity (and the 1PN term) only, no gradients: the same operations in the
+   * same order as addPointMassAcceleration and addSchwarzschildAcceleration on out[], summed
+   * in locals and stored once (bit for bit the same accelerations, tested).
+   */
+  private gravityOnly(k: number, x: Float64Array, v: Float64Array, out: Float64Array, ps: Float64Array, pBase: number,
+    indX: number, indY: number, indZ: number): void {
+    const o = 3 * k;
+    const rx = x[o], ry = x[o + 1], rz = x[o + 2];
+    let ax = 0, ay = 0, az = 0;
+    {
+      const d2 = rx * rx + ry * ry + rz * rz;
+      const d = Math.sqrt(d2);
+      const f = this.sunGm / (d2 * d);
+      ax -= f * rx; ay -= f * ry; az -= f * rz;
+    }
+    const np = this.planetBodies.length;
+    const gm = this.planetGm;
+    for (let j = 0; j < np; j++) {
+      const q = pBase + 6 * j;
+      const dx = rx - ps[q], dy = ry - ps[q + 1], dz = rz - ps[q + 2];
+      const d2 = dx * dx + dy * dy + dz * dz;
+      const d = Math.sqrt(d2);
+      const f = gm[j] / (d2 * d);
+      ax -= f * dx; ay -= f * dy; az -= f * dz;
+    }
+    if (np > 0) {
+      ax += indX; ay += indY; az += indZ;
+    }
+    if (this.relativity) {
+      // addSchwarzschildAcceleration (relativity.ts), written out.
+      const vx = v[o], vy = v[o + 1], vz = v[o + 2];
+      const r2 = rx * rx + ry * ry + rz * rz;
+      const r = Math.sqrt(r2);
+      const v2 = vx * vx + vy * vy + vz * vz;
+      const s = rx * vx + ry * vy + rz * vz;
+      const mu = this.sunGm;
+      const kk = mu / (C_AU_PER_DAY * C_AU_PER_DAY * r2 * r);
+      const f = (4 * mu) / r - v2;
+      ax += kk * (f * rx + 4 * s * vx);
+      ay += kk * (f * ry + 4 * s * vy);
+      az += kk * (f * rz + 4 * s * vz);
+    }
+    out[o] = ax; out[o + 1] = ay; out[o + 2] = az;
   }
 
   /** δa = (∂a/∂r) δr + (∂a/∂v) δv (+ ∂a/∂p for the parameter columns). */
