@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chebyshevFit, chebyshevNode, chebyshevPosition3, chebyshevValue, chebyshevValue3 } from '../../src/core/series/chebyshev.js';
-import { seededRandom } from '../../src/core/random.js';
+import { chebyshevFit, chebyshevNode, chebyshevValue, chebyshevValue3 } from '../../src/core/series/chebyshev.js';
 
 /** Coefficients of the Chebyshev interpolant of f on [-1, 1] with n nodes. */
 function fit(f: (x: number) => number, n: number): Float64Array {
@@ -89,24 +88,6 @@ describe('Chebyshev fitting at the nodes (Numerical Recipes §5.8)', () => {
     out.fill(-7);
     chebyshevValue3(coeffs, 0, n, 0.3, 0, out, 0);
     expect(out[3]).toBe(-7);
-  });
-
-  it('chebyshevPosition3 gives the values of chebyshevValue3 bit for bit, and touches nothing else', () => {
-    // Reference: chebyshevValue3 (checked above against analytic functions); the positions-only
-    // path must repeat its arithmetic exactly, since the forces and the samples mix the two.
-    const rnd = seededRandom(5);
-    for (const n of [2, 14, 16, 24]) {
-      const coeffs = new Float64Array(3 * n + 5);
-      for (let k = 0; k < coeffs.length; k++) coeffs[k] = (rnd() - 0.5) * 10 ** (-k % 9);
-      for (let k = 0; k <= 40; k++) {
-        const x = k === 40 ? 1 : -1 + k / 20 + (rnd() - 0.5) * 1e-3;
-        const full = new Float64Array(6);
-        chebyshevValue3(coeffs, 5, n, x, 2 / 16, full, 0);
-        const pos = new Float64Array(8).fill(-7);
-        chebyshevPosition3(coeffs, 5, n, x, pos, 2);
-        expect(Array.from(pos)).toEqual([-7, -7, full[0], full[1], full[2], -7, -7, -7]);
-      }
-    }
   });
 
   it('rejects a non-positive node count with RangeError', () => {

@@ -28,7 +28,7 @@
  */
 import type { Ephemeris, EphemerisBody } from '../types.js';
 import { assertInSpan, ephemerisBodyIndex, EPHEMERIS_BODIES } from './ephemerisBody.js';
-import { chebyshevFit, chebyshevNode, chebyshevPosition3, chebyshevValue3 } from '../series/chebyshev.js';
+import { chebyshevFit, chebyshevNode, chebyshevValue3 } from '../series/chebyshev.js';
 import { hasSegmentFitter } from './segmentFitter.js';
 import type { SegmentFitter } from './segmentFitter.js';
 import { assertSameTable } from './ephemerisCacheTable.js';
@@ -289,7 +289,20 @@ export class EphemerisCache implements Ephemeris {
       let s = Math.floor(u);
       if (s >= t.segmentCount) s = t.segmentCount - 1; // jdTDB === endJdTDB
       if (t.built[s] === 0) this.fitAround(b, s);
-      chebyshevPosition3(t.coeffs, s * t.stride, t.n, 2 * (u - s) - 1, out, offset + stride * j);
+      // chebyshevValue3's forward recurrence and order of additions, without the derivatives.
+      const x = 2 * (u - s) - 1;
+      const c = t.coeffs, n = t.n, o0 = s * t.stride, o1 = o0 + n, o2 = o1 + n;
+      let px = c[o0], py = c[o1], pz = c[o2];
+      let t0 = 1, t1 = x; // T_{k-1}, T_k
+      for (let k = 1; k < n; k++) {
+        px += c[o0 + k] * t1;
+        py += c[o1 + k] * t1;
+        pz += c[o2 + k] * t1;
+        const t2 = 2 * x * t1 - t0;
+        t0 = t1; t1 = t2;
+      }
+      const o = offset + stride * j;
+      out[o] = px; out[o + 1] = py; out[o + 2] = pz;
     }
   }
 

@@ -82,27 +82,3 @@ export function chebyshevValue3(
     out[outOffset + 5] = vz * derivScale;
   }
 }
-
-/**
- * The values of chebyshevValue3 without the derivatives: the same forward recurrence and the
- * same order of additions, so the three values are bit for bit those of chebyshevValue3
- * (tested), at about half the work. For callers that need positions only (the forces).
- */
-export function chebyshevPosition3(
-  coeffs: Float64Array, offset: number, n: number, x: number, out: Float64Array, outOffset: number,
-): void {
-  const o1 = offset + n;
-  const o2 = offset + 2 * n;
-  let t0 = 1, t1 = x; // T_{k-1}, T_k
-  let px = coeffs[offset], py = coeffs[o1], pz = coeffs[o2];
-  for (let k = 1; k < n; k++) {
-    px += coeffs[offset + k] * t1;
-    py += coeffs[o1 + k] * t1;
-    pz += coeffs[o2 + k] * t1;
-    const t2 = 2 * x * t1 - t0;
-    t0 = t1; t1 = t2;
-  }
-  out[outOffset] = px;
-  out[outOffset + 1] = py;
-  out[outOffset + 2] = pz;
-}
