@@ -251,14 +251,20 @@ export class EphemerisCache implements Ephemeris {
     return f;
   }
 
+  /** The segment of table t (body b) at u segment lengths from the start, fitted if it was not. */
+  private fittedSegment(b: number, t: BodyTable, u: number): number {
+    let s = Math.floor(u);
+    if (s >= t.segmentCount) s = t.segmentCount - 1; // the end of the span
+    if (t.built[s] === 0) this.fitAround(b, s);
+    return s;
+  }
+
   helioState(body: EphemerisBody, jdTDB: number, out: Float64Array, offset = 0): void {
     const b = ephemerisBodyIndex(body);
     assertInSpan(this.name, jdTDB, this.startJdTDB, this.endJdTDB);
     const t = this.tables[b];
     const u = (jdTDB - this.startJdTDB) / t.segmentDays;
-    let s = Math.floor(u);
-    if (s >= t.segmentCount) s = t.segmentCount - 1; // jdTDB === endJdTDB
-    if (t.built[s] === 0) this.fitAround(b, s);
+    const s = this.fittedSegment(b, t, u);
     const x = 2 * (u - s) - 1;
     const base = s * t.stride;
     if (this.velocity === 'fitted') {
@@ -286,9 +292,7 @@ export class EphemerisCache implements Ephemeris {
       const b = idx[j];
       const t = this.tables[b];
       const u = (jdTDB - this.startJdTDB) / t.segmentDays;
-      let s = Math.floor(u);
-      if (s >= t.segmentCount) s = t.segmentCount - 1; // jdTDB === endJdTDB
-      if (t.built[s] === 0) this.fitAround(b, s);
+      const s = this.fittedSegment(b, t, u);
       // chebyshevValue3's forward recurrence and order of additions, without the derivatives.
       const x = 2 * (u - s) - 1;
       const c = t.coeffs, n = t.n, o0 = s * t.stride, o1 = o0 + n, o2 = o1 + n;
