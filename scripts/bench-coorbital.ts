@@ -18,7 +18,8 @@
  *     preceded by the same run with a budget for one body (the fixed costs: screen, predict,
  *     planetary cache fill, worker start). `--zone-bodies` and `--years` shrink the case; the
  *     figures for the target size are then an estimate (the one-body run plus the further
- *     bodies' cost, linear in bodies and years), labelled SCALED.
+ *     bodies' cost, linear in bodies and years), labelled SCALED. `--threads 2` runs the
+ *     2-thread case alone (no ratio, no comparison of results).
  * The temporary directory is removed afterwards.
  */
 import { mkdtempSync, rmSync, statSync } from 'node:fs';
@@ -62,6 +63,12 @@ function partList(value: string): Part[] {
   const parts = value.split(',').map((s) => s.trim());
   for (const p of parts) if (!(PARTS as readonly string[]).includes(p)) throw new InvalidArgumentError(`unknown part ${p} (${PARTS.join(', ')})`);
   return parts as Part[];
+}
+
+function threadList(value: string): number[] {
+  const list = value.split(',').map((s) => Number(s.trim()));
+  if (!['1', '2', '1,2'].includes(list.join(','))) throw new InvalidArgumentError(`thread counts must be 1,2 or 1 or 2: ${value}`);
+  return list;
 }
 
 const fmtInt = (n: number): string => Math.round(n).toLocaleString('en-US').replace(/,/g, ' ');
@@ -140,7 +147,9 @@ function fingerprint(results: readonly CoorbitalBodyResult[]): string {
 }
 
 /** Part 3: a near-Earth list confirmed in full through analyseCoorbitals, 1 and 2 threads. */
-async function benchNearEarth(dir: string, rows: number, zoneBodies: number, years: number, seed: number): Promise<void> {
+async function benchNearEarth(
+  dir: string, rows: number, zoneBodies: number, years: number, seed: number, threadCounts: readonly number[],
+): Promise<void> {
   const file = join(dir, 'near-earth.txt');
   writeNearEarthList(file, { rows, zoneBodies, seed });
   console.log(`3. near-Earth list: ${fmtInt(rows)} rows (seed ${seed}), ${zoneBodies} placed in the Earth's 1:1 zone, confirmed in full over ±${years / 2} yr`);
@@ -150,34 +159,41 @@ async function benchNearEarth(dir: string, rows: number, zoneBodies: number, yea
   const wall: number[] = [];
   const fixed: number[] = [];
   const prints: string[] = [];
-  for (const threads of [1, 2]) {
+  for (const threads of threadCounts) {
     const base: CoorbitalOptions = { ...COORBITAL_DEFAULTS, planets: ['earth'], confirm: 'all', windowYears: years / 2, threads };
     // The same run with a budget for one body: the fixed costs (screen, predict, planetary
     // cache fill, worker start) plus one body, so the per-body cost can be told apart.
     const oneBody = await timedAsync(() => analyseCoorbitals(cat, { ...base, budgetCpuSeconds: 1e-9 }));
+    const cpu0 = process.cpuUsage();
     const run = await timedAsync(() => analyseCoorbitals(cat, { ...base, budgetCpuSeconds: 1e12 }));
+    const cpu = process.cpuUsage(cpu0);
+    const cpuS = (cpu.user + cpu.system) / 1e6; // this process, all its threads
     const confirmed = run.value.results.filter((r) => r.history !== null).length;
     wall.push(run.wallS);
     fixed.push(oneBody.wallS);
     prints.push(fingerprint(run.value.results));
     const marginal = confirmed > 1 ? (run.wallS - oneBody.wallS) / (confirmed - 1) : NaN;
-    console.log(`   threads ${threads}: ${run.wallS.toFixed(1)} s wall, ${run.value.results.length} screened, ${confirmed} confirmed; `
+    console.log(`   threads ${threads}: ${run.wallS.toFixed(1)} s wall (${cpuS.toFixed(1)} s CPU, all threads; load average ${loadavg()[0].toFixed(2)} after), `
+      + `${run.value.results.length} screened, ${confirmed} confirmed; `
       + `with one body confirmed ${oneBody.wallS.toFixed(1)} s; each further body ${marginal.toFixed(2)} s wall (${(marginal * 1000 / years).toFixed(2)} s per 1 000 yr)`);
   }
-  console.log(`   ratio threads 1 / threads 2: ${(wall[0] / wall[1]).toFixed(2)}; results identical: ${prints[0] === prints[1] ? 'yes' : 'NO'}`);
+  if (threadCounts.length === 2) {
+    console.log(`   ratio threads 1 / threads 2: ${(wall[0] / wall[1]).toFixed(2)}; results identical: ${prints[0] === prints[1] ? 'yes' : 'NO'}`);
+  }
   const atTarget = zoneBodies === TARGET_ZONE_BODIES && years === TARGET_YEARS;
-  for (const k of [0, 1]) {
+  for (let k = 0; k < threadCounts.length; k++) {
+    const two = threadCounts[k] === 2;
     if (atTarget) {
-      console.log(`   threads ${k + 1}, ${TARGET_ZONE_BODIES} bodies ±${TARGET_YEARS / 2} yr: ${wall[k].toFixed(0)} s measured`
-        + (k === 1 ? `   target < ${TARGET_NEAR_EARTH_2_THREADS_S} s: ${verdict(wall[k] < TARGET_NEAR_EARTH_2_THREADS_S)}` : ''));
+      console.log(`   threads ${threadCounts[k]}, ${TARGET_ZONE_BODIES} bodies ±${TARGET_YEARS / 2} yr: ${wall[k].toFixed(0)} s measured`
+        + (two ? `   target < ${TARGET_NEAR_EARTH_2_THREADS_S} s: ${verdict(wall[k] < TARGET_NEAR_EARTH_2_THREADS_S)}` : ''));
       continue;
     }
     // Scaled: the one-body run plus the further bodies' cost, linear in bodies and in years.
     const perBody = zoneBodies > 1 ? (wall[k] - fixed[k]) / (zoneBodies - 1) : NaN;
     const est = fixed[k] * (TARGET_YEARS / years) + perBody * (TARGET_ZONE_BODIES - 1) * (TARGET_YEARS / years);
-    console.log(`   threads ${k + 1}, ${TARGET_ZONE_BODIES} bodies ±${TARGET_YEARS / 2} yr: ≈ ${est.toFixed(0)} s SCALED (estimate from this `
+    console.log(`   threads ${threadCounts[k]}, ${TARGET_ZONE_BODIES} bodies ±${TARGET_YEARS / 2} yr: ≈ ${est.toFixed(0)} s SCALED (estimate from this `
       + `${zoneBodies}-body, ${years}-yr run: one-body run + ${TARGET_ZONE_BODIES - 1} × the further-body cost${years === TARGET_YEARS ? '' : `, × ${TARGET_YEARS}/${years} yr`})`
-      + (k === 1 ? `   target < ${TARGET_NEAR_EARTH_2_THREADS_S} s: ${verdict(est < TARGET_NEAR_EARTH_2_THREADS_S)}` : ''));
+      + (two ? `   target < ${TARGET_NEAR_EARTH_2_THREADS_S} s: ${verdict(est < TARGET_NEAR_EARTH_2_THREADS_S)}` : ''));
   }
 }
 
@@ -190,9 +206,10 @@ async function main(): Promise<void> {
     .option('--zone-bodies <n>', "bodies placed in the Earth's zone (part 3)", integerAtLeast(1), TARGET_ZONE_BODIES)
     .option('--years <n>', 'N-body window of part 3, years (epoch ± years/2)', integerAtLeast(2), TARGET_YEARS)
     .option('--near-earth-seed <n>', 'near-Earth list seed (part 3)', integerAtLeast(0), NEAR_EARTH_DEFAULT_SEED)
+    .option('--threads <list>', 'thread counts of part 3: 1,2 (default) or either alone', threadList, [1, 2])
     .option('--parts <list>', `parts to run, comma-separated (${PARTS.join(', ')})`, partList, [...PARTS])
     .parse()
-    .opts<{ rows: number; seed: number; confirmYears: number; nearEarthRows: number; zoneBodies: number; years: number; nearEarthSeed: number; parts: Part[] }>();
+    .opts<{ rows: number; seed: number; confirmYears: number; nearEarthRows: number; zoneBodies: number; years: number; nearEarthSeed: number; threads: number[]; parts: Part[] }>();
   if (o.zoneBodies > o.nearEarthRows) throw new InvalidArgumentError('--zone-bodies exceeds --near-earth-rows');
   const load = (): string => loadavg().map((x) => x.toFixed(2)).join(' ');
   console.log(`co-orbital benchmark: ${availableParallelism()} cores, load average ${load()} (1, 5, 15 min)`);
@@ -200,7 +217,7 @@ async function main(): Promise<void> {
   try {
     if (o.parts.includes('predict')) await benchPredict(dir, o.rows, o.seed);
     if (o.parts.includes('confirm')) benchConfirm(o.confirmYears);
-    if (o.parts.includes('near-earth')) await benchNearEarth(dir, o.nearEarthRows, o.zoneBodies, o.years, o.nearEarthSeed);
+    if (o.parts.includes('near-earth')) await benchNearEarth(dir, o.nearEarthRows, o.zoneBodies, o.years, o.nearEarthSeed, o.threads);
     console.log(`load average at the end ${load()}`);
   } finally {
     rmSync(dir, { recursive: true, force: true });

@@ -25,4 +25,9 @@ export interface Ephemeris {
    * written to out[offset .. offset+5] as x, y, z, vx, vy, vz.
    */
   helioState(body: EphemerisBody, jdTDB: number, out: Float64Array, offset?: number): void;
+  /**
+   * Optional fast path for the forces: positions only (au) of several bodies at one time,
+   * bodies[j] to out[offset + stride·j .. +2], bit for bit the positions helioState gives.
+   */
+  helioPositions?(bodies: readonly EphemerisBody[], jdTDB: number, out: Float64Array, offset: number, stride: number): void;
 }

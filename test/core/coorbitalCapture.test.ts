@@ -22,7 +22,7 @@ const STEP_DAYS = 2;
 const T0 = 2_460_000.5;
 
 /** Samples of a planetocentric conic (a, e, i) over `spanDays` about the circular planet. */
-function planetocentricRun(aAu: number, e: number, iRad: number, m0Rad: number, spanDays: number) {
+function planetocentricRun(aAu: number, e: number, iRad: number, m0Rad: number, spanDays: number, angleWithinAu?: number) {
   const n = Math.floor(spanDays / STEP_DAYS) + 1;
   const times = new Float64Array(n);
   const series = createPlanetocentricSeries(n);
@@ -35,7 +35,7 @@ function planetocentricRun(aAu: number, e: number, iRad: number, m0Rad: number, 
     planet.set([Math.cos(l), Math.sin(l), 0, -N_P * Math.sin(l), N_P * Math.cos(l), 0]);
     semimajorElementsToState(aAu, e, iRad, 0.4, 1.1, m0Rad + nG * t, GM_EMB, body);
     for (let c = 0; c < 6; c++) body[c] += planet[c];
-    planetocentricSampleInto(body, 0, planet, 0, GM_EMB, series, k);
+    planetocentricSampleInto(body, 0, planet, 0, GM_EMB, series, k, angleWithinAu);
   }
   return { times, series, periodDays: (2 * Math.PI) / nG };
 }
@@ -87,5 +87,27 @@ describe('temporary capture flags', () => {
   it('a bound orbit outside 3 Hill radii is not a capture (distance)', () => {
     const run = planetocentricRun(0.05, 0.1, 0.1, 0, 1500);
     expect(findCaptureEpisodes(run.times, run.series, zone)).toEqual([]);
+  });
+
+  it('with the angle kept to the capture zone, the episodes are the same and the angle is NaN outside it', () => {
+    // Reference: the same runs with the angle at every sample (the episodes checked above
+    // against Kepler's third law); an ellipse that reaches beyond the zone (a = 0.025 au,
+    // e = 0.5: apogee 0.0375 au) and a hyperbolic pass.
+    const vInf = 1 / KM_PER_AU * 86_400;
+    const aHyp = -GM_EMB / (vInf * vInf);
+    let outside = 0, inside = 0;
+    for (const [a, e, m0, span] of [[0.008, 0.2, 0, 400], [0.025, 0.5, 0, 900], [aHyp, 1 - 0.005 / aHyp, -32, 300]] as const) {
+      const full = planetocentricRun(a, e, 0.2, m0, span);
+      const kept = planetocentricRun(a, e, 0.2, m0, span, zone);
+      expect(findCaptureEpisodes(kept.times, kept.series, zone)).toEqual(findCaptureEpisodes(full.times, full.series, zone));
+      expect(Array.from(kept.series.distanceAu)).toEqual(Array.from(full.series.distanceAu));
+      for (let k = 0; k < kept.times.length; k++) {
+        const inZone = full.series.energyAu2PerDay2[k] < 0 && full.series.distanceAu[k] < zone;
+        expect(kept.series.rotatingAngleRad[k]).toBe(inZone ? full.series.rotatingAngleRad[k] : NaN);
+        if (inZone) inside++; else outside++;
+      }
+    }
+    expect(outside).toBeGreaterThan(100);
+    expect(inside).toBeGreaterThan(100);
   });
 });

@@ -237,3 +237,39 @@ describe('misuse', () => {
     expect(Math.abs(out[2] - direct[0])).toBeLessThan(1e-9);
   });
 });
+
+describe('positions only for the forces (helioPositions)', () => {
+  // Reference: the cache's own helioState (checked against the direct series above); the
+  // positions-only path must give its positions bit for bit, lazily filled or not.
+  const planets: EphemerisBody[] = ['mercury', 'venus', 'emb', 'mars', 'jupiter', 'saturn', 'uranus', 'neptune'];
+  for (const velocity of ['derivative', 'fitted'] as const) {
+    it(`equals helioState's positions bit for bit, at the given stride, filling lazily ('${velocity}' velocities)`, () => {
+      const opts = { startJdTDB: 2_451_000, endJdTDB: 2_453_000, velocity, fill: 'bulk' as const };
+      const a = new EphemerisCache(source, opts);
+      const b = new EphemerisCache(source, opts);
+      const state = new Float64Array(6);
+      const out = new Float64Array(3 + 7 * planets.length).fill(-1);
+      for (const jd of [2_451_000, 2_451_017.25, 2_452_222.123456789, 2_453_000]) {
+        a.helioPositions(planets, jd, out, 3, 7); // before b fits anything: fills its own segments
+        planets.forEach((body, j) => {
+          b.helioState(body, jd, state);
+          expect(Array.from(out.subarray(3 + 7 * j, 6 + 7 * j))).toEqual(Array.from(state.subarray(0, 3)));
+          expect(Array.from(out.subarray(6 + 7 * j, 10 + 7 * j))).toEqual([-1, -1, -1, -1]); // the gaps untouched
+        });
+        expect(Array.from(out.subarray(0, 3))).toEqual([-1, -1, -1]);
+      }
+    });
+  }
+
+  it('follows a change of the body list, and refuses dates outside the span and unknown bodies', () => {
+    const eph = new EphemerisCache(source, { startJdTDB: 2_451_000, endJdTDB: 2_452_000 });
+    const out = new Float64Array(6);
+    const state = new Float64Array(6);
+    eph.helioPositions(['mars', 'earth'], 2_451_500, out, 0, 3);
+    eph.helioPositions(['earth', 'mars'], 2_451_500, out, 0, 3);
+    eph.helioState('earth', 2_451_500, state);
+    expect(Array.from(out.subarray(0, 3))).toEqual(Array.from(state.subarray(0, 3)));
+    expect(() => eph.helioPositions(['earth'], 2_452_000.1, out, 0, 3)).toThrow(/2452000\.1.*\[2451000, 2452000\]/);
+    expect(() => eph.helioPositions(['moon' as EphemerisBody], 2_451_500, out, 0, 3)).toThrow(TypeError);
+  });
+});

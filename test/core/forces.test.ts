@@ -6,7 +6,8 @@
 // law A2 (1 au / r)² (Farnocchia et al. 2013, Icarus 224, 1, eq. 3 with d = 2); the
 // Schwarzschild term on a circular orbit is 3μ/(c² r) times the Newtonian pull, outward
 // (IERS Conventions 2010 eq. 10.12 with r·v = 0, v² = μ/r: derived); Jacobians against
-// central differences of the accelerations (common practice).
+// central differences of the accelerations (common practice); the positions-only planet path
+// against the helioState path of the same cache.
 import { describe, expect, it } from 'vitest';
 import { marsdenG, nonGravG, MSY_ALPHA } from '../../src/core/forces/nonGravLaw.js';
 import { addNonGravAcceleration, NONGRAV_SCRATCH } from '../../src/core/forces/nonGrav.js';
@@ -14,7 +15,9 @@ import { addRadiationPressure, radiationPressureMPerS2, AU_PER_DAY2_PER_M_PER_S2
 import { addSchwarzschildAcceleration } from '../../src/core/forces/relativity.js';
 import { addPointMassAcceleration } from '../../src/core/forces/gravity.js';
 import { TestBodyForceModel } from '../../src/core/forces/forceModel.js';
-import { C_AU_PER_DAY, GM_SUN_AU3_PER_DAY2 } from '../../src/core/constants.js';
+import { C_AU_PER_DAY, GM_SUN_AU3_PER_DAY2, PLANETS } from '../../src/core/constants.js';
+import { createEphemeris } from '../../src/core/ephemeris/ephemeris.js';
+import type { Ephemeris } from '../../src/core/types.js';
 
 const MU = GM_SUN_AU3_PER_DAY2;
 
@@ -176,5 +179,52 @@ describe('analytic Jacobians against central differences', () => {
     expect(Math.abs(g[0] + g[4] + g[8]) / Math.abs(g[0])).toBeLessThan(1e-15);
     expect(Math.abs(g[1] - g[3])).toBeLessThan(1e-15 * Math.abs(g[1]));
     expect(Math.abs(g[2] - g[6])).toBeLessThan(1e-15 * Math.abs(g[2]));
+  });
+});
+
+describe('planet positions in the force model', () => {
+  it('reads positions only from a cache (helioPositions), with accelerations bit for bit those from helioState', () => {
+    // Reference: the same force model over an ephemeris that offers helioState alone (the
+    // path every other source takes); the fast path must not move a single bit.
+    const cache = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_452_000 });
+    let fast = 0;
+    const counted: Ephemeris = {
+      name: cache.name, startJdTDB: cache.startJdTDB, endJdTDB: cache.endJdTDB,
+      helioState: (b, jd, out, o) => cache.helioState(b, jd, out, o),
+      helioPositions: (b, jd, out, o, s) => { fast++; cache.helioPositions(b, jd, out, o, s); },
+    };
+    const plain: Ephemeris = { name: 'plain', startJdTDB: cache.startJdTDB, endJdTDB: cache.endJdTDB, helioState: (b, jd, out, o) => cache.helioState(b, jd, out, o) };
+    const opts = { planets: PLANETS, relativity: true };
+    const a = new TestBodyForceModel(2, null, { ...opts, ephemeris: counted });
+    const b = new TestBodyForceModel(2, null, { ...opts, ephemeris: plain });
+    const x = Float64Array.from([0.9, 0.4, 0.01, -1.2, 2.5, -0.1]);
+    const v = Float64Array.from([-0.007, 0.015, 0.0001, -0.01, -0.005, 0.0002]);
+    const outA = new Float64Array(6), outB = new Float64Array(6);
+    // Ten distinct times, then the first again: more than the eight remembered, so both paths refill.
+    for (const jd of [2_451_100, 2_451_100.5, 2_451_101, 2_451_102, 2_451_103, 2_451_104, 2_451_105, 2_451_106, 2_451_107, 2_451_108, 2_451_100, 2_451_108]) {
+      a.accel(jd, x, v, outA);
+      b.accel(jd, x, v, outB);
+      expect(Array.from(outA)).toEqual(Array.from(outB));
+    }
+    expect(fast).toBe(11); // the last time was remembered
+  });
+
+  it('gravity-only bodies (summed in locals) get bit for bit the accelerations of the general path', () => {
+    // Reference: the general path (addPointMassAcceleration, addSchwarzschildAcceleration on
+    // the output array), taken with the variational equations on, whose extra terms are zero
+    // for the body's own components; it must agree to the last bit with the gravity-only sum.
+    const eph = createEphemeris({ startJdTDB: 2_451_000, endJdTDB: 2_452_000 });
+    for (const relativity of [true, false]) {
+      const plain = new TestBodyForceModel(1, null, { planets: PLANETS, ephemeris: eph, relativity });
+      const general = new TestBodyForceModel(1, null, { planets: PLANETS, ephemeris: eph, relativity, variational: true });
+      const x = new Float64Array(general.dim), v = new Float64Array(general.dim);
+      const outPlain = new Float64Array(3), outGeneral = new Float64Array(general.dim);
+      for (const [jd, r] of [[2_451_100, [0.9, 0.4, 0.01]], [2_451_345.7, [-0.3, 0.2, -0.05]], [2_451_900, [5.1, -0.2, 0.1]]] as const) {
+        x.set(r); v.set([-0.007, 0.015, 0.0001]);
+        plain.accel(jd, x.subarray(0, 3), v.subarray(0, 3), outPlain);
+        general.accel(jd, x, v, outGeneral);
+        expect(Array.from(outPlain)).toEqual(Array.from(outGeneral.subarray(0, 3)));
+      }
+    }
   });
 });

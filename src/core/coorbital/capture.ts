@@ -49,11 +49,14 @@ export function createPlanetocentricSeries(n: number): PlanetocentricSeries {
 
 /**
  * Fill sample k of `out` from heliocentric states of the body and the planet (6 numbers each
- * from the offsets; au, au/day) and the planet's GM (au³/day²).
+ * from the offsets; au, au/day) and the planet's GM (au³/day²). With `angleWithinAu` the
+ * rotating-frame angle is computed only for a bound sample (energy < 0) closer than that, and
+ * is NaN elsewhere: findCaptureEpisodes reads it nowhere else when its maxDistanceAu is no
+ * larger, and a long run saves two norms and an arctangent on most samples.
  */
 export function planetocentricSampleInto(
   body: Float64Array, bodyOffset: number, planet: Float64Array, planetOffset: number, gmAu3PerDay2: number,
-  out: PlanetocentricSeries, k: number,
+  out: PlanetocentricSeries, k: number, angleWithinAu?: number,
 ): void {
   const dx = body[bodyOffset] - planet[planetOffset];
   const dy = body[bodyOffset + 1] - planet[planetOffset + 1];
@@ -63,7 +66,12 @@ export function planetocentricSampleInto(
   const dw = body[bodyOffset + 5] - planet[planetOffset + 5];
   const r = Math.hypot(dx, dy, dz);
   out.distanceAu[k] = r;
-  out.energyAu2PerDay2[k] = 0.5 * (du * du + dv * dv + dw * dw) - gmAu3PerDay2 / r;
+  const energy = 0.5 * (du * du + dv * dv + dw * dw) - gmAu3PerDay2 / r;
+  out.energyAu2PerDay2[k] = energy;
+  if (angleWithinAu !== undefined && !(energy < 0 && r < angleWithinAu)) {
+    out.rotatingAngleRad[k] = NaN;
+    return;
+  }
   // Rotating frame: x̂ = r_P/|r_P|, ẑ = (r_P × v_P)/|…|, ŷ = ẑ × x̂.
   const px = planet[planetOffset], py = planet[planetOffset + 1], pz = planet[planetOffset + 2];
   const pu = planet[planetOffset + 3], pv = planet[planetOffset + 4], pw = planet[planetOffset + 5];

@@ -75,6 +75,11 @@ function pathRange(t: Float64Array, epochJdTDB: number): [number, number] {
   return [from, from + n];
 }
 
+/** The capture zone (au): CAPTURE_HILL_RADII Hill radii (capture.ts). */
+function captureZoneOf(planet: PlanetName): number {
+  return CAPTURE_HILL_RADII * hillRadiusAu(planet);
+}
+
 /** The state of the segment holding `jd` (the last one when jd is at the very end). */
 function stateAt(segments: readonly CoorbitalSegment[], jd: number): CoorbitalState {
   for (const s of segments) if (jd >= s.startJdTDB && jd < s.endJdTDB) return s.state;
@@ -93,7 +98,7 @@ function historyOf(
     ? segmentResonantAngle(t, s.phiUnwrappedRad, { smoothingDays: periodDays, hysteresisDeg })
     : [{ state: 'passing', startJdTDB: t[0], endJdTDB: t[t.length - 1], centreDeg: NaN, amplitudeDeg: NaN, periodYears: NaN }];
   const captures = planet === 'earth'
-    ? findCaptureEpisodes(sampling.timesJd, s.planetocentric, CAPTURE_HILL_RADII * hillRadiusAu(planet))
+    ? findCaptureEpisodes(sampling.timesJd, s.planetocentric, captureZoneOf(planet))
     : [];
   return {
     epochJdTDB, segments, stateAtEpoch: stateAt(segments, epochJdTDB),
@@ -112,7 +117,9 @@ export function confirmCoorbitalBatch(
   const windowDays = (opts.windowYears ?? DEFAULT_WINDOW_YEARS) * DAYS_PER_JULIAN_YEAR;
   const eph: Ephemeris = opts.ephemeris ?? createWindowEphemeris(epochJdTDB - windowDays, epochJdTDB + windowDays);
   const series = opts.series ?? false;
-  const sampling = sampleCoorbitalMotion(states, epochJdTDB, planet, { ...opts, ephemeris: eph, rotatingFrame: series });
+  // The rotating-frame angle serves the captures alone: within their zone for the Earth, nowhere else.
+  const captureZoneAu = planet === 'earth' ? captureZoneOf(planet) : 0;
+  const sampling = sampleCoorbitalMotion(states, epochJdTDB, planet, { ...opts, ephemeris: eph, rotatingFrame: series, captureZoneAu });
   // Smoothing window: one orbital period of the planet (design note §6 [design]).
   const periodDays = planetPeriodDays(eph, planet, epochJdTDB);
   return sampling.bodies.map((s) => historyOf(sampling, s, epochJdTDB, planet, periodDays, opts.hysteresisDeg, series));

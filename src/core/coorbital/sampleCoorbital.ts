@@ -47,6 +47,11 @@ export interface CoorbitalSamplingOptions {
    * counter-clockwise seen from the ecliptic's north, so the leading point L4 is at y > 0.
    */
   rotatingFrame?: boolean;
+  /**
+   * Where the planetocentric rotating-frame angle is wanted: bound samples closer than this
+   * (au), e.g. the capture zone; NaN elsewhere (planetocentricSampleInto). Default: everywhere.
+   */
+  captureZoneAu?: number;
 }
 
 /**
@@ -146,6 +151,7 @@ interface SampleContext {
   bodyState: Float64Array; // 6
   approach: Float64Array; // 2: closest-approach scratch
   planetDistanceAu: Float64Array | null; // at the φ samples, with the rotatingFrame option
+  captureZoneAu: number | undefined; // the rotating-frame angle only within it
 }
 
 /**
@@ -182,7 +188,7 @@ function recordSample(ctx: SampleContext, k: number, tJd: number, x: Float64Arra
       s.rotatingXAu[k / ctx.phiStride] = cosL * bs[0] + sinL * bs[1];
       s.rotatingYAu[k / ctx.phiStride] = -sinL * bs[0] + cosL * bs[1];
     }
-    planetocentricSampleInto(bs, 0, ps, 0, ctx.planetGm, s.planetocentric, k);
+    planetocentricSampleInto(bs, 0, ps, 0, ctx.planetGm, s.planetocentric, k, ctx.captureZoneAu);
     closestApproachInto(bs, ps, ctx.halfStepDays, ctx.approach);
     if (ctx.approach[0] < s.minDistanceAu) { s.minDistanceAu = ctx.approach[0]; s.minDistanceJdTDB = tJd + ctx.approach[1]; }
   }
@@ -235,7 +241,9 @@ function checkedGrid(eph: Ephemeris, planet: PlanetName, epochJdTDB: number, opt
 }
 
 /** The per-run context: planet constants, scratch, and the bodies' output columns. */
-function sampleContext(eph: Ephemeris, planet: PlanetName, grid: SampleGrid, nBodies: number, rotatingFrame: boolean): SampleContext {
+function sampleContext(
+  eph: Ephemeris, planet: PlanetName, grid: SampleGrid, nBodies: number, rotatingFrame: boolean, captureZoneAu: number | undefined,
+): SampleContext {
   const n = grid.timesJd.length;
   const nPhi = (n - 1) / grid.phiStride + 1;
   const out: CoorbitalSamples[] = [];
@@ -250,7 +258,7 @@ function sampleContext(eph: Ephemeris, planet: PlanetName, grid: SampleGrid, nBo
     eph, planetBody: planetEphemerisBody(planet), planetGm: planetGmAu3PerDay2(planet),
     planetKeplerGm: planetKeplerGmAu3PerDay2(planet), halfStepDays: grid.stepDays / 2, phiStride: grid.phiStride, out,
     planetState: new Float64Array(6), bodyState: new Float64Array(6), approach: new Float64Array(2),
-    planetDistanceAu: rotatingFrame ? new Float64Array(nPhi) : null,
+    planetDistanceAu: rotatingFrame ? new Float64Array(nPhi) : null, captureZoneAu,
   };
 }
 
@@ -268,7 +276,7 @@ export function sampleCoorbitalMotion(
   const { timesJd, epochIndex } = grid;
   const n = timesJd.length;
   const nPhi = (n - 1) / grid.phiStride + 1;
-  const ctx = sampleContext(eph, planet, grid, states.length / 6, opts.rotatingFrame ?? false);
+  const ctx = sampleContext(eph, planet, grid, states.length / 6, opts.rotatingFrame ?? false, opts.captureZoneAu);
   const req = {
     epochJdTDB, states, forces: { planets: PLANETS, ephemeris: eph, relativity: opts.relativity ?? true },
     integrator: { epsilon: CONFIRM_EPSILON, ...opts.integrator },

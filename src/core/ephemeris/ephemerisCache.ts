@@ -70,6 +70,8 @@ export class EphemerisCache implements Ephemeris {
   private readonly methods: CacheFillMethod[];
   private readonly nodeStates: Float64Array;
   private segmentsFitted = 0;
+  private lastBodies: readonly EphemerisBody[] | null = null; // helioPositions' last list
+  private lastIndices = new Int32Array(0);
 
   constructor(readonly source: Ephemeris, opts: EphemerisCacheOptions) {
     const { startJdTDB, endJdTDB } = opts;
@@ -249,14 +251,20 @@ export class EphemerisCache implements Ephemeris {
     return f;
   }
 
+  /** The segment of table t (body b) at u segment lengths from the start, fitted if it was not. */
+  private fittedSegment(b: number, t: BodyTable, u: number): number {
+    let s = Math.floor(u);
+    if (s >= t.segmentCount) s = t.segmentCount - 1; // the end of the span
+    if (t.built[s] === 0) this.fitAround(b, s);
+    return s;
+  }
+
   helioState(body: EphemerisBody, jdTDB: number, out: Float64Array, offset = 0): void {
     const b = ephemerisBodyIndex(body);
     assertInSpan(this.name, jdTDB, this.startJdTDB, this.endJdTDB);
     const t = this.tables[b];
     const u = (jdTDB - this.startJdTDB) / t.segmentDays;
-    let s = Math.floor(u);
-    if (s >= t.segmentCount) s = t.segmentCount - 1; // jdTDB === endJdTDB
-    if (t.built[s] === 0) this.fitAround(b, s);
+    const s = this.fittedSegment(b, t, u);
     const x = 2 * (u - s) - 1;
     const base = s * t.stride;
     if (this.velocity === 'fitted') {
@@ -264,6 +272,41 @@ export class EphemerisCache implements Ephemeris {
       chebyshevValue3(t.coeffs, base + 3 * t.n, t.n, x, 0, out, offset + 3);
     } else {
       chebyshevValue3(t.coeffs, base, t.n, x, 2 / t.segmentDays, out, offset);
+    }
+  }
+
+  /**
+   * Positions only of bodies[j] at jdTDB into out[offset + stride·j .. +2]: the same segment
+   * and the same arithmetic as helioState (bit for bit; 'fitted' and 'derivative' share the
+   * position polynomial), without the velocity sums, with one span check for all and the
+   * body indices looked up once per list (the force model asks with the same list every time).
+   */
+  helioPositions(bodies: readonly EphemerisBody[], jdTDB: number, out: Float64Array, offset: number, stride: number): void {
+    assertInSpan(this.name, jdTDB, this.startJdTDB, this.endJdTDB);
+    if (bodies !== this.lastBodies) {
+      this.lastIndices = Int32Array.from(bodies.map((b) => ephemerisBodyIndex(b)));
+      this.lastBodies = bodies;
+    }
+    const idx = this.lastIndices;
+    for (let j = 0; j < idx.length; j++) {
+      const b = idx[j];
+      const t = this.tables[b];
+      const u = (jdTDB - this.startJdTDB) / t.segmentDays;
+      const s = this.fittedSegment(b, t, u);
+      // chebyshevValue3's forward recurrence and order of additions, without the derivatives.
+      const x = 2 * (u - s) - 1;
+      const c = t.coeffs, n = t.n, o0 = s * t.stride, o1 = o0 + n, o2 = o1 + n;
+      let px = c[o0], py = c[o1], pz = c[o2];
+      let t0 = 1, t1 = x; // T_{k-1}, T_k
+      for (let k = 1; k < n; k++) {
+        px += c[o0 + k] * t1;
+        py += c[o1 + k] * t1;
+        pz += c[o2 + k] * t1;
+        const t2 = 2 * x * t1 - t0;
+        t0 = t1; t1 = t2;
+      }
+      const o = offset + stride * j;
+      out[o] = px; out[o + 1] = py; out[o + 2] = pz;
     }
   }
 

@@ -59,8 +59,6 @@ export class TestBodyForceModel implements SecondOrderSystem {
   readonly errorDim: number;
   readonly nBodies: number;
   readonly variational: boolean;
-  /** Heliocentric planet states at the last evaluated time: 6 numbers per planet. */
-  readonly planetStates: Float64Array;
   readonly planets: readonly PlanetName[];
   private readonly planetBodies: EphemerisBody[];
   private readonly planetGm: Float64Array;
@@ -76,7 +74,6 @@ export class TestBodyForceModel implements SecondOrderSystem {
   private readonly gradV = new Float64Array(9);
   private readonly partials = new Float64Array(3 * PARAMS_PER_BODY);
   private readonly scratch = new Float64Array(NONGRAV_SCRATCH);
-  private readonly indirect = new Float64Array(3);
   // Planet states and indirect terms at the last PLANET_SLOTS distinct times: the
   // predictor–corrector revisits the same eight substep times 2–12 times per step.
   private readonly slotTimes = new Float64Array(PLANET_SLOTS).fill(NaN);
@@ -98,7 +95,6 @@ export class TestBodyForceModel implements SecondOrderSystem {
     // The 'earth' GM is that of the Earth–Moon system, so it acts from the barycentre.
     this.planetBodies = this.planets.map((p) => (p === 'earth' ? 'emb' : p));
     this.planetGm = Float64Array.from(this.planets.map((p) => planetGmAu3PerDay2(p)));
-    this.planetStates = new Float64Array(6 * this.planets.length);
     this.slotStates = new Float64Array(PLANET_SLOTS * 6 * this.planets.length);
     this.relativity = options.relativity ?? false;
     this.law = options.nonGravLaw ?? 'comet-water';
@@ -130,58 +126,63 @@ export class TestBodyForceModel implements SecondOrderSystem {
   }
 
   /**
-   * Planet states and the indirect term at time t into planetStates / indirect: from the
-   * slot cache when t was seen among the last PLANET_SLOTS times, else from the ephemeris
-   * (all planets once per time, shared by all bodies).
+   * Planet positions and the indirect term at time t: the slot holding them is returned
+   * (positions of planet j at slotStates[6·(slot·planets + j)], the indirect term at
+   * slotIndirect[3·slot]), read again when t was seen among the last PLANET_SLOTS times, else
+   * filled from the ephemeris (all planets once per time, shared by all bodies; positions
+   * only when the ephemeris offers helioPositions, bit for bit those of helioState).
    */
-  private updatePlanets(tJd: number): void {
-    const ps = this.planetStates;
-    const ind = this.indirect;
-    const block = 6 * this.planetBodies.length;
-    for (let k = 0; k < PLANET_SLOTS; k++) {
-      if (this.slotTimes[k] === tJd) {
-        const ss = this.slotStates;
-        for (let i = 0, o = k * block; i < block; i++) ps[i] = ss[o + i];
-        ind[0] = this.slotIndirect[3 * k]; ind[1] = this.slotIndirect[3 * k + 1]; ind[2] = this.slotIndirect[3 * k + 2];
-        return;
-      }
-    }
-    ind[0] = 0; ind[1] = 0; ind[2] = 0;
-    for (let j = 0; j < this.planetBodies.length; j++) {
-      this.eph!.helioState(this.planetBodies[j], tJd, ps, 6 * j);
-      const x = ps[6 * j], y = ps[6 * j + 1], z = ps[6 * j + 2];
-      const r2 = x * x + y * y + z * z;
-      const f = this.planetGm[j] / (r2 * Math.sqrt(r2));
-      ind[0] -= f * x; ind[1] -= f * y; ind[2] -= f * z;
-    }
+  private updatePlanets(tJd: number): number {
+    for (let k = 0; k < PLANET_SLOTS; k++) if (this.slotTimes[k] === tJd) return k;
     const k = this.nextSlot;
     this.nextSlot = (k + 1) % PLANET_SLOTS;
+    const np = this.planetBodies.length;
+    const ps = this.slotStates;
+    const base = 6 * np * k;
+    const eph = this.eph!;
+    if (eph.helioPositions) eph.helioPositions(this.planetBodies, tJd, ps, base, 6);
+    else for (let j = 0; j < np; j++) eph.helioState(this.planetBodies[j], tJd, ps, base + 6 * j);
+    let ix = 0, iy = 0, iz = 0;
+    for (let j = 0; j < np; j++) {
+      const o = base + 6 * j;
+      const x = ps[o], y = ps[o + 1], z = ps[o + 2];
+      const r2 = x * x + y * y + z * z;
+      const f = this.planetGm[j] / (r2 * Math.sqrt(r2));
+      ix -= f * x; iy -= f * y; iz -= f * z;
+    }
     this.slotTimes[k] = tJd;
-    this.slotStates.set(ps, k * block);
-    this.slotIndirect[3 * k] = ind[0]; this.slotIndirect[3 * k + 1] = ind[1]; this.slotIndirect[3 * k + 2] = ind[2];
+    this.slotIndirect[3 * k] = ix; this.slotIndirect[3 * k + 1] = iy; this.slotIndirect[3 * k + 2] = iz;
+    return k;
   }
 
   accel(tJd: number, x: Float64Array, v: Float64Array, out: Float64Array): void {
     const np = this.planetBodies.length;
-    if (np > 0) this.updatePlanets(tJd);
-    const ps = this.planetStates;
+    const slot = np > 0 ? this.updatePlanets(tJd) : 0;
+    const ps = this.slotStates;
+    const pBase = 6 * np * slot;
+    const ind = this.slotIndirect;
+    const indX = ind[3 * slot], indY = ind[3 * slot + 1], indZ = ind[3 * slot + 2];
     const variational = this.variational;
     const gradR = variational ? this.gradR : null;
     const gradV = variational ? this.gradV : null;
     const partials = variational ? this.partials : null;
     const nb = this.nBodies;
     for (let k = 0; k < nb; k++) {
+      if (!variational && this.hasNonGrav[k] === 0 && this.hasRadiation[k] === 0) {
+        this.gravityOnly(k, x, v, out, ps, pBase, indX, indY, indZ);
+        continue;
+      }
       const o = 3 * k;
       const rx = x[o], ry = x[o + 1], rz = x[o + 2];
       out[o] = 0; out[o + 1] = 0; out[o + 2] = 0;
       if (variational) { this.gradR.fill(0); this.gradV.fill(0); this.partials.fill(0); }
       addPointMassAcceleration(this.sunGm, rx, ry, rz, out, o, gradR);
       for (let j = 0; j < np; j++) {
-        const q = 6 * j;
+        const q = pBase + 6 * j;
         addPointMassAcceleration(this.planetGm[j], rx - ps[q], ry - ps[q + 1], rz - ps[q + 2], out, o, gradR);
       }
       if (np > 0) {
-        out[o] += this.indirect[0]; out[o + 1] += this.indirect[1]; out[o + 2] += this.indirect[2];
+        out[o] += indX; out[o + 1] += indY; out[o + 2] += indZ;
       }
       if (this.relativity) {
         addSchwarzschildAcceleration(this.sunGm, C_AU_PER_DAY, rx, ry, rz, v[o], v[o + 1], v[o + 2],
@@ -197,6 +198,52 @@ export class TestBodyForceModel implements SecondOrderSystem {
       }
       if (variational) this.variationalAccel(k, x, v, out);
     }
+  }
+
+  /**
+   * Body k with gravity (and the 1PN term) only, no gradients: the same operations in the
+   * same order as addPointMassAcceleration and addSchwarzschildAcceleration on out[], summed
+   * in locals and stored once (bit for bit the same accelerations, tested).
+   */
+  private gravityOnly(k: number, x: Float64Array, v: Float64Array, out: Float64Array, ps: Float64Array, pBase: number,
+    indX: number, indY: number, indZ: number): void {
+    const o = 3 * k;
+    const rx = x[o], ry = x[o + 1], rz = x[o + 2];
+    let ax = 0, ay = 0, az = 0;
+    {
+      const d2 = rx * rx + ry * ry + rz * rz;
+      const d = Math.sqrt(d2);
+      const f = this.sunGm / (d2 * d);
+      ax -= f * rx; ay -= f * ry; az -= f * rz;
+    }
+    const np = this.planetBodies.length;
+    const gm = this.planetGm;
+    for (let j = 0; j < np; j++) {
+      const q = pBase + 6 * j;
+      const dx = rx - ps[q], dy = ry - ps[q + 1], dz = rz - ps[q + 2];
+      const d2 = dx * dx + dy * dy + dz * dz;
+      const d = Math.sqrt(d2);
+      const f = gm[j] / (d2 * d);
+      ax -= f * dx; ay -= f * dy; az -= f * dz;
+    }
+    if (np > 0) {
+      ax += indX; ay += indY; az += indZ;
+    }
+    if (this.relativity) {
+      // addSchwarzschildAcceleration (relativity.ts), written out.
+      const vx = v[o], vy = v[o + 1], vz = v[o + 2];
+      const r2 = rx * rx + ry * ry + rz * rz;
+      const r = Math.sqrt(r2);
+      const v2 = vx * vx + vy * vy + vz * vz;
+      const s = rx * vx + ry * vy + rz * vz;
+      const mu = this.sunGm;
+      const kk = mu / (C_AU_PER_DAY * C_AU_PER_DAY * r2 * r);
+      const f = (4 * mu) / r - v2;
+      ax += kk * (f * rx + 4 * s * vx);
+      ay += kk * (f * ry + 4 * s * vy);
+      az += kk * (f * rz + 4 * s * vz);
+    }
+    out[o] = ax; out[o + 1] = ay; out[o + 2] = az;
   }
 
   /** δa = (∂a/∂r) δr + (∂a/∂v) δv (+ ∂a/∂p for the parameter columns). */
