@@ -34,10 +34,12 @@ const PER_PLANET = 40;
 // Stated tolerances against the largest differences measured on the benchmark's 63 180 bodies
 // (scripts/bench/coorbitalTwoStage.ts): no state or close-approach flag changed (margins moved
 // by at most 0.044); periods 9.0e-4 for e ≤ 0.6, i ≤ 30° and 2.4e-3 beyond (a Mars body at
-// e = 0.92); angles 0.84° (a Mars quasi-satellite at e = 0.83; 0.003° for e ≤ 0.6).
+// e = 0.92); angles 0.84° (a Mars quasi-satellite at e = 0.83; 0.003° for e ≤ 0.6). With the
+// coarser first grid of Jupiter and Saturn (2° × 45): periods 2.5e-3 for e ≤ 0.6, i ≤ 30°
+// (12 590 bodies of a 300 000-row dump), angles 5.4e-3°.
 const STATE_MARGIN = 0.5 * COARSE_ACCEPT_MARGIN; // a body nearer a separatrix than this may change state
-const PERIOD_TOLERANCE = 2e-3; // relative, e ≤ 0.6 and i ≤ 30°
-const PERIOD_TOLERANCE_HIGH_E = 5e-3; // relative, beyond
+const PERIOD_TOLERANCE = 5e-3; // relative, e ≤ 0.6 and i ≤ 30°
+const PERIOD_TOLERANCE_HIGH_E = 1e-2; // relative, beyond
 const ANGLE_TOLERANCE_DEG = 1;
 
 interface Body { planet: PlanetName; shape: AveragedOrbitShape; x0: number; phi0Rad: number; mu: number; periodDays: number }
@@ -135,7 +137,7 @@ describe('two-stage co-orbital prediction against the fine grid', () => {
   });
 
   it('catches a coarse grid that is too coarse (4° in φ, 18 planet longitudes)', () => {
-    const { fast } = predictAll(bodies, createTwoStageWorkspace(90, 18));
+    const { fast } = predictAll(bodies, createTwoStageWorkspace(90, 18, 90, 18));
     expect(departures(bodies, fast, fine).length).toBeGreaterThan(0);
   });
 
