@@ -23,3 +23,8 @@ export function demoFiles(): string[] {
   const dir = join(packageRoot(), 'data', 'demo');
   return ['orbits.txt', 'comets.txt'].map((f) => join(dir, f)).filter((f) => existsSync(f));
 }
+
+/** The bundled published family list (data/families/, provenance in its README). */
+export function bundledFamilyList(): string {
+  return join(packageRoot(), 'data', 'families', 'families-2015.json');
+}

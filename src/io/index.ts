@@ -26,3 +26,5 @@ export * from './csvRecord.js';
 export * from './csvTable.js';
 export * from './detectFormat.js';
 export * from './readOrbitFile.js';
+export * from './publishedFamilies.js';
+export * from './familyMembership.js';
