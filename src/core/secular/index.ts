@@ -5,6 +5,7 @@ export * from './secularModes.js';
 export * from './secularSystem.js';
 export * from './planetarySecularModel.js';
 export * from './testParticle.js';
+export * from './particleTable.js';
 export * from './meanMotionResonances.js';
 export * from './reliability.js';
 export * from './properElementsKernel.js';

@@ -16,19 +16,21 @@ import {
   BIT_SECULAR_RESONANCE, JUPITER_PERIHELION_AU, MARS_APHELION_AU, SECULAR_ALPHA_MAX, SECULAR_A_MAX_AU,
   SECULAR_A_MIN_AU, SECULAR_DIVISOR_MIN_ARCSEC_PER_YEAR, SECULAR_E_MAX, SECULAR_SIN_I_MAX,
 } from './reliability.js';
-import { newTestParticleScratch, newTestParticleSecular, testParticleSecular, type TestParticleScratch, type TestParticleSecular } from './testParticle.js';
+import { interpolateParticleTable, particleTable, type ParticleTable } from './particleTable.js';
+import { newTestParticleScratch, newTestParticleSecular, secularFromCoefficients, testParticleSecular, type TestParticleScratch, type TestParticleSecular } from './testParticle.js';
 import type { SecularModel } from './types.js';
 
 /** Working memory and results of the kernel (one per thread). */
 export interface ProperScratch {
   particle: TestParticleScratch;
+  table: ParticleTable; // the model's coefficients tabulated in a (particleTable.ts)
   secular: TestParticleSecular; // the particle's A, B, forced vectors, divisors
   eProper: number; sinIProper: number; // results of the last call
   mmr: number; // index into MAIN_BELT_RESONANCES, −1 when none
 }
 
 export function newProperScratch(model: SecularModel): ProperScratch {
-  return { particle: newTestParticleScratch(model), secular: newTestParticleSecular(), eProper: NaN, sinIProper: NaN, mmr: -1 };
+  return { particle: newTestParticleScratch(model), table: particleTable(model), secular: newTestParticleSecular(), eProper: NaN, sinIProper: NaN, mmr: -1 };
 }
 
 function tooCloseToPlanet(model: SecularModel, aAu: number): boolean {
@@ -56,7 +58,8 @@ export function properElementsKernel(
   sc.mmr = meanMotionResonanceAt(aAu);
   if (sc.mmr >= 0) code |= BIT_MEAN_MOTION_RESONANCE;
   if (tooCloseToPlanet(model, aAu)) return code | BIT_NOT_COMPUTED;
-  testParticleSecular(model, aAu, sc.particle, s);
+  if (interpolateParticleTable(sc.table, aAu, sc.particle.coef)) secularFromCoefficients(model, sc.particle.coef, s);
+  else testParticleSecular(model, aAu, sc.particle, s);
   if (s.minDivisorG < SECULAR_DIVISOR_MIN_ARCSEC_PER_YEAR || s.minDivisorS < SECULAR_DIVISOR_MIN_ARCSEC_PER_YEAR) code |= BIT_SECULAR_RESONANCE;
   const varpi = nodeRad + periRad;
   sc.eProper = Math.hypot(e * Math.sin(varpi) - s.hForced, e * Math.cos(varpi) - s.kForced);

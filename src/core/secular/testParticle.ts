@@ -31,38 +31,48 @@ export function newTestParticleSecular(): TestParticleSecular {
   return { gArcsecPerYear: NaN, sArcsecPerYear: NaN, hForced: NaN, kForced: NaN, pForced: NaN, qForced: NaN, minDivisorG: NaN, modeG: -1, minDivisorS: NaN, modeS: -1 };
 }
 
-/** Scratch a caller keeps per thread: per-planet A_j, B_j and the pair factors. */
-export interface TestParticleScratch { aj: Float64Array; bj: Float64Array; f: Float64Array }
+/** Scratch a caller keeps per thread: the per-body coefficients and the pair factors. */
+export interface TestParticleScratch { coef: Float64Array; f: Float64Array }
+
+/** Length of a coefficient record: A, then ν_i (N values), then μ_i (N values). */
+export function particleCoefficientCount(model: SecularModel): number {
+  return 1 + 2 * model.planets.length;
+}
 
 export function newTestParticleScratch(model: SecularModel): TestParticleScratch {
-  const n = model.planets.length;
-  return { aj: new Float64Array(n), bj: new Float64Array(n), f: new Float64Array(2) };
+  return { coef: new Float64Array(particleCoefficientCount(model)), f: new Float64Array(2) };
 }
 
 /**
- * Fill `out` for a particle at aAu (must differ from every planet's a; throws RangeError
- * from the Laplace coefficients when a planet's orbit is closer than α = 0.9999).
+ * The coefficients that depend on a alone, into out[o…]: A, then ν_i = Σ_j A_j E_ji and
+ * μ_i = Σ_j B_j I_ji for each mode i (smooth in a away from the planets: no divisors yet).
  */
-export function testParticleSecular(model: SecularModel, aAu: number, scratch: TestParticleScratch, out: TestParticleSecular): void {
+export function particleCoefficients(model: SecularModel, aAu: number, f: Float64Array, out: Float64Array, o = 0): void {
   const planets = model.planets, n = planets.length;
   const n4 = meanMotionArcsecPerYear(aAu) / 4;
+  const em = model.eModes.vectors, im = model.iModes.vectors;
   let A = 0;
+  for (let i = 0; i < 2 * n; i++) out[o + 1 + i] = 0;
   for (let j = 0; j < n; j++) {
-    secularPairFactors(aAu, planets[j].aAu, scratch.f);
+    secularPairFactors(aAu, planets[j].aAu, f);
     const c = n4 * planets[j].massRatio;
-    A += c * scratch.f[0];
-    scratch.aj[j] = -c * scratch.f[1];
-    scratch.bj[j] = c * scratch.f[0];
+    A += c * f[0];
+    const aj = -c * f[1], bj = c * f[0];
+    for (let i = 0; i < n; i++) {
+      out[o + 1 + i] += aj * em[j * n + i];
+      out[o + 1 + n + i] += bj * im[j * n + i];
+    }
   }
-  const B = -A;
-  const em = model.eModes, im = model.iModes;
+  out[o] = A;
+}
+
+/** Frequencies, forced vectors at the epoch and smallest divisors from a coefficient record. */
+export function secularFromCoefficients(model: SecularModel, coef: Float64Array, out: TestParticleSecular, o = 0): void {
+  const n = model.planets.length, em = model.eModes, im = model.iModes;
+  const A = coef[o], B = -A;
   let h0 = 0, k0 = 0, p0 = 0, q0 = 0, dg = Infinity, mg = -1, ds = Infinity, ms = -1;
   for (let i = 0; i < n; i++) {
-    let nu = 0, mu = 0;
-    for (let j = 0; j < n; j++) {
-      nu += scratch.aj[j] * em.vectors[j * n + i];
-      mu += scratch.bj[j] * im.vectors[j * n + i];
-    }
+    const nu = coef[o + 1 + i], mu = coef[o + 1 + n + i];
     const divG = A - em.frequencyArcsecPerYear[i], divS = B - im.frequencyArcsecPerYear[i];
     h0 -= (nu * em.sinPhaseAmplitude[i]) / divG;
     k0 -= (nu * em.cosPhaseAmplitude[i]) / divG;
@@ -74,4 +84,13 @@ export function testParticleSecular(model: SecularModel, aAu: number, scratch: T
   out.gArcsecPerYear = A; out.sArcsecPerYear = B;
   out.hForced = h0; out.kForced = k0; out.pForced = p0; out.qForced = q0;
   out.minDivisorG = dg; out.modeG = mg; out.minDivisorS = ds; out.modeS = ms;
+}
+
+/**
+ * Fill `out` for a particle at aAu, directly from the Laplace series (must differ from every
+ * planet's a; RangeError from the Laplace coefficients when α > 0.9999).
+ */
+export function testParticleSecular(model: SecularModel, aAu: number, scratch: TestParticleScratch, out: TestParticleSecular): void {
+  particleCoefficients(model, aAu, scratch.f, scratch.coef, 0);
+  secularFromCoefficients(model, scratch.coef, out, 0);
 }
