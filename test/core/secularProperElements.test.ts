@@ -3,7 +3,7 @@ import { gunzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 import { DEG_PER_RAD, RAD_PER_DEG } from '../../src/core/constants.js';
 import {
-  BIT_NOT_COMPUTED, newProperColumns, planetarySecularModel, properElements, properElementsColumns, reliabilityReasonIds,
+  BIT_MEAN_MOTION_RESONANCE, BIT_NOT_COMPUTED, BIT_SECULAR_RESONANCE, MAIN_BELT_RESONANCES, newProperColumns, reliabilityBit, planetarySecularModel, properElements, properElementsColumns, reliabilityReasonIds,
 } from '../../src/core/secular/index.js';
 import { parseOrbitExportLine } from '../../src/io/orbitExportLine.js';
 import { emptyOrbitRow, type OrbitRow } from '../../src/io/types.js';
@@ -96,6 +96,21 @@ describe('proper-unreliable reasons', () => {
       expect(sec?.text).toContain('ν6, |A − g6|');
     }
     expect(at(2.2, 0.05, 3).flag).toBe('');
+  });
+
+  it('resonance centres from Kepler\'s third law sit at the published Kirkwood gaps; Mars\'s 1:2 is marked', () => {
+    // Kirkwood gaps at 2.50 (3:1), 2.82 (5:2), 2.95 (7:3) and 3.27 au (2:1) (common practice, from memory).
+    const centre = (label: string) => MAIN_BELT_RESONANCES.find((r) => r.label === label)!.centreAu;
+    expect(centre('3:1 with Jupiter')).toBeCloseTo(2.50, 2);
+    expect(centre('5:2 with Jupiter')).toBeCloseTo(2.82, 1);
+    expect(Math.abs(centre('7:3 with Jupiter') - 2.95)).toBeLessThan(0.01);
+    expect(Math.abs(centre('2:1 with Jupiter') - 3.27)).toBeLessThan(0.01);
+    const mars = at(2.419);
+    expect(mars.reasons.map((x) => x.id)).toEqual(['mean-motion-resonance']);
+    expect(mars.reasons[0].text).toContain('1:2 with Mars');
+    expect(reliabilityBit('mean-motion-resonance')).toBe(BIT_MEAN_MOTION_RESONANCE);
+    expect(reliabilityBit('secular-resonance')).toBe(BIT_SECULAR_RESONANCE);
+    expect(reliabilityBit('not-computed')).toBe(BIT_NOT_COMPUTED);
   });
 
   it('outside the range, planet-crossing, high e, and bodies that cannot be computed', () => {
