@@ -9,3 +9,4 @@ export * from './orbit/index.js';
 export * from './random.js';
 export * from './coorbital/index.js';
 export * from './strideIndices.js';
+export * from './secular/index.js';
