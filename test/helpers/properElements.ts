@@ -44,3 +44,20 @@ export function readProperElements(path = PROPER_ELEMENTS_SDSS_PATH): ProperElem
   }
   return { aAu, e, sinI, badLines };
 }
+
+/**
+ * The rows with distinct (a, e, sin i), first occurrence kept, in file order: the table lists
+ * a body once per SDSS detection, and repeats of one body would link at any cutoff.
+ */
+export function distinctBodies(p: ProperElements): ProperElements {
+  const seen = new Set<string>();
+  const keep: number[] = [];
+  for (let k = 0; k < p.aAu.length; k++) {
+    const key = `${p.aAu[k]},${p.e[k]},${p.sinI[k]}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    keep.push(k);
+  }
+  const take = (c: Float64Array): Float64Array => Float64Array.from(keep, (k) => c[k]);
+  return { aAu: take(p.aAu), e: take(p.e), sinI: take(p.sinI), badLines: p.badLines };
+}

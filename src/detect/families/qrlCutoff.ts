@@ -12,13 +12,18 @@ import { seededRandom } from '../../core/random.js';
 import { linkComponents } from './clusterHcm.js';
 import { toVelocitySpace } from './metricVelocity.js';
 import { shuffledBackground } from './qrlBackground.js';
+import { coarseCellBackground, type CoarseCell } from './qrlBackgroundCells.js';
 
 export interface QrlOptions {
   readonly minMembers: number;     // N_min of the families the cutoff is for
   readonly aRefAu: number;         // reference a of the metric (metricVelocity.ts)
   readonly backgrounds: number;    // random backgrounds drawn
   readonly seed: number;           // seeds the backgrounds
-  readonly binWidthAu: number;     // a bins of the background (qrlBackground.ts)
+  /**
+   * How backgrounds are drawn: e and sin i permuted within a bins of this width
+   * (qrlBackground.ts), or each body uniform in its box of a coarse grid (qrlBackgroundCells.ts).
+   */
+  readonly background: { readonly binWidthAu: number } | { readonly cell: CoarseCell };
   readonly resolutionMPerS: number; // bisection stops when the bracket is this narrow
 }
 
@@ -39,7 +44,9 @@ export function quasiRandomLevel(aAu: ArrayLike<number>, e: ArrayLike<number>, s
   const random = seededRandom(opts.seed);
   const perBackgroundMPerS = new Float64Array(opts.backgrounds);
   for (let b = 0; b < opts.backgrounds; b++) {
-    const bg = shuffledBackground(aAu, e, sinI, opts.binWidthAu, random);
+    const bg = 'cell' in opts.background
+      ? coarseCellBackground(aAu, e, sinI, opts.background.cell, random)
+      : shuffledBackground(aAu, e, sinI, opts.background.binWidthAu, random);
     const space = toVelocitySpace(bg.aAu, bg.e, bg.sinI, opts.aRefAu);
     perBackgroundMPerS[b] = groupLevel(space, opts.minMembers, opts.resolutionMPerS);
   }

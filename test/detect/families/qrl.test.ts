@@ -9,6 +9,7 @@ import { seededRandom } from '../../../src/core/random.js';
 import { clusterHcm } from '../../../src/detect/families/clusterHcm.js';
 import { toVelocitySpace } from '../../../src/detect/families/metricVelocity.js';
 import { shuffledBackground } from '../../../src/detect/families/qrlBackground.js';
+import { coarseCellBackground } from '../../../src/detect/families/qrlBackgroundCells.js';
 import { groupLevel, quasiRandomLevel } from '../../../src/detect/families/qrlCutoff.js';
 import { BELT_REGION_EDGES_AU, regionMembers, regionOfAu } from '../../../src/detect/families/qrlRegion.js';
 
@@ -42,6 +43,25 @@ describe('random background', () => {
   });
 });
 
+describe('coarse-cell background', () => {
+  it('keeps the count of bodies in every box and moves each body only within its box', () => {
+    const { a, e, s } = syntheticBelt(4, 2000, 100);
+    const cell = { aAu: 0.02, e: 0.02, sinI: 0.02 };
+    const bg = coarseCellBackground(a, e, s, cell, seededRandom(9));
+    const box = (x: number, w: number) => Math.floor(x / w);
+    let moved = 0;
+    for (let k = 0; k < a.length; k++) {
+      expect([box(bg.aAu[k], cell.aAu), box(bg.e[k], cell.e), box(bg.sinI[k], cell.sinI)]).toEqual([box(a[k], cell.aAu), box(e[k], cell.e), box(s[k], cell.sinI)]);
+      if (bg.e[k] !== e[k]) moved++;
+    }
+    expect(moved).toBe(a.length);
+    // The planted family (0.002 au × 0.001 × 0.001) is spread over its box: its spread in e grows.
+    const spread = (c: Float64Array) => Math.max(...c.subarray(2000)) - Math.min(...c.subarray(2000));
+    expect(spread(bg.e)).toBeGreaterThan(0.01);
+    expect(Array.from(coarseCellBackground(a, e, s, cell, seededRandom(9)).sinI)).toEqual(Array.from(bg.sinI));
+  });
+});
+
 describe('level search', () => {
   it('finds the cutoff at which the first group of N_min forms (hand-placed points)', () => {
     // Along x: gaps 10, 3 | 87 | 4, 2.5 → three linked at 4 (100, 104, 106.5), at 10 on the left.
@@ -56,7 +76,7 @@ describe('level search', () => {
 
   it('HCM at the QRL finds a planted family and no group of the smooth background (synthetic)', () => {
     const { a, e, s } = syntheticBelt(5, 4000, 60);
-    const q = quasiRandomLevel(a, e, s, { minMembers: 10, aRefAu: 2.675, backgrounds: 3, seed: 1, binWidthAu: 0.05, resolutionMPerS: 0.5 });
+    const q = quasiRandomLevel(a, e, s, { minMembers: 10, aRefAu: 2.675, backgrounds: 3, seed: 1, background: { binWidthAu: 0.05 }, resolutionMPerS: 0.5 });
     expect(q.perBackgroundMPerS.length).toBe(3);
     expect(q.cutoffMPerS).toBe(Math.min(...q.perBackgroundMPerS));
     const res = clusterHcm(toVelocitySpace(a, e, s, 2.675), q.cutoffMPerS, 10);
@@ -66,7 +86,7 @@ describe('level search', () => {
     expect(planted).toBe(60);
     expect(res.memberCounts[0]).toBeLessThan(60 + 10);
     // The same seed gives the same level.
-    expect(quasiRandomLevel(a, e, s, { minMembers: 10, aRefAu: 2.675, backgrounds: 3, seed: 1, binWidthAu: 0.05, resolutionMPerS: 0.5 }).cutoffMPerS).toBe(q.cutoffMPerS);
+    expect(quasiRandomLevel(a, e, s, { minMembers: 10, aRefAu: 2.675, backgrounds: 3, seed: 1, background: { binWidthAu: 0.05 }, resolutionMPerS: 0.5 }).cutoffMPerS).toBe(q.cutoffMPerS);
   });
 });
 
