@@ -25,7 +25,7 @@ export function adjustedRandIndex(p: ArrayLike<number>, q: ArrayLike<number>): n
   if (q.length !== n) throw new RangeError('adjustedRandIndex: labelings differ in length');
   const cp = canonicalLabels(p), cq = canonicalLabels(q);
   // Noise points become their own groups, numbered past the real ones.
-  let nextP = Math.max(-1, ...cp) + 1, nextQ = Math.max(-1, ...cq) + 1;
+  let nextP = cp.reduce((m, v) => Math.max(m, v), -1) + 1, nextQ = cq.reduce((m, v) => Math.max(m, v), -1) + 1;
   for (let k = 0; k < n; k++) {
     if (cp[k] < 0) cp[k] = nextP++;
     if (cq[k] < 0) cq[k] = nextQ++;
