@@ -16,12 +16,19 @@ export interface Background {
   readonly sinI: Float64Array;
 }
 
+/** A copy of the three columns to draw a background into; `caller` names the misuse. */
+export function copyColumns(caller: string, aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>): Background {
+  if (e.length !== aAu.length || sinI.length !== aAu.length) {
+    throw new RangeError(`${caller}: columns differ in length (a ${aAu.length}, e ${e.length}, sin i ${sinI.length})`);
+  }
+  return { aAu: Float64Array.from(aAu), e: Float64Array.from(e), sinI: Float64Array.from(sinI) };
+}
+
 /** One background from `random`; bins of `binWidthAu` in a. Rows with NaN a keep their values. */
 export function shuffledBackground(aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, binWidthAu: number, random: Random): Background {
+  const out = copyColumns('shuffledBackground', aAu, e, sinI);
   const n = aAu.length;
-  if (e.length !== n || sinI.length !== n) throw new RangeError(`shuffledBackground: columns differ in length (a ${n}, e ${e.length}, sin i ${sinI.length})`);
   if (!(binWidthAu > 0)) throw new RangeError(`shuffledBackground: bin width must be positive au, got ${binWidthAu}`);
-  const out = { aAu: Float64Array.from(aAu), e: Float64Array.from(e), sinI: Float64Array.from(sinI) };
   const bin = new Float64Array(n);
   const ids: number[] = [];
   for (let k = 0; k < n; k++) {

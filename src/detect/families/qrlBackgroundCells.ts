@@ -8,7 +8,7 @@
  * instead. Rows with a NaN element keep their values.
  */
 import type { Random } from '../../core/random.js';
-import type { Background } from './qrlBackground.js';
+import { copyColumns, type Background } from './qrlBackground.js';
 
 /** Box edges of the coarse grid. */
 export interface CoarseCell {
@@ -19,11 +19,9 @@ export interface CoarseCell {
 
 /** One background from `random`: each body uniform in its box of the coarse grid. */
 export function coarseCellBackground(aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, cell: CoarseCell, random: Random): Background {
-  const n = aAu.length;
-  if (e.length !== n || sinI.length !== n) throw new RangeError(`coarseCellBackground: columns differ in length (a ${n}, e ${e.length}, sin i ${sinI.length})`);
+  const out = copyColumns('coarseCellBackground', aAu, e, sinI);
   if (!(cell.aAu > 0 && cell.e > 0 && cell.sinI > 0)) throw new RangeError(`coarseCellBackground: box edges must be positive, got ${cell.aAu}, ${cell.e}, ${cell.sinI}`);
-  const out = { aAu: Float64Array.from(aAu), e: Float64Array.from(e), sinI: Float64Array.from(sinI) };
-  for (let k = 0; k < n; k++) {
+  for (let k = 0; k < aAu.length; k++) {
     if (!(aAu[k] === aAu[k] && e[k] === e[k] && sinI[k] === sinI[k])) continue;
     out.aAu[k] = (Math.floor(aAu[k] / cell.aAu) + random()) * cell.aAu;
     out.e[k] = (Math.floor(e[k] / cell.e) + random()) * cell.e;
