@@ -12,9 +12,9 @@ const FIX = new URL('../fixtures/', import.meta.url);
 // The first 150 numbered asteroids, osculating elements at 2026-06-09 TT
 // (test/fixtures/orbit-export/README.md).
 const SAMPLE = gunzipSync(readFileSync(new URL('orbit-export/orbits-export-sample.txt.gz', FIX))).toString('latin1').split('\n');
-// Nesvorný 2015, PDS "Nesvorny HCM Asteroid Families V3.0" (test/fixtures/families-2015/README.md).
+// Nesvorný 2015, PDS "Nesvorny HCM Asteroid Families V3.0" (bundled as data/families/families-2015.json; provenance in data/families/README.md).
 interface Family { family_name: string; parent_number: number | null; e_center: number; i_center_deg: number }
-const FAMILIES = (JSON.parse(readFileSync(new URL('families-2015/families-2015.json', FIX), 'utf8')) as { families: Family[] }).families;
+const FAMILIES = (JSON.parse(readFileSync(new URL('../../data/families/families-2015.json', import.meta.url), 'utf8')) as { families: Family[] }).families;
 const EPOCH_JD = 2_461_200.5; // 2026-06-09.0 TT
 const model = planetarySecularModel(EPOCH_JD);
 

@@ -1,0 +1,73 @@
+/**
+ * Cutoff velocity from the quasi-random level (QRL; Zappalà et al. 1995, Icarus 116, 291;
+ * used region by region in Nesvorný et al. 2015, Asteroids IV, p. 297): the largest cutoff at
+ * which random backgrounds with the set's own large-scale density (qrlBackground.ts) make no
+ * group of N_min or more members. Above it, groups of that size arise by chance alone.
+ *
+ * For each background the level is found by bisection on the cutoff (the largest linked
+ * group only grows with the cutoff); the QRL is the lowest level over the backgrounds, so no
+ * background forms such a group at or below it. Deterministic for a seed.
+ */
+import { seededRandom } from '../../core/random.js';
+import { linkComponents } from './clusterHcm.js';
+import { toVelocitySpace } from './metricVelocity.js';
+import { shuffledBackground } from './qrlBackground.js';
+import { coarseCellBackground, type CoarseCell } from './qrlBackgroundCells.js';
+
+export interface QrlOptions {
+  readonly minMembers: number;     // N_min of the families the cutoff is for
+  readonly aRefAu: number;         // reference a of the metric (metricVelocity.ts)
+  readonly backgrounds: number;    // random backgrounds drawn
+  readonly seed: number;           // seeds the backgrounds
+  /**
+   * How backgrounds are drawn: e and sin i permuted within a bins of this width
+   * (qrlBackground.ts), or each body uniform in its box of a coarse grid (qrlBackgroundCells.ts).
+   */
+  readonly background: { readonly binWidthAu: number } | { readonly cell: CoarseCell };
+  readonly resolutionMPerS: number; // bisection stops when the bracket is this narrow
+}
+
+export interface QrlResult {
+  readonly cutoffMPerS: number;          // the QRL: no background has a group ≥ N_min at this cutoff
+  readonly perBackgroundMPerS: Float64Array; // each background's level
+}
+
+/** Upper end of the first bracket and the most it may be doubled to (m/s); our choice. */
+const FIRST_HIGH_M_PER_S = 16;
+const HIGHEST_M_PER_S = 16_384;
+
+/** The QRL of the bodies (a, e, sin i). */
+export function quasiRandomLevel(aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, opts: QrlOptions): QrlResult {
+  if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`quasiRandomLevel: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
+  if (!Number.isInteger(opts.backgrounds) || opts.backgrounds < 1) throw new RangeError(`quasiRandomLevel: backgrounds must be a positive integer, got ${opts.backgrounds}`);
+  if (!(opts.resolutionMPerS > 0)) throw new RangeError(`quasiRandomLevel: resolution must be positive m/s, got ${opts.resolutionMPerS}`);
+  const random = seededRandom(opts.seed);
+  const perBackgroundMPerS = new Float64Array(opts.backgrounds);
+  for (let b = 0; b < opts.backgrounds; b++) {
+    const bg = 'cell' in opts.background
+      ? coarseCellBackground(aAu, e, sinI, opts.background.cell, random)
+      : shuffledBackground(aAu, e, sinI, opts.background.binWidthAu, random);
+    const space = toVelocitySpace(bg.aAu, bg.e, bg.sinI, opts.aRefAu);
+    perBackgroundMPerS[b] = groupLevel(space, opts.minMembers, opts.resolutionMPerS);
+  }
+  let cutoffMPerS = Infinity;
+  for (const v of perBackgroundMPerS) if (v < cutoffMPerS) cutoffMPerS = v;
+  return { cutoffMPerS, perBackgroundMPerS };
+}
+
+/** Largest cutoff (to `resolution`) at which the largest linked group is under `minMembers`. */
+export function groupLevel(space: ReturnType<typeof toVelocitySpace>, minMembers: number, resolution: number): number {
+  const formsGroup = (v: number): boolean => linkComponents(space, v).largestGroup >= minMembers;
+  let lo = 0;
+  let hi = FIRST_HIGH_M_PER_S;
+  while (!formsGroup(hi)) {
+    lo = hi;
+    hi *= 2;
+    if (hi > HIGHEST_M_PER_S) throw new RangeError(`quasiRandomLevel: no group of ${minMembers} forms below ${HIGHEST_M_PER_S} m/s (too few bodies?)`);
+  }
+  while (hi - lo > resolution) {
+    const mid = 0.5 * (lo + hi);
+    if (formsGroup(mid)) hi = mid; else lo = mid;
+  }
+  return lo;
+}
