@@ -57,19 +57,20 @@ function cellCount(b: Float64Array, h: number): number {
   return d[0] * d[1] * d[2];
 }
 
-/** Number of distinct cells the points fall in (keys sorted, runs counted). */
+/** Number of distinct cells the points fall in (a mark per cell; the grid has at most maxCells). */
 function occupiedCells(xyz: Float64Array, b: Float64Array, h: number): number {
   const d = gridDims(b, h);
-  const n = xyz.length / 3;
-  const keys = new Float64Array(n);
-  for (let j = 0; j < n; j++) {
-    const ix = Math.min(d[0] - 1, Math.floor((xyz[3 * j] - b[0]) / h));
-    const iy = Math.min(d[1] - 1, Math.floor((xyz[3 * j + 1] - b[1]) / h));
-    const iz = Math.min(d[2] - 1, Math.floor((xyz[3 * j + 2] - b[2]) / h));
-    keys[j] = ix + d[0] * (iy + d[1] * iz); // exact below 2^53
+  const marks = new Uint8Array(d[0] * d[1] * d[2]);
+  let occupied = 0;
+  for (let p = 0; p < xyz.length; p += 3) {
+    const ix = Math.min(d[0] - 1, Math.floor((xyz[p] - b[0]) / h));
+    const iy = Math.min(d[1] - 1, Math.floor((xyz[p + 1] - b[1]) / h));
+    const iz = Math.min(d[2] - 1, Math.floor((xyz[p + 2] - b[2]) / h));
+    const c = ix + d[0] * (iy + d[1] * iz);
+    if (marks[c] === 0) {
+      marks[c] = 1;
+      occupied++;
+    }
   }
-  keys.sort();
-  let runs = n > 0 ? 1 : 0;
-  for (let j = 1; j < n; j++) if (keys[j] !== keys[j - 1]) runs++;
-  return runs;
+  return occupied;
 }
