@@ -82,7 +82,7 @@ function bench(name: string, el: Elements): void {
   const total = Number(process.hrtime.bigint() - t0) / 1e9;
   let raised = 0;
   for (const f of fractions) if (f <= 0.01) raised++;
-  console.log(`  total ${total.toFixed(2)} s wall, ${(total / (options.replicates + 1) / n * 1e6).toFixed(2)} µs a body a scoring pass; FAP ≤ 0.01: ${raised}`);
+  console.log(`  total ${total.toFixed(2)} s wall, ${(total / (options.replicates + 1) / n * 1e6).toFixed(2)} µs a body a scoring pass; null tail fraction ≤ 0.01: ${raised}`);
 }
 
 const rows = readReal(false);

@@ -26,7 +26,7 @@ describe('null tail fractions of isolation scores', () => {
   const calibration = calibrateIsolation(background, n, OPTS, REPLICATES, seededRandom(12));
   const fractions = nullTailFractions(nullScores, calibration);
 
-  it('under the null, FAP ≤ α for a fraction α of bodies, within 3σ binomial (α = 0.01, 0.05)', () => {
+  it('under the null, the null tail fraction is ≤ α for a fraction α of bodies, within 3σ binomial (α = 0.01, 0.05)', () => {
     for (const alpha of [0.01, 0.05]) {
       const r = nullRate(fractions, alpha, calibration.nullScoresSorted.length);
       console.log(`null catalogue of ${n} bodies, ${REPLICATES}×${n} null scores: ${describeRate(r)}`);
@@ -34,7 +34,7 @@ describe('null tail fractions of isolation scores', () => {
     }
   });
 
-  it('with the background re-estimated from the null catalogue itself, FAP ≤ α within 25% of α', () => {
+  it('with the background re-estimated from the null catalogue itself, tail fraction ≤ α for a fraction within 25% of α', () => {
     // The whole stage as it runs on a catalogue: its own background, its own null draws. The
     // re-estimate is smoother than the background the bodies came from, so this is not exact:
     // measured 0.89–0.97% at α = 0.01 and 4.82–4.97% at 0.05 over four seeds (up to 3σ

@@ -44,7 +44,7 @@ describe('isolation outliers on the real main belt', () => {
   const s = Float64Array.from([...real.sinI, ...Array.from({ length: PLANTED }, (_, t) => planted[3 * t + 2] / SCALED_SIN_I_WEIGHT)]);
   const result = properOutliers(a, e, s, seededRandom(99));
 
-  it(`${PLANTED} bodies planted in empty regions get FAP below 0.01`, () => {
+  it(`${PLANTED} bodies planted in empty regions get null tail fractions below 0.01`, () => {
     expect(planted.length / 3).toBeGreaterThanOrEqual(PLANTED);
     let worst = 0;
     for (let t = 0; t < PLANTED; t++) {
@@ -53,7 +53,7 @@ describe('isolation outliers on the real main belt', () => {
       expect(result.nullTailFraction[j], `planted ${t}: a=${a[j].toFixed(4)} e=${e[j].toFixed(4)} sin i=${s[j].toFixed(4)}, nearest ${result.nearestDistanceMps[j].toFixed(0)} m/s`).toBeLessThan(0.01);
     }
     const near = result.nearestDistanceMps.subarray(n);
-    console.log(`planted: FAP ${Array.from(result.nullTailFraction.subarray(n)).sort((x, y) => x - y).map((x) => x.toExponential(1)).join(' ')}; ` +
+    console.log(`planted: null tail fractions ${Array.from(result.nullTailFraction.subarray(n)).sort((x, y) => x - y).map((x) => x.toExponential(1)).join(' ')}; ` +
       `worst ${worst.toExponential(2)} (smallest possible ${(1 / (result.nullScores + 1)).toExponential(2)}); ` +
       `nearest neighbours ${Math.min(...near).toFixed(0)}–${Math.max(...near).toFixed(0)} m/s`);
     // Measured: worst 8.8e-3 (a hole just wide enough), median 4.5e-4.
@@ -72,6 +72,6 @@ describe('isolation outliers on the real main belt', () => {
         expect(result.nullTailFraction[j], `${families[f].name} member ${j}`).toBeGreaterThan(0.01);
       }
     }
-    console.log(`families ${families.map((f) => f.name).join(', ')}: ${k} bodies each, lowest FAP ${lowest.toFixed(3)}`);
+    console.log(`families ${families.map((f) => f.name).join(', ')}: ${k} bodies each, lowest null tail fraction ${lowest.toFixed(3)}`);
   });
 });

@@ -19,8 +19,9 @@
  * beside a region ten times denser, 9.5% of a sparse uniform region came up at α = 0.01.
  * Two other backgrounds were tried and dropped: the 32nd neighbour (a ball 1.6 times wider)
  * handled the step (1.7%) but is too close in scale to tell a family core from its
- * surroundings (bodies at the centre of Eos came up) and cost 4 times as much; the 16th
- * neighbour among every 16th body was noisier and failed both.
+ * surroundings (bodies at the centre of Eos came up) and its neighbour search cost 3.6–7 times
+ * as much; the 16th neighbour among every 16th body was noisier and failed the step, the
+ * planted bodies and the family centres.
  */
 import { cellSizeForOccupancy } from './kNearestCellSize.js';
 import { buildKNearestGrid } from './kNearestGrid.js';

@@ -1,6 +1,6 @@
 /**
  * How often tail fractions fall at or below α, against the binomial uncertainty of that rate.
- * Under a correctly calibrated null, a body has FAP ≤ α with probability α; over N bodies the
+ * Under a correctly calibrated null, a body's null tail fraction is ≤ α with probability α; over N bodies the
  * observed rate has standard deviation √(α(1 − α)/N) (binomial, common practice), and the
  * threshold itself is read from a pooled null sample of size N_null, adding α(1 − α)/N_null to
  * the variance (the sampling variance of an empirical quantile's level, common practice).
