@@ -1,0 +1,120 @@
+/**
+ * k nearest neighbours through a grid (kNearestGrid.ts), never all pairs. The cells around a
+ * query are read in expanding cubic shells (Chebyshev rings of cells); after each shell, a
+ * point not yet read lies outside the cube of cells read, so at least as far from the query as
+ * the nearest face of that cube that has cells beyond it. The search stops once the k-th
+ * distance found is below that bound (or the cube covers the grid): the k found are then
+ * certain. Ties are broken by the lower input index, so the result is one defined set:
+ * the k smallest (distance, index) pairs. Common practice for grid indices.
+ */
+import { axisCell, type KNearestGrid } from './kNearestGrid.js';
+
+/** Distances (ascending) and input indices of each query's k nearest, row-major (query·k + m). */
+export interface KNearestResult {
+  readonly k: number;
+  readonly distance: Float64Array; // Euclidean, in the points' units
+  readonly index: Int32Array; // input index of the neighbour
+}
+
+/** The bound is shrunk by this relative amount against rounding in cell edges (common practice). */
+const BOUND_SHRINK = 1 - 1e-12;
+
+/** Each grid point's k nearest other points. Needs k < number of points. */
+export function kNearestAll(grid: KNearestGrid, k: number): KNearestResult {
+  checkK(k, grid.count - 1);
+  const distance = new Float64Array(grid.count * k);
+  const index = new Int32Array(grid.count * k);
+  const xyz = grid.sortedXyz;
+  for (let p = 0; p < grid.count; p++) {
+    const j = grid.order[p];
+    searchOne(grid, xyz[3 * p], xyz[3 * p + 1], xyz[3 * p + 2], j, k, distance, index, j * k);
+  }
+  return finish(k, distance, index);
+}
+
+/** The k nearest grid points of arbitrary query points (interleaved xyz). Needs k ≤ grid points. */
+export function kNearestOf(grid: KNearestGrid, queryXyz: Float64Array, k: number): KNearestResult {
+  checkK(k, grid.count);
+  const m = Math.floor(queryXyz.length / 3);
+  const distance = new Float64Array(m * k);
+  const index = new Int32Array(m * k);
+  for (let q = 0; q < m; q++) searchOne(grid, queryXyz[3 * q], queryXyz[3 * q + 1], queryXyz[3 * q + 2], -1, k, distance, index, q * k);
+  return finish(k, distance, index);
+}
+
+function checkK(k: number, available: number): void {
+  if (!Number.isInteger(k) || k < 1 || k > available) {
+    throw new RangeError(`k nearest: k must be an integer from 1 to ${available}, got ${k}`);
+  }
+}
+
+/** Squared distances were kept during the search; return distances. */
+function finish(k: number, d2: Float64Array, index: Int32Array): KNearestResult {
+  for (let t = 0; t < d2.length; t++) d2[t] = Math.sqrt(d2[t]);
+  return { k, distance: d2, index };
+}
+
+/** Fills d2[base … base+k) and idx[…] with one query's k nearest (squared distances). */
+function searchOne(
+  g: KNearestGrid, qx: number, qy: number, qz: number, exclude: number, k: number,
+  d2: Float64Array, idx: Int32Array, base: number,
+): void {
+  const h = g.cellSize;
+  const nx = g.dims[0], ny = g.dims[1], nz = g.dims[2];
+  const ox = g.origin[0], oy = g.origin[1], oz = g.origin[2];
+  const cx = axisCell(qx, ox, h, nx), cy = axisCell(qy, oy, h, ny), cz = axisCell(qz, oz, h, nz);
+  let found = 0;
+  for (let r = 0; ; r++) {
+    const x0 = cx - r, x1 = cx + r, y0 = cy - r, y1 = cy + r, z0 = cz - r, z1 = cz + r;
+    for (let z = Math.max(0, z0); z <= Math.min(nz - 1, z1); z++) {
+      for (let y = Math.max(0, y0); y <= Math.min(ny - 1, y1); y++) {
+        const row = nx * (y + ny * z);
+        if (z === z0 || z === z1 || y === y0 || y === y1) {
+          found = readRun(g, row + Math.max(0, x0), row + Math.min(nx - 1, x1), qx, qy, qz, exclude, k, d2, idx, base, found);
+        } else {
+          if (x0 >= 0) found = readRun(g, row + x0, row + x0, qx, qy, qz, exclude, k, d2, idx, base, found);
+          if (x1 < nx) found = readRun(g, row + x1, row + x1, qx, qy, qz, exclude, k, d2, idx, base, found);
+        }
+      }
+    }
+    let bound = Infinity; // distance to the nearest face of the cube with cells beyond it
+    if (x0 > 0) bound = Math.min(bound, qx - (ox + x0 * h));
+    if (x1 < nx - 1) bound = Math.min(bound, ox + (x1 + 1) * h - qx);
+    if (y0 > 0) bound = Math.min(bound, qy - (oy + y0 * h));
+    if (y1 < ny - 1) bound = Math.min(bound, oy + (y1 + 1) * h - qy);
+    if (z0 > 0) bound = Math.min(bound, qz - (oz + z0 * h));
+    if (z1 < nz - 1) bound = Math.min(bound, oz + (z1 + 1) * h - qz);
+    if (bound === Infinity) return; // every cell has been read
+    if (found === k && bound > 0 && d2[base + k - 1] < bound * bound * BOUND_SHRINK) return;
+  }
+}
+
+/** Reads the points of cells cFirst … cLast (inclusive, contiguous in sorted order); returns how many are held. */
+function readRun(
+  g: KNearestGrid, cFirst: number, cLast: number, qx: number, qy: number, qz: number, exclude: number,
+  k: number, d2: Float64Array, idx: Int32Array, base: number, held: number,
+): number {
+  const xyz = g.sortedXyz;
+  const end = g.cellStart[cLast + 1];
+  for (let p = g.cellStart[cFirst]; p < end; p++) {
+    const j = g.order[p];
+    if (j === exclude) continue;
+    const dx = xyz[3 * p] - qx, dy = xyz[3 * p + 1] - qy, dz = xyz[3 * p + 2] - qz;
+    const dd = dx * dx + dy * dy + dz * dz;
+    let m = held;
+    if (m === k) {
+      const w = base + k - 1;
+      if (dd > d2[w] || (dd === d2[w] && j > idx[w])) continue;
+      m = k - 1;
+    } else held++;
+    // insertion: shift larger (distance, index) pairs up one place
+    while (m > 0 && (d2[base + m - 1] > dd || (d2[base + m - 1] === dd && idx[base + m - 1] > j))) {
+      d2[base + m] = d2[base + m - 1];
+      idx[base + m] = idx[base + m - 1];
+      m--;
+    }
+    d2[base + m] = dd;
+    idx[base + m] = j;
+  }
+  return held;
+}

@@ -1,0 +1,86 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { buildKNearestGrid } from '../../src/detect/families/kNearestGrid.js';
+import { cellSizeForOccupancy } from '../../src/detect/families/kNearestCellSize.js';
+import { kNearestAll, kNearestOf } from '../../src/detect/families/kNearest.js';
+import { orbitalSpeedMps, scaledProperCoordinates } from '../../src/detect/families/outlierMetric.js';
+
+/** Brute force over all pairs: the k smallest (squared distance, index) pairs, same arithmetic. */
+function bruteForce(points: Float64Array, qx: number, qy: number, qz: number, exclude: number, k: number) {
+  const pairs: [number, number][] = [];
+  for (let j = 0; j < points.length / 3; j++) {
+    if (j === exclude) continue;
+    const dx = points[3 * j] - qx, dy = points[3 * j + 1] - qy, dz = points[3 * j + 2] - qz;
+    pairs.push([dx * dx + dy * dy + dz * dz, j]);
+  }
+  pairs.sort((p, q) => p[0] - q[0] || p[1] - q[1]);
+  return pairs.slice(0, k).map(([d2, j]) => [Math.sqrt(d2), j]);
+}
+
+// Points on a coarse lattice (many exact ties and duplicates) or anywhere, clumped or spread.
+const coordinate = fc.oneof(fc.integer({ min: 0, max: 6 }).map((v) => v / 4), fc.double({ min: -1, max: 3, noNaN: true }));
+const pointSet = fc.array(fc.tuple(coordinate, coordinate, coordinate), { minLength: 2, maxLength: 120 });
+
+describe('k nearest neighbours through a grid', () => {
+  it('equal brute force exactly, ties by lower index, any cell size (property-based; common practice: brute force is the definition)', () => {
+    fc.assert(
+      fc.property(pointSet, fc.integer({ min: 1, max: 12 }), fc.double({ min: 0.5, max: 20, noNaN: true }), (pts, kWanted, perCell) => {
+        const xyz = Float64Array.from(pts.flat());
+        const n = pts.length;
+        const k = Math.min(kWanted, n - 1);
+        const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, perCell, 4 * n + 64));
+        const got = kNearestAll(grid, k);
+        for (let j = 0; j < n; j++) {
+          const want = bruteForce(xyz, xyz[3 * j], xyz[3 * j + 1], xyz[3 * j + 2], j, k);
+          for (let m = 0; m < k; m++) {
+            if (got.distance[j * k + m] !== want[m][0] || got.index[j * k + m] !== want[m][1]) return false;
+          }
+        }
+        return true;
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('queries away from the points, inside and outside the grid, equal brute force (property-based)', () => {
+    fc.assert(
+      fc.property(pointSet, fc.array(fc.tuple(fc.double({ min: -5, max: 8, noNaN: true }), coordinate, coordinate), { minLength: 1, maxLength: 10 }),
+        fc.integer({ min: 1, max: 5 }), (pts, queries, kWanted) => {
+          const xyz = Float64Array.from(pts.flat());
+          const k = Math.min(kWanted, pts.length);
+          const q = Float64Array.from(queries.flat());
+          const got = kNearestOf(buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, 2, 1000)), q, k);
+          return queries.every((qq, t) => bruteForce(xyz, qq[0], qq[1], qq[2], -1, k)
+            .every(([d, j], m) => got.distance[t * k + m] === d && got.index[t * k + m] === j));
+        }),
+      { numRuns: 200 },
+    );
+  });
+
+  it('rejects a k the points cannot supply', () => {
+    const grid = buildKNearestGrid(Float64Array.of(0, 0, 0, 1, 1, 1), 1);
+    expect(() => kNearestAll(grid, 2)).toThrow(RangeError);
+    expect(() => kNearestAll(grid, 0)).toThrow(RangeError);
+  });
+});
+
+describe('the velocity metric in scaled coordinates', () => {
+  it('n·a at 1 au is the Earth’s mean orbital speed, 29.78 km/s (NASA Earth fact sheet)', () => {
+    expect(orbitalSpeedMps(1)).toBeCloseTo(29_780, -1); // within 5 m/s of the published 29.78 km/s
+  });
+
+  it('n·a·|δz| agrees with d = n·a·√(5/4 (δa/a)² + 2 δe² + 2 δ(sin i)²) for close pairs (Zappalà et al. 1990, AJ 100, 2030)', () => {
+    const a = [2.5, 2.52], e = [0.1, 0.105], s = [0.1, 0.098];
+    const z = scaledProperCoordinates(a, e, s);
+    const dz = Math.hypot(z[3] - z[0], z[4] - z[1], z[5] - z[2]);
+    const aMean = (a[0] + a[1]) / 2;
+    const published = orbitalSpeedMps(aMean) * Math.sqrt(1.25 * ((a[1] - a[0]) / aMean) ** 2 + 2 * (e[1] - e[0]) ** 2 + 2 * (s[1] - s[0]) ** 2);
+    // Measured: 0.4% apart (n·a at the first body, not the pair's mean: |δa|/(2a) = 0.4%); bound 0.5%.
+    expect(Math.abs(orbitalSpeedMps(a[0]) * dz / published - 1)).toBeLessThan(0.005);
+    expect(published).toBeGreaterThan(100); // about 160 m/s: a neighbour distance of the trade's scale
+  });
+
+  it('refuses proper elements with a missing value, naming the body', () => {
+    expect(() => scaledProperCoordinates([2.5, NaN], [0.1, 0.1], [0.1, 0.1])).toThrow('body 1');
+  });
+});
