@@ -3,7 +3,8 @@ import fc from 'fast-check';
 import { buildKNearestGrid } from '../../src/detect/families/kNearestGrid.js';
 import { cellSizeForOccupancy } from '../../src/detect/families/kNearestCellSize.js';
 import { kNearestAll, kNearestOf } from '../../src/detect/families/kNearest.js';
-import { orbitalSpeedMps, scaledProperCoordinates } from '../../src/detect/families/outlierMetric.js';
+import { orbitalSpeedMPerS } from '../../src/detect/families/metricVelocity.js';
+import { scaledProperCoordinates } from '../../src/detect/families/outlierMetric.js';
 
 /** Brute force over all pairs: the k smallest (squared distance, index) pairs, same arithmetic. */
 function bruteForce(points: Float64Array, qx: number, qy: number, qz: number, exclude: number, k: number) {
@@ -66,7 +67,7 @@ describe('k nearest neighbours through a grid', () => {
 
 describe('the velocity metric in scaled coordinates', () => {
   it('n·a at 1 au is the Earth’s mean orbital speed, 29.78 km/s (NASA Earth fact sheet)', () => {
-    expect(orbitalSpeedMps(1)).toBeCloseTo(29_780, -1); // within 5 m/s of the published 29.78 km/s
+    expect(orbitalSpeedMPerS(1)).toBeCloseTo(29_780, -1); // within 5 m/s of the published 29.78 km/s
   });
 
   it('n·a·|δz| agrees with d = n·a·√(5/4 (δa/a)² + 2 δe² + 2 δ(sin i)²) for close pairs (Zappalà et al. 1990, AJ 100, 2030)', () => {
@@ -74,9 +75,9 @@ describe('the velocity metric in scaled coordinates', () => {
     const z = scaledProperCoordinates(a, e, s);
     const dz = Math.hypot(z[3] - z[0], z[4] - z[1], z[5] - z[2]);
     const aMean = (a[0] + a[1]) / 2;
-    const published = orbitalSpeedMps(aMean) * Math.sqrt(1.25 * ((a[1] - a[0]) / aMean) ** 2 + 2 * (e[1] - e[0]) ** 2 + 2 * (s[1] - s[0]) ** 2);
+    const published = orbitalSpeedMPerS(aMean) * Math.sqrt(1.25 * ((a[1] - a[0]) / aMean) ** 2 + 2 * (e[1] - e[0]) ** 2 + 2 * (s[1] - s[0]) ** 2);
     // Measured: 0.4% apart (n·a at the first body, not the pair's mean: |δa|/(2a) = 0.4%); bound 0.5%.
-    expect(Math.abs(orbitalSpeedMps(a[0]) * dz / published - 1)).toBeLessThan(0.005);
+    expect(Math.abs(orbitalSpeedMPerS(a[0]) * dz / published - 1)).toBeLessThan(0.005);
     expect(published).toBeGreaterThan(100); // about 160 m/s: a neighbour distance of the trade's scale
   });
 

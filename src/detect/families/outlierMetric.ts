@@ -11,13 +11,13 @@
  * |δa|/(2a), under 0.4% for neighbours within 0.02 au at 2.5 au). Neighbours are therefore
  * ranked by |δz| and their distances converted to m/s with the body's own n·a.
  */
-import { GM_SUN_NOMINAL_M3_PER_S2, M_PER_AU } from '../../core/constants.js';
+import { METRIC_K_A, METRIC_K_E, METRIC_K_SIN_I } from './metricVelocity.js';
 
-/** Weight of ln a in the scaled coordinates: √k1, k1 = 5/4 (Zappalà et al. 1990). */
-export const SCALED_A_WEIGHT = Math.sqrt(5 / 4);
-/** Weight of e and of sin i: √k2 = √k3 = √2 (Zappalà et al. 1990). */
-export const SCALED_E_WEIGHT = Math.SQRT2;
-export const SCALED_SIN_I_WEIGHT = Math.SQRT2;
+/** Weight of ln a in the scaled coordinates: √k1, k1 = 5/4 (Zappalà et al. 1990; metricVelocity.ts). */
+export const SCALED_A_WEIGHT = Math.sqrt(METRIC_K_A);
+/** Weight of e and of sin i: √k2 = √k3 = √2 (Zappalà et al. 1990; metricVelocity.ts). */
+export const SCALED_E_WEIGHT = Math.sqrt(METRIC_K_E);
+export const SCALED_SIN_I_WEIGHT = Math.sqrt(METRIC_K_SIN_I);
 
 /**
  * Scaled coordinates of proper elements, interleaved [z0, z1, z2] per body (length 3N).
@@ -42,7 +42,3 @@ export function scaledProperCoordinates(aAu: ArrayLike<number>, e: ArrayLike<num
   return out;
 }
 
-/** n·a = √(GM_sun / a) in m/s (Kepler's third law, n² a³ = GM_sun), GM_sun IAU 2015 B3 nominal. */
-export function orbitalSpeedMps(aAu: number): number {
-  return Math.sqrt(GM_SUN_NOMINAL_M3_PER_S2 / (aAu * M_PER_AU));
-}

@@ -9,7 +9,8 @@
  * per body, the nearest labelled neighbour or the distance to a family's members follow.
  */
 import type { Random } from '../../core/random.js';
-import { orbitalSpeedMps, scaledProperCoordinates } from './outlierMetric.js';
+import { orbitalSpeedMPerS } from './metricVelocity.js';
+import { scaledProperCoordinates } from './outlierMetric.js';
 import { buildOutlierBackground } from './outlierBackground.js';
 import { calibrateIsolation, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores, type IsolationOptions, type IsolationScores } from './outlierScore.js';
@@ -66,7 +67,7 @@ export function properOutliers(
   const nearestDistanceMps = new Float64Array(n);
   const kthDistanceMps = new Float64Array(n);
   for (let j = 0; j < n; j++) {
-    const v = orbitalSpeedMps(aAu[j]);
+    const v = orbitalSpeedMPerS(aAu[j]);
     for (let m = 0; m < k; m++) neighbourDistanceMps[j * k + m] = v * scores.neighbours.distance[j * k + m];
     nearestDistanceMps[j] = neighbourDistanceMps[j * k];
     kthDistanceMps[j] = neighbourDistanceMps[j * k + k - 1];
