@@ -13,7 +13,7 @@
  * distribution is assumed for the score: its meaning comes from calibration
  * (outlierCalibration.ts). Exact ties at r_k = 0 give −∞ (the least isolated).
  *
- * Measured limits (test/detect/outlierScore.test.ts and trials): where the density falls
+ * Measured limits (test/detect/families/outlierScore.test.ts and trials): where the density falls
  * smoothly by 20 across a box, 0.43% of the sparsest quarter is raised at α = 0.01 (the k-th
  * distance alone: 16%). At a sharp step the coarse cells straddling it mix the dense side in:
  * beside a region ten times denser, 9.5% of a sparse uniform region came up at α = 0.01.

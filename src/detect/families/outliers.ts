@@ -22,7 +22,7 @@ export interface ProperOutlierOptions extends IsolationOptions {
 
 /**
  * Defaults: 8 null catalogues give 8·N null scores (resolution 1/(8N + 1)). Weight cap 8, chosen
- * by measurement (test/detect/outlierCalibration.test.ts): with cap 2 the smooth peak of a
+ * by measurement (test/detect/families/outlierCalibration.test.ts): with cap 2 the smooth peak of a
  * heavy-tailed density was itself taken for a family and the null fraction at α = 0.01 came out
  * 1.8–2.0% on it; with cap 8, 1.1–1.3%.
  */

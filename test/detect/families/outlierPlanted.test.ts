@@ -2,14 +2,14 @@
 // provenance in its README) are raised; bodies inside dense families (Parker et al. 2008, Table 2,
 // median proper elements, same folder) are not.
 import { describe, expect, it } from 'vitest';
-import { seededRandom } from '../../src/core/random.js';
-import { cellSizeForOccupancy } from '../../src/detect/families/kNearestCellSize.js';
-import { buildKNearestGrid } from '../../src/detect/families/kNearestGrid.js';
-import { kNearestOf } from '../../src/detect/families/kNearest.js';
-import { SCALED_A_WEIGHT, SCALED_E_WEIGHT, SCALED_SIN_I_WEIGHT, scaledProperCoordinates } from '../../src/detect/families/outlierMetric.js';
-import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../src/detect/families/outlierScore.js';
-import { densityAt } from '../../src/detect/families/outlierDensity.js';
-import { properOutliers } from '../../src/detect/families/outliers.js';
+import { seededRandom } from '../../../src/core/random.js';
+import { cellSizeForOccupancy } from '../../../src/detect/families/kNearestCellSize.js';
+import { buildKNearestGrid } from '../../../src/detect/families/kNearestGrid.js';
+import { kNearestOf } from '../../../src/detect/families/kNearest.js';
+import { SCALED_A_WEIGHT, SCALED_E_WEIGHT, SCALED_SIN_I_WEIGHT, scaledProperCoordinates } from '../../../src/detect/families/outlierMetric.js';
+import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../../src/detect/families/outlierScore.js';
+import { densityAt } from '../../../src/detect/families/outlierDensity.js';
+import { properOutliers } from '../../../src/detect/families/outliers.js';
 import { distinctProperElements, sdssFamilies } from './helpers/properElementsFixture.js';
 
 const HOLE_RADIUS = 0.015; // scaled units: about 280 m/s at 2.6 au with no real body inside

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { buildKNearestGrid } from '../../src/detect/families/kNearestGrid.js';
-import { cellSizeForOccupancy } from '../../src/detect/families/kNearestCellSize.js';
-import { kNearestAll, kNearestOf } from '../../src/detect/families/kNearest.js';
-import { orbitalSpeedMPerS } from '../../src/detect/families/metricVelocity.js';
-import { scaledProperCoordinates } from '../../src/detect/families/outlierMetric.js';
+import { buildKNearestGrid } from '../../../src/detect/families/kNearestGrid.js';
+import { cellSizeForOccupancy } from '../../../src/detect/families/kNearestCellSize.js';
+import { kNearestAll, kNearestOf } from '../../../src/detect/families/kNearest.js';
+import { orbitalSpeedMPerS } from '../../../src/detect/families/metricVelocity.js';
+import { scaledProperCoordinates } from '../../../src/detect/families/outlierMetric.js';
 
 /** Brute force over all pairs: the k smallest (squared distance, index) pairs, same arithmetic. */
 function bruteForce(points: Float64Array, qx: number, qy: number, qz: number, exclude: number, k: number) {

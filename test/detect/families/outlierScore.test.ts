@@ -1,9 +1,9 @@
 // The isolation score's background at a coarser scale, on invented catalogues (synthetic tests).
 import { describe, expect, it } from 'vitest';
-import { seededRandom } from '../../src/core/random.js';
-import { coarseDensity, densityAt } from '../../src/detect/families/outlierDensity.js';
-import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS } from '../../src/detect/families/outliers.js';
-import { upperTailFraction } from '../../src/detect/empiricalTail.js';
+import { seededRandom } from '../../../src/core/random.js';
+import { coarseDensity, densityAt } from '../../../src/detect/families/outlierDensity.js';
+import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS } from '../../../src/detect/families/outliers.js';
+import { upperTailFraction } from '../../../src/detect/empiricalTail.js';
 
 describe('coarse background density', () => {
   it('of uniform points is N/V inside the box, within 3 Poisson σ of a cell (common practice)', () => {

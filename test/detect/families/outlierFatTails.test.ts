@@ -1,8 +1,8 @@
 // Fat tails: a synthetic catalogue whose density has heavy (Student-t) tails. A score that
 // assumes a Gaussian background flags far more than α; the calibrated isolation score does not.
 import { describe, expect, it } from 'vitest';
-import { seededRandom, type Random } from '../../src/core/random.js';
-import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS } from '../../src/detect/families/outliers.js';
+import { seededRandom, type Random } from '../../../src/core/random.js';
+import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS } from '../../../src/detect/families/outliers.js';
 import { describeRate, nullRate } from './helpers/nullRate.js';
 
 /** Standard normal deviate by the Box–Muller transform (Box & Muller 1958, Ann. Math. Stat. 29, 610). */

@@ -10,7 +10,7 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { gunzipSync } from 'node:zlib';
 
-const DIR = new URL('../../fixtures/proper-elements-sdss/', import.meta.url);
+const DIR = new URL('../../../fixtures/proper-elements-sdss/', import.meta.url);
 const PROPER_SHA256 = 'd6616ab43527595502b17ebccff222aa77dfac9f0715e98d08ebb298a0173695';
 const FAMILIES_SHA256 = 'b28f868ff0968ac83627902a7078a3fdbd2aad450b9e6d3ec8512d9307ca20e9';
 

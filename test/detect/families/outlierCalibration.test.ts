@@ -2,13 +2,13 @@
 // background built from real proper elements (test/fixtures/proper-elements-sdss/, provenance in
 // its README).
 import { describe, expect, it } from 'vitest';
-import { seededRandom } from '../../src/core/random.js';
-import { countAtLeast } from '../../src/detect/empiricalTail.js';
-import { scaledProperCoordinates } from '../../src/detect/families/outlierMetric.js';
-import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../src/detect/families/outlierScore.js';
-import { buildOutlierBackground, drawFromBackground } from '../../src/detect/families/outlierBackground.js';
-import { calibrateIsolation, nullTailFractions } from '../../src/detect/families/outlierCalibration.js';
-import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../../src/detect/families/outliers.js';
+import { seededRandom } from '../../../src/core/random.js';
+import { countAtLeast } from '../../../src/detect/empiricalTail.js';
+import { scaledProperCoordinates } from '../../../src/detect/families/outlierMetric.js';
+import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../../src/detect/families/outlierScore.js';
+import { buildOutlierBackground, drawFromBackground } from '../../../src/detect/families/outlierBackground.js';
+import { calibrateIsolation, nullTailFractions } from '../../../src/detect/families/outlierCalibration.js';
+import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../../../src/detect/families/outliers.js';
 import { distinctProperElements } from './helpers/properElementsFixture.js';
 import { describeRate, nullRate } from './helpers/nullRate.js';
 

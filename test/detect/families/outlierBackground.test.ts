@@ -1,9 +1,9 @@
 // The smooth background of the null model, on an invented catalogue (synthetic test): a uniform
 // box with one dense clump standing in for a family.
 import { describe, expect, it } from 'vitest';
-import { seededRandom } from '../../src/core/random.js';
-import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../src/detect/families/outlierScore.js';
-import { buildOutlierBackground, drawFromBackground } from '../../src/detect/families/outlierBackground.js';
+import { seededRandom } from '../../../src/core/random.js';
+import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../../src/detect/families/outlierScore.js';
+import { buildOutlierBackground, drawFromBackground } from '../../../src/detect/families/outlierBackground.js';
 
 describe('null background', () => {
   const uniform = 40_000, clump = 4_000;
