@@ -14,6 +14,13 @@
  *    reflection method at a boundary, Silverman 1986, §2.10).
  * Deviates used per body, in order: one to pick, then three per cube trial until one lies in
  * the ball. A body with r_k = 0 (exact ties) is copied unchanged.
+ *
+ * The pick inverts the running sum of the weights: the first body whose running sum exceeds
+ * u·Σw. A guide table (Chen & Asau 1974, AIIE Transactions 6, 163; Devroye 1986, Non-Uniform
+ * Random Variate Generation, §III.2, from memory) holds that first body for each of n equal
+ * slices of [0, Σw), so a pick starts there and steps a body or two instead of a binary search
+ * through all n (cache misses on a million-body catalogue: the draw took twice as long as on a
+ * catalogue of 90 000). It returns exactly the body the search would: the same draws bit for bit.
  */
 import type { Random } from '../../core/random.js';
 import type { IsolationScores } from './outlierScore.js';
@@ -24,6 +31,7 @@ export interface OutlierBackground {
   readonly cumulative: Float64Array; // running sum of the weights
   readonly weightCap: number; // cap in w = min(1, cap·ρ_bg/ρ_k)
   readonly weightedBodies: number; // Σ w over the catalogue
+  readonly guide: Uint32Array; // guide[i]: first body whose running sum exceeds i·Σw/guide.length
 }
 
 /** Background from a catalogue (scaled xyz) and its isolation scores. */
@@ -40,7 +48,21 @@ export function buildOutlierBackground(xyz: Float64Array, scores: IsolationScore
     sum += Math.min(1, weightCap * Math.exp(scores.score[j]));
     cumulative[j] = sum;
   }
-  return { xyz, radius, cumulative, weightCap, weightedBodies: sum };
+  return { xyz, radius, cumulative, weightCap, weightedBodies: sum, guide: guideTable(cumulative) };
+}
+
+/** guide[i] = first position whose running sum exceeds i·total/n, one slice per body (a walk through both arrays). */
+function guideTable(cumulative: Float64Array): Uint32Array {
+  const n = cumulative.length;
+  const guide = new Uint32Array(n);
+  const total = n > 0 ? cumulative[n - 1] : 0;
+  let s = 0;
+  for (let i = 0; i < n; i++) {
+    const u = (i / n) * total;
+    while (s < n - 1 && cumulative[s] <= u) s++;
+    guide[i] = s;
+  }
+  return guide;
 }
 
 /** n bodies drawn independently from the background, scaled xyz interleaved. */
@@ -49,7 +71,7 @@ export function drawFromBackground(bg: OutlierBackground, n: number, random: Ran
   const out = new Float64Array(3 * n);
   const total = bg.cumulative[bg.cumulative.length - 1];
   for (let j = 0; j < n; j++) {
-    const s = firstAbove(bg.cumulative, random() * total);
+    const s = firstAbove(bg.cumulative, bg.guide, random() * total, total);
     const r = bg.radius[s];
     let dx: number, dy: number, dz: number;
     do {
@@ -64,14 +86,16 @@ export function drawFromBackground(bg: OutlierBackground, n: number, random: Ran
   return out;
 }
 
-/** First position whose running sum exceeds u (u in [0, total)). */
-function firstAbove(cumulative: Float64Array, u: number): number {
-  let lo = 0;
-  let hi = cumulative.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi) >>> 1;
-    if (cumulative[mid] > u) hi = mid;
-    else lo = mid + 1;
-  }
-  return lo;
+/**
+ * First position whose running sum exceeds u (u in [0, total]; the last position if none does).
+ * Starts at the guide entry of u's slice and steps back or forward, so rounding in the slice
+ * index cannot change the answer.
+ */
+function firstAbove(cumulative: Float64Array, guide: Uint32Array, u: number, total: number): number {
+  const last = cumulative.length - 1;
+  const slice = Math.floor((u / total) * guide.length);
+  let s = guide[slice >= 0 ? (slice <= last ? slice : last) : 0]; // NaN (all weights 0) → 0
+  while (s > 0 && cumulative[s - 1] > u) s--;
+  while (s < last && cumulative[s] <= u) s++;
+  return s;
 }

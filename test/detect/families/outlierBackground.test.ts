@@ -38,4 +38,26 @@ describe('null background', () => {
     for (let p = 0; p < draws.length; p += 3) lowest = Math.min(lowest, draws[p + 1], draws[p + 2]);
     expect(lowest).toBeGreaterThanOrEqual(0);
   });
+
+  it('picks the body a binary search of the running weight sum picks, for every draw (inversion, common practice)', () => {
+    // Kernels of radius 0, so each draw is the picked body itself; weights from 0 (an exact
+    // tie, score −∞) to 1, in runs, so that guide slices hold many bodies or none.
+    const m = 5_000;
+    const random = seededRandom(24);
+    const at = Float64Array.from({ length: 3 * m }, (_, t) => (t % 3 === 0 ? Math.floor(t / 3) : 0));
+    const score = Float64Array.from({ length: m }, (_, j) => (j % 700 < 300 ? -Infinity : j % 700 < 350 ? -30 + 10 * random() : Math.log(random())));
+    const fake = { score, neighbours: { k: 1, distance: new Float64Array(m), index: new Int32Array(m) } } as unknown as Parameters<typeof buildOutlierBackground>[1];
+    const bg = buildOutlierBackground(at, fake, 8);
+    const draws = drawFromBackground(bg, 50_000, seededRandom(25));
+    const replay = seededRandom(25);
+    const total = bg.cumulative[m - 1];
+    for (let j = 0; j < 50_000; j++) {
+      const u = replay() * total;
+      let lo = 0, hi = m - 1;
+      while (lo < hi) { const mid = (lo + hi) >>> 1; if (bg.cumulative[mid] > u) hi = mid; else lo = mid + 1; }
+      let x: number, y: number, z: number;
+      do { x = 2 * replay() - 1; y = 2 * replay() - 1; z = 2 * replay() - 1; } while (x * x + y * y + z * z > 1);
+      if (draws[3 * j] !== lo) expect(`draw ${j}: body ${draws[3 * j]}`).toBe(`draw ${j}: body ${lo}`);
+    }
+  });
 });
