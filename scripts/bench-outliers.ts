@@ -17,7 +17,7 @@ import { scaledProperCoordinates, SCALED_A_WEIGHT, SCALED_E_WEIGHT, SCALED_SIN_I
 import { isolationScores } from '../src/detect/families/outlierScore.js';
 import { buildOutlierBackground, drawFromBackground } from '../src/detect/families/outlierBackground.js';
 import { calibrateIsolation, nullTailFractions } from '../src/detect/families/outlierCalibration.js';
-import { DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../src/detect/families/outliers.js';
+import { DEFAULT_NULL_SCORED_PER_REPLICATE, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../src/detect/families/outliers.js';
 
 const FILE = new URL('../test/fixtures/proper-elements-sdss/proper-elements-sdss.csv.gz', import.meta.url);
 
@@ -33,9 +33,10 @@ const program = new Command()
   .option('--synthetic <n>', 'bodies in the synthetic catalogue', integerAtLeast(100), 1_500_000)
   .option('--replicates <n>', 'null catalogues', integerAtLeast(1), DEFAULT_PROPER_OUTLIER_OPTIONS.replicates)
   .option('--seed <n>', 'seed of the null draws', integerAtLeast(0), 1)
+  .option('--scored <n>', 'bodies scored in each null catalogue', integerAtLeast(1), DEFAULT_NULL_SCORED_PER_REPLICATE)
   .parse();
-const opts = program.opts<{ synthetic: number; replicates: number; seed: number }>();
-const options = { ...DEFAULT_PROPER_OUTLIER_OPTIONS, replicates: opts.replicates };
+const opts = program.opts<{ synthetic: number; replicates: number; seed: number; scored: number }>();
+const options = { ...DEFAULT_PROPER_OUTLIER_OPTIONS, replicates: opts.replicates, nullScoredPerReplicate: opts.scored };
 
 interface Elements { a: Float64Array; e: Float64Array; s: Float64Array }
 
@@ -77,12 +78,12 @@ function bench(name: string, el: Elements): void {
   const xyz = timed('scaled coordinates', () => scaledProperCoordinates(el.a, el.e, el.s));
   const scores = timed('observed scores', () => isolationScores(xyz, options));
   const bg = timed('background', () => buildOutlierBackground(xyz, scores, options.weightCap));
-  const cal = timed(`null: ${options.replicates} × (draw + score), sort`, () => calibrateIsolation(bg, n, options, options.replicates, seededRandom(opts.seed)));
+  const cal = timed(`null: ${options.replicates} × (draw + score), sort`, () => calibrateIsolation(bg, n, options, options.replicates, seededRandom(opts.seed), options.nullScoredPerReplicate));
   const fractions = timed('tail fractions', () => nullTailFractions(scores.score, cal));
   const total = Number(process.hrtime.bigint() - t0) / 1e9;
   let raised = 0;
   for (const f of fractions) if (f <= 0.01) raised++;
-  console.log(`  total ${total.toFixed(2)} s wall, ${(total / (options.replicates + 1) / n * 1e6).toFixed(2)} µs a body a scoring pass; null tail fraction ≤ 0.01: ${raised}`);
+  console.log(`  total ${total.toFixed(2)} s wall; ${cal.nullScoresSorted.length} null scores (${cal.scoredPerReplicate} a catalogue); null tail fraction ≤ 0.01: ${raised} (${(100 * raised / n).toFixed(2)}%)`);
 }
 
 const rows = readReal(false);

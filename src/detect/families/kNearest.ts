@@ -32,6 +32,22 @@ export function kNearestAll(grid: KNearestGrid, k: number): KNearestResult {
   return finish(k, distance, index);
 }
 
+/**
+ * The k nearest other points of the first m points of the grid's input (interleaved xyz, the
+ * array the grid was built from): the same rows kNearestAll gives those points, bit for bit,
+ * at the cost of m searches instead of all.
+ */
+export function kNearestOfFirst(grid: KNearestGrid, inputXyz: Float64Array, m: number, k: number): KNearestResult {
+  checkK(k, grid.count - 1);
+  if (!Number.isInteger(m) || m < 0 || m > grid.count || inputXyz.length !== 3 * grid.count) {
+    throw new RangeError(`kNearestOfFirst: m must be a whole number up to ${grid.count} with the grid's ${grid.count} input points, got m = ${m} and ${inputXyz.length / 3} points`);
+  }
+  const distance = new Float64Array(m * k);
+  const index = new Int32Array(m * k);
+  for (let j = 0; j < m; j++) searchOne(grid, inputXyz[3 * j], inputXyz[3 * j + 1], inputXyz[3 * j + 2], j, k, distance, index, j * k);
+  return finish(k, distance, index);
+}
+
 /** The k nearest grid points of arbitrary query points (interleaved xyz). Needs k ≤ grid points. */
 export function kNearestOf(grid: KNearestGrid, queryXyz: Float64Array, k: number): KNearestResult {
   checkK(k, grid.count);

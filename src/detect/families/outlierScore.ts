@@ -25,7 +25,7 @@
  */
 import { cellSizeForOccupancy } from './kNearestCellSize.js';
 import { buildKNearestGrid } from './kNearestGrid.js';
-import { kNearestAll, type KNearestResult } from './kNearest.js';
+import { kNearestAll, kNearestOfFirst, type KNearestResult } from './kNearest.js';
 import { coarseDensity, densityAt, type CoarseDensity } from './outlierDensity.js';
 
 export interface IsolationOptions {
@@ -47,18 +47,41 @@ export interface IsolationScores {
 /** Scores a catalogue of scaled coordinates (interleaved xyz). Needs more than k bodies. */
 export function isolationScores(xyz: Float64Array, opts: IsolationOptions): IsolationScores {
   const n = xyz.length / 3;
-  const maxCells = 4 * n + 64;
-  const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, opts.gridPerCell, maxCells));
+  const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, opts.gridPerCell, maxCellsFor(n)));
   const neighbours = kNearestAll(grid, opts.k);
-  const background = coarseDensity(xyz, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCells));
+  const background = coarseDensity(xyz, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCellsFor(n)));
   const backgroundDensity = new Float64Array(n);
-  const score = new Float64Array(n);
-  const k = opts.k;
-  for (let j = 0; j < n; j++) {
+  const score = scoresFrom(xyz, n, neighbours, background, backgroundDensity);
+  return { score, neighbours, backgroundDensity, background };
+}
+
+/**
+ * The scores of the first m bodies only, each against the whole catalogue (its k nearest
+ * among all n, the background from all n): the first m entries isolationScores would give,
+ * bit for bit. For null catalogues of independent draws, whose first m bodies are a random
+ * sample of them.
+ */
+export function isolationScoresOfFirst(xyz: Float64Array, opts: IsolationOptions, m: number): Float64Array {
+  const n = xyz.length / 3;
+  const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, opts.gridPerCell, maxCellsFor(n)));
+  const neighbours = kNearestOfFirst(grid, xyz, m, opts.k);
+  const background = coarseDensity(xyz, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCellsFor(n)));
+  return scoresFrom(xyz, m, neighbours, background, new Float64Array(m));
+}
+
+function maxCellsFor(n: number): number {
+  return 4 * n + 64;
+}
+
+/** Scores of bodies 0 … m−1 from their neighbours' rows; fills backgroundDensity (length m). */
+function scoresFrom(xyz: Float64Array, m: number, neighbours: KNearestResult, background: CoarseDensity, backgroundDensity: Float64Array): Float64Array {
+  const score = new Float64Array(m);
+  const k = neighbours.k;
+  for (let j = 0; j < m; j++) {
     const rho = densityAt(background, xyz[3 * j], xyz[3 * j + 1], xyz[3 * j + 2]);
     const rk = neighbours.distance[j * k + k - 1];
     backgroundDensity[j] = rho;
     score[j] = Math.log((rho * (4 * Math.PI / 3) * rk * rk * rk) / k);
   }
-  return { score, neighbours, backgroundDensity, background };
+  return score;
 }

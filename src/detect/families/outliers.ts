@@ -18,7 +18,16 @@ import { DEFAULT_ISOLATION_OPTIONS, isolationScores, type IsolationOptions, type
 export interface ProperOutlierOptions extends IsolationOptions {
   replicates: number; // synthetic null catalogues
   weightCap: number; // family down-weighting: w = min(1, cap·ρ_bg/ρ_k)
+  nullScoredPerReplicate?: number; // bodies scored in each null catalogue (its first ones); default below
 }
+
+/**
+ * Null scores taken from each null catalogue: with 8 catalogues, at most 400 000 null scores,
+ * a resolution of 1/(8·min(N, 50 000) + 1) — 2.5·10⁻⁶ for a large catalogue, 6.2·10⁻⁶ for
+ * 20 000 bodies — far below the smallest threshold offered (0.01), with about 4 000 null scores
+ * above the 0.01 point. Scoring every body of 8 catalogues of 1.5 million took 71 s.
+ */
+export const DEFAULT_NULL_SCORED_PER_REPLICATE = 50_000;
 
 /**
  * Defaults: 8 null catalogues give 8·N null scores (resolution 1/(8N + 1)). Weight cap 8, chosen
@@ -51,7 +60,8 @@ export function calibratedIsolation(xyz: Float64Array, random: Random, options: 
   if (!Number.isInteger(k) || k < 1 || k >= n) throw new RangeError(`calibratedIsolation: k must be an integer from 1 to ${n - 1}, got ${k}`);
   const scores = isolationScores(xyz, options);
   const background = buildOutlierBackground(xyz, scores, options.weightCap);
-  const calibration = calibrateIsolation(background, n, options, options.replicates, random);
+  const scored = options.nullScoredPerReplicate ?? DEFAULT_NULL_SCORED_PER_REPLICATE;
+  const calibration = calibrateIsolation(background, n, options, options.replicates, random, scored);
   return { scores, calibration, nullTailFraction: nullTailFractions(scores.score, calibration) };
 }
 

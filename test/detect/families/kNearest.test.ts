@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { buildKNearestGrid } from '../../../src/detect/families/kNearestGrid.js';
 import { cellSizeForOccupancy } from '../../../src/detect/families/kNearestCellSize.js';
-import { kNearestAll, kNearestOf } from '../../../src/detect/families/kNearest.js';
+import { kNearestAll, kNearestOf, kNearestOfFirst } from '../../../src/detect/families/kNearest.js';
 import { orbitalSpeedMPerS } from '../../../src/detect/families/metricVelocity.js';
 import { scaledProperCoordinates } from '../../../src/detect/families/outlierMetric.js';
 
@@ -56,6 +56,27 @@ describe('k nearest neighbours through a grid', () => {
         }),
       { numRuns: 200 },
     );
+  });
+
+  it('of the first m points only, equal brute force for those points (property-based)', () => {
+    fc.assert(
+      fc.property(pointSet, fc.integer({ min: 1, max: 12 }), fc.integer({ min: 0, max: 120 }), (pts, kWanted, mWanted) => {
+        const xyz = Float64Array.from(pts.flat());
+        const n = pts.length;
+        const k = Math.min(kWanted, n - 1), m = Math.min(mWanted, n);
+        const got = kNearestOfFirst(buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, 2, 4 * n + 64)), xyz, m, k);
+        if (got.distance.length !== m * k) return false;
+        for (let j = 0; j < m; j++) {
+          const want = bruteForce(xyz, xyz[3 * j], xyz[3 * j + 1], xyz[3 * j + 2], j, k);
+          for (let t = 0; t < k; t++) if (got.distance[j * k + t] !== want[t][0] || got.index[j * k + t] !== want[t][1]) return false;
+        }
+        return true;
+      }),
+      { numRuns: 200 },
+    );
+    const grid = buildKNearestGrid(Float64Array.of(0, 0, 0, 1, 1, 1, 2, 2, 2), 1);
+    expect(() => kNearestOfFirst(grid, Float64Array.of(0, 0, 0, 1, 1, 1, 2, 2, 2), 4, 1)).toThrow(RangeError);
+    expect(() => kNearestOfFirst(grid, Float64Array.of(0, 0, 0), 1, 1)).toThrow(RangeError);
   });
 
   it('rejects a k the points cannot supply', () => {

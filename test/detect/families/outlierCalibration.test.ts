@@ -47,6 +47,27 @@ describe('null tail fractions of isolation scores', () => {
     }
   });
 
+  it('with only the first 20 000 bodies of each null catalogue scored: those scores exactly, and the null rate within 3σ', () => {
+    const scored = 20_000;
+    const sub = calibrateIsolation(background, n, OPTS, REPLICATES, seededRandom(12), scored);
+    expect(sub.scoredPerReplicate).toBe(scored);
+    expect(sub.nullScoresSorted.length).toBe(REPLICATES * scored);
+    expect(sub.nullModel).toContain(`the first ${scored} bodies of each`);
+    // The same catalogues drawn again, scored in full, their first 20 000 scores kept.
+    const replay = seededRandom(12);
+    const want = new Float64Array(REPLICATES * scored);
+    for (let r = 0; r < REPLICATES; r++) want.set(isolationScores(drawFromBackground(background, n, replay), OPTS).score.subarray(0, scored), r * scored);
+    want.sort();
+    expect(Buffer.from(sub.nullScoresSorted.buffer).equals(Buffer.from(want.buffer))).toBe(true);
+    for (const alpha of [0.01, 0.05]) {
+      const r = nullRate(nullTailFractions(nullScores, sub), alpha, sub.nullScoresSorted.length);
+      console.log(`null catalogue of ${n} bodies, ${REPLICATES}×${scored} null scores: ${describeRate(r)}`);
+      expect(r.within).toBe(true);
+    }
+    expect(calibrateIsolation(background, 1000, OPTS, 1, seededRandom(12), 5000).scoredPerReplicate).toBe(1000);
+    expect(() => calibrateIsolation(background, n, OPTS, 1, seededRandom(12), 0)).toThrow(RangeError);
+  });
+
   it('the same check rejects a calibration broken on purpose', () => {
     // A wrong rank convention: the count over the pooled null divided by the catalogue size
     // instead of the pool's size (here 4 times too large a fraction).
@@ -73,5 +94,8 @@ describe('null tail fractions of isolation scores', () => {
     expect(again.nullModel).toBe(first.nullModel);
     expect(bytes(other.nullTailFraction).equals(bytes(first.nullTailFraction))).toBe(false);
     expect(first.nullScores).toBe(DEFAULT_PROPER_OUTLIER_OPTIONS.replicates * subset);
+    // A catalogue larger than the default bodies scored per null catalogue: that many from each.
+    const few = properOutliers(a, e, s, seededRandom(7), { ...DEFAULT_PROPER_OUTLIER_OPTIONS, nullScoredPerReplicate: 3_000 });
+    expect(few.nullScores).toBe(DEFAULT_PROPER_OUTLIER_OPTIONS.replicates * 3_000);
   });
 });

@@ -4,6 +4,7 @@ import { seededRandom } from '../../../src/core/random.js';
 import { coarseDensity, densityAt } from '../../../src/detect/families/outlierDensity.js';
 import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS } from '../../../src/detect/families/outliers.js';
 import { upperTailFraction } from '../../../src/detect/empiricalTail.js';
+import { DEFAULT_ISOLATION_OPTIONS, isolationScores, isolationScoresOfFirst } from '../../../src/detect/families/outlierScore.js';
 
 describe('coarse background density', () => {
   it('of uniform points is N/V inside the box, within 3 Poisson σ of a cell (common practice)', () => {
@@ -46,5 +47,23 @@ describe('isolation score', () => {
     // Bound 2α: the sparse end is also the edge of the box, where every ball is cut.
     expect(raised / sparse).toBeLessThan(0.02);
     expect(rawRaised / sparse).toBeGreaterThan(0.02);
+  });
+
+  it('of the first m bodies alone are those of a full scoring, bit for bit', () => {
+    // Invented catalogue: a uniform box with a dense clump, some exact duplicates.
+    const random = seededRandom(31);
+    const n = 30_000;
+    const xyz = new Float64Array(3 * n);
+    for (let j = 0; j < n; j++) {
+      const clump = j % 5 === 0;
+      for (let c = 0; c < 3; c++) xyz[3 * j + c] = clump ? 0.5 + 0.01 * random() : random();
+    }
+    xyz.copyWithin(3 * 100, 3 * 7000, 3 * 7050); // bodies 100–149 repeat 7000–7049
+    const full = isolationScores(xyz, DEFAULT_ISOLATION_OPTIONS).score;
+    for (const m of [0, 1, 5_000, n]) {
+      const first = isolationScoresOfFirst(xyz, DEFAULT_ISOLATION_OPTIONS, m);
+      expect(first.length).toBe(m);
+      expect(Buffer.from(first.buffer).equals(Buffer.from(full.buffer, 0, 8 * m))).toBe(true);
+    }
   });
 });
