@@ -79,17 +79,32 @@ function searchOne(
   const nx = g.dims[0], ny = g.dims[1], nz = g.dims[2];
   const ox = g.origin[0], oy = g.origin[1], oz = g.origin[2];
   const cx = axisCell(qx, ox, h, nx), cy = axisCell(qy, oy, h, ny), cz = axisCell(qz, oz, h, nz);
+  // Once k are held, a row of cells (or a cell) whose box lies farther than the k-th distance
+  // is skipped: its points cannot enter. Box edges are moved out by `slack` against rounding
+  // in the cell of a point (common practice; skipping fewer cells only costs time).
+  const slack = 1e-9 * (Math.abs(ox) + Math.abs(oy) + Math.abs(oz) + (nx + ny + nz) * h);
   let found = 0;
   for (let r = 0; ; r++) {
     const x0 = cx - r, x1 = cx + r, y0 = cy - r, y1 = cy + r, z0 = cz - r, z1 = cz + r;
     for (let z = Math.max(0, z0); z <= Math.min(nz - 1, z1); z++) {
+      const gz = gapTo(qz, oz + z * h, oz + (z + 1) * h, slack);
       for (let y = Math.max(0, y0); y <= Math.min(ny - 1, y1); y++) {
         const row = nx * (y + ny * z);
+        let xa = Math.max(0, x0), xb = Math.min(nx - 1, x1);
+        if (found === k) {
+          const gy = gapTo(qy, oy + y * h, oy + (y + 1) * h, slack);
+          const left = d2[base + k - 1] - gy * gy - gz * gz; // k-th squared distance less the row's gap in y and z
+          if (left < 0) continue;
+          const w = Math.sqrt(left) + slack;
+          xa = Math.max(xa, Math.floor((qx - w - ox) / h));
+          xb = Math.min(xb, Math.floor((qx + w - ox) / h));
+          if (xa > xb) continue;
+        }
         if (z === z0 || z === z1 || y === y0 || y === y1) {
-          found = readRun(g, row + Math.max(0, x0), row + Math.min(nx - 1, x1), qx, qy, qz, exclude, k, d2, idx, base, found);
+          found = readRun(g, row + xa, row + xb, qx, qy, qz, exclude, k, d2, idx, base, found);
         } else {
-          if (x0 >= 0) found = readRun(g, row + x0, row + x0, qx, qy, qz, exclude, k, d2, idx, base, found);
-          if (x1 < nx) found = readRun(g, row + x1, row + x1, qx, qy, qz, exclude, k, d2, idx, base, found);
+          if (x0 >= 0 && x0 >= xa && x0 <= xb) found = readRun(g, row + x0, row + x0, qx, qy, qz, exclude, k, d2, idx, base, found);
+          if (x1 < nx && x1 >= xa && x1 <= xb) found = readRun(g, row + x1, row + x1, qx, qy, qz, exclude, k, d2, idx, base, found);
         }
       }
     }
@@ -103,6 +118,12 @@ function searchOne(
     if (bound === Infinity) return; // every cell has been read
     if (found === k && bound > 0 && d2[base + k - 1] < bound * bound * BOUND_SHRINK) return;
   }
+}
+
+/** Distance from v to the interval [lo, hi] less slack, 0 inside or within slack of it. */
+function gapTo(v: number, lo: number, hi: number, slack: number): number {
+  const gap = v < lo ? lo - v : v > hi ? v - hi : 0;
+  return gap > slack ? gap - slack : 0;
 }
 
 /** Reads the points of cells cFirst … cLast (inclusive, contiguous in sorted order); returns how many are held. */
