@@ -16,8 +16,8 @@ import { seededRandom } from '../src/core/random.js';
 import { scaledProperCoordinates, SCALED_A_WEIGHT, SCALED_E_WEIGHT, SCALED_SIN_I_WEIGHT } from '../src/detect/families/outlierMetric.js';
 import { isolationScores } from '../src/detect/families/outlierScore.js';
 import { buildOutlierBackground, drawFromBackground } from '../src/detect/families/outlierBackground.js';
-import { calibrateIsolation, nullTailFractions } from '../src/detect/families/outlierCalibration.js';
-import { DEFAULT_NULL_SCORED_PER_REPLICATE, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../src/detect/families/outliers.js';
+import { calibrateIsolation, nullCataloguePlan, nullTailFractions } from '../src/detect/families/outlierCalibration.js';
+import { DEFAULT_NULL_SCORES_WANTED, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../src/detect/families/outliers.js';
 
 const FILE = new URL('../test/fixtures/proper-elements-sdss/proper-elements-sdss.csv.gz', import.meta.url);
 
@@ -33,10 +33,10 @@ const program = new Command()
   .option('--synthetic <n>', 'bodies in the synthetic catalogue', integerAtLeast(100), 1_500_000)
   .option('--replicates <n>', 'null catalogues', integerAtLeast(1), DEFAULT_PROPER_OUTLIER_OPTIONS.replicates)
   .option('--seed <n>', 'seed of the null draws', integerAtLeast(0), 1)
-  .option('--scored <n>', 'bodies scored in each null catalogue', integerAtLeast(1), DEFAULT_NULL_SCORED_PER_REPLICATE)
+  .option('--null-scores <n>', 'null scores wanted', integerAtLeast(1), DEFAULT_NULL_SCORES_WANTED)
   .parse();
-const opts = program.opts<{ synthetic: number; replicates: number; seed: number; scored: number }>();
-const options = { ...DEFAULT_PROPER_OUTLIER_OPTIONS, replicates: opts.replicates, nullScoredPerReplicate: opts.scored };
+const opts = program.opts<{ synthetic: number; replicates: number; seed: number; nullScores: number }>();
+const options = { ...DEFAULT_PROPER_OUTLIER_OPTIONS, replicates: opts.replicates, nullScoresWanted: opts.nullScores };
 
 interface Elements { a: Float64Array; e: Float64Array; s: Float64Array }
 
@@ -73,12 +73,13 @@ function timed<T>(label: string, fn: () => T): T {
 
 function bench(name: string, el: Elements): void {
   const n = el.a.length;
-  console.log(`${name}: ${n.toLocaleString('en-US')} bodies, k = ${options.k}, ${options.replicates} null catalogues (load average ${loadavg()[0].toFixed(1)})`);
+  const plan = nullCataloguePlan(n, options.replicates, options.nullScoresWanted);
+  console.log(`${name}: ${n.toLocaleString('en-US')} bodies, k = ${options.k}, ${plan.replicates} null catalogues of which ${plan.scoredPerReplicate} scored (load average ${loadavg()[0].toFixed(1)})`);
   const t0 = process.hrtime.bigint();
   const xyz = timed('scaled coordinates', () => scaledProperCoordinates(el.a, el.e, el.s));
   const scores = timed('observed scores', () => isolationScores(xyz, options));
   const bg = timed('background', () => buildOutlierBackground(xyz, scores, options.weightCap));
-  const cal = timed(`null: ${options.replicates} × (draw + score), sort`, () => calibrateIsolation(bg, n, options, options.replicates, seededRandom(opts.seed), options.nullScoredPerReplicate));
+  const cal = timed(`null: ${plan.replicates} × (draw + score), sort`, () => calibrateIsolation(bg, n, options, plan.replicates, seededRandom(opts.seed), plan.scoredPerReplicate));
   const fractions = timed('tail fractions', () => nullTailFractions(scores.score, cal));
   const total = Number(process.hrtime.bigint() - t0) / 1e9;
   let raised = 0;

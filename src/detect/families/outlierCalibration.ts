@@ -46,6 +46,23 @@ export function calibrateIsolation(
   };
 }
 
+/** Fewest null catalogues a plan uses (when `maxReplicates` allows): not every null score from one draw (common practice). */
+export const MIN_NULL_CATALOGUES = 2;
+
+/**
+ * How many null catalogues of `catalogueSize` bodies to draw, and how many of each to score,
+ * for about `nullScoresWanted` null scores: as few catalogues as give them (at least
+ * MIN_NULL_CATALOGUES, at most maxReplicates), the scores spread evenly over them. Each
+ * catalogue costs a draw and a grid of all its bodies, so a large catalogue needs few.
+ */
+export function nullCataloguePlan(catalogueSize: number, maxReplicates: number, nullScoresWanted: number): { replicates: number; scoredPerReplicate: number } {
+  for (const [name, v] of [['catalogue size', catalogueSize], ['replicates', maxReplicates], ['null scores wanted', nullScoresWanted]] as const) {
+    if (!Number.isInteger(v) || v < 1) throw new RangeError(`nullCataloguePlan: ${name} must be a positive integer, got ${v}`);
+  }
+  const replicates = Math.min(maxReplicates, Math.max(MIN_NULL_CATALOGUES, Math.ceil(nullScoresWanted / catalogueSize)));
+  return { replicates, scoredPerReplicate: Math.min(catalogueSize, Math.ceil(nullScoresWanted / replicates)) };
+}
+
 /** Null tail fraction of each score: (1 + #{null ≥ s}) / (n + 1). */
 export function nullTailFractions(scores: Float64Array, cal: OutlierCalibration): Float64Array {
   const out = new Float64Array(scores.length);

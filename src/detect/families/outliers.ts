@@ -12,25 +12,26 @@ import type { Random } from '../../core/random.js';
 import { orbitalSpeedMPerS } from './metricVelocity.js';
 import { scaledProperCoordinates } from './outlierMetric.js';
 import { buildOutlierBackground } from './outlierBackground.js';
-import { calibrateIsolation, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
+import { calibrateIsolation, nullCataloguePlan, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores, type IsolationOptions, type IsolationScores } from './outlierScore.js';
 
 export interface ProperOutlierOptions extends IsolationOptions {
-  replicates: number; // synthetic null catalogues
+  replicates: number; // at most this many synthetic null catalogues (outlierCalibration.ts nullCataloguePlan)
   weightCap: number; // family down-weighting: w = min(1, cap·ρ_bg/ρ_k)
-  nullScoredPerReplicate?: number; // bodies scored in each null catalogue (its first ones); default below
+  nullScoresWanted?: number; // null scores to pool, about; default below
 }
 
 /**
- * Null scores taken from each null catalogue: with 8 catalogues, at most 400 000 null scores,
- * a resolution of 1/(8·min(N, 50 000) + 1) — 2.5·10⁻⁶ for a large catalogue, 6.2·10⁻⁶ for
- * 20 000 bodies — far below the smallest threshold offered (0.01), with about 4 000 null scores
- * above the 0.01 point. Scoring every body of 8 catalogues of 1.5 million took 71 s.
+ * Null scores pooled by default: 400 000 (fewer only when replicates·N is smaller), a
+ * resolution of 1/400 001 = 2.5·10⁻⁶ — far below the smallest threshold offered (0.01), with
+ * about 4 000 null scores above the 0.01 point. From 1.5 million bodies: 2 catalogues, 200 000
+ * scored in each; from 89 622: 5 catalogues, 80 000 in each; from 20 000: 8 catalogues in full
+ * (160 000). Scoring every body of 8 catalogues of 1.5 million took 71 s.
  */
-export const DEFAULT_NULL_SCORED_PER_REPLICATE = 50_000;
+export const DEFAULT_NULL_SCORES_WANTED = 400_000;
 
 /**
- * Defaults: 8 null catalogues give 8·N null scores (resolution 1/(8N + 1)). Weight cap 8, chosen
+ * Defaults: at most 8 null catalogues, about 400 000 null scores (DEFAULT_NULL_SCORES_WANTED). Weight cap 8, chosen
  * by measurement (test/detect/families/outlierCalibration.test.ts): with cap 2 the smooth peak of a
  * heavy-tailed density was itself taken for a family and the null fraction at α = 0.01 came out
  * 1.8–2.0% on it; with cap 8, 1.1–1.3%.
@@ -60,8 +61,8 @@ export function calibratedIsolation(xyz: Float64Array, random: Random, options: 
   if (!Number.isInteger(k) || k < 1 || k >= n) throw new RangeError(`calibratedIsolation: k must be an integer from 1 to ${n - 1}, got ${k}`);
   const scores = isolationScores(xyz, options);
   const background = buildOutlierBackground(xyz, scores, options.weightCap);
-  const scored = options.nullScoredPerReplicate ?? DEFAULT_NULL_SCORED_PER_REPLICATE;
-  const calibration = calibrateIsolation(background, n, options, options.replicates, random, scored);
+  const plan = nullCataloguePlan(n, options.replicates, options.nullScoresWanted ?? DEFAULT_NULL_SCORES_WANTED);
+  const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate);
   return { scores, calibration, nullTailFraction: nullTailFractions(scores.score, calibration) };
 }
 

@@ -7,7 +7,7 @@ import { countAtLeast } from '../../../src/detect/empiricalTail.js';
 import { scaledProperCoordinates } from '../../../src/detect/families/outlierMetric.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../../src/detect/families/outlierScore.js';
 import { buildOutlierBackground, drawFromBackground } from '../../../src/detect/families/outlierBackground.js';
-import { calibrateIsolation, nullTailFractions } from '../../../src/detect/families/outlierCalibration.js';
+import { calibrateIsolation, nullCataloguePlan, nullTailFractions } from '../../../src/detect/families/outlierCalibration.js';
 import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../../../src/detect/families/outliers.js';
 import { distinctProperElements } from './helpers/properElementsFixture.js';
 import { describeRate, nullRate } from './helpers/nullRate.js';
@@ -95,7 +95,16 @@ describe('null tail fractions of isolation scores', () => {
     expect(bytes(other.nullTailFraction).equals(bytes(first.nullTailFraction))).toBe(false);
     expect(first.nullScores).toBe(DEFAULT_PROPER_OUTLIER_OPTIONS.replicates * subset);
     // A catalogue larger than the default bodies scored per null catalogue: that many from each.
-    const few = properOutliers(a, e, s, seededRandom(7), { ...DEFAULT_PROPER_OUTLIER_OPTIONS, nullScoredPerReplicate: 3_000 });
-    expect(few.nullScores).toBe(DEFAULT_PROPER_OUTLIER_OPTIONS.replicates * 3_000);
+    const few = properOutliers(a, e, s, seededRandom(7), { ...DEFAULT_PROPER_OUTLIER_OPTIONS, nullScoresWanted: 6_000 });
+    expect(few.nullScores).toBe(6_000); // 2 catalogues, 3 000 scored in each
+    expect(few.nullModel).toContain('2 such catalogues, the first 3000 bodies of each scored');
+  });
+
+  it('plans as few null catalogues as give the null scores wanted, at least 2, at most the replicates', () => {
+    expect(nullCataloguePlan(1_500_000, 8, 400_000)).toEqual({ replicates: 2, scoredPerReplicate: 200_000 });
+    expect(nullCataloguePlan(89_622, 8, 400_000)).toEqual({ replicates: 5, scoredPerReplicate: 80_000 });
+    expect(nullCataloguePlan(20_000, 8, 400_000)).toEqual({ replicates: 8, scoredPerReplicate: 20_000 });
+    expect(nullCataloguePlan(1_500_000, 1, 400_000)).toEqual({ replicates: 1, scoredPerReplicate: 400_000 });
+    expect(() => nullCataloguePlan(100, 0, 400_000)).toThrow(RangeError);
   });
 });
