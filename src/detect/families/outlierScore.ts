@@ -36,9 +36,10 @@ export interface IsolationOptions {
 
 /**
  * Defaults (common practice for k-nearest density scores: k of order 10; grids chosen from
- * measured cost: with cells skipped beyond the k-th distance (kNearest.ts), 4 bodies a cell took
- * 4.1–4.9 s for the k nearest of 1.5 million bodies, 2 a cell 6.1–6.4 s, 8 a cell 5.1–5.6 s, on a
- * loaded machine; the neighbours found do not depend on it).
+ * measured cost, the neighbours found do not depend on them). The k nearest of 1.5 million
+ * bodies with cells skipped beyond the k-th distance (kNearest.ts): 4 bodies a cell 3.4–3.7 s,
+ * 2 a cell 3.5 s (without the skipping 3.9–4.0 s) at load average 1.8; on a loaded machine
+ * (load average 5–7) 4 a cell 4.1–4.9 s, 2 a cell 6.1–6.4 s, 8 a cell 5.1–5.6 s.
  */
 export const DEFAULT_ISOLATION_OPTIONS: Readonly<IsolationOptions> = { k: 8, gridPerCell: 4, backgroundPerCell: 200 };
 
