@@ -7,7 +7,6 @@
  * a --families list), families.json (all of it with the run's accounting) and report.md.
  */
 import { Command } from 'commander';
-import { relative } from 'node:path';
 import { analyseFamilies, type FamiliesAnalysis } from '../detect/families.js';
 import { FAMILIES_DEFAULTS, type FamiliesOptions } from '../detect/familiesOptions.js';
 import { FAMILIES_NOT_SCREENED } from '../detect/familiesScreen.js';
@@ -24,11 +23,9 @@ import { SCREENING_CAVEAT } from '../report/reportMarkdown.js';
 import { sortRejectsInPlace, writeRejectsCsv } from '../report/rejectsFile.js';
 import { markdownTable, textTable } from '../report/textTable.js';
 import { membershipRejectLines, readFamiliesInputs } from './familiesInputs.js';
-import { inputErrorLine } from './inputErrorLine.js';
-import { loadCatalogue } from './loadCatalogue.js';
+import { commandFiles, loadCommandCatalogue } from './commandCatalogue.js';
 import { withDefault } from './optionDefault.js';
 import { parseMinMembers, parsePositiveNumber, parseProbabilityLevel } from './optionParsers.js';
-import { demoFiles } from './packageInfo.js';
 
 export interface FamiliesCliOptions {
   files: string[]; // empty: the bundled demo catalogue
@@ -104,12 +101,10 @@ function reportText(r: FamiliesCliResult, opts: FamiliesCliOptions): string {
 }
 
 export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCliResult> {
-  const files = opts.files.length > 0 ? opts.files : demoFiles().map((f) => relative(process.cwd(), f) || f);
+  const files = commandFiles(opts.files);
   const stage = await OutputStage.open(opts.out);
   try {
-    const loaded = await loadCatalogue(files);
-    const errors = loaded.errors.map(inputErrorLine);
-    if (loaded.files.length > 0 && errors.length === loaded.files.length) throw new Error(`no input could be read; nothing written, ${opts.out} left as it was`);
+    const { loaded, errors } = await loadCommandCatalogue(files, opts.out);
     const inputs = await readFamiliesInputs(opts.families);
     const options: FamiliesOptions = {
       ...FAMILIES_DEFAULTS, cutoffMPerS: opts.cutoff ?? null, minMembers: opts.min, fapThreshold: opts.fap,
