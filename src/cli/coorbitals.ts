@@ -24,12 +24,9 @@ import { writeFileAtomic } from '../report/atomicWrite.js';
 import { OutputStage } from '../report/outputStage.js';
 import { SCREENING_CAVEAT } from '../report/reportMarkdown.js';
 import { markdownTable, textTable } from '../report/textTable.js';
-import { inputErrorLine } from './inputErrorLine.js';
-import { loadCatalogue } from './loadCatalogue.js';
+import { commandFiles, loadCommandCatalogue } from './commandCatalogue.js';
 import { withDefault } from './optionDefault.js';
 import { parseNonNegativeNumber, parsePlanetList, parsePositiveInteger } from './optionParsers.js';
-import { demoFiles } from './packageInfo.js';
-import { relative } from 'node:path';
 
 export interface CoorbitalsOptions {
   files: string[]; // empty: the bundled demo catalogue
@@ -129,12 +126,10 @@ function reportText(r: CoorbitalsResult, opts: CoorbitalsOptions, plots: Readonl
 }
 
 export async function runCoorbitals(opts: CoorbitalsOptions): Promise<CoorbitalsResult> {
-  const files = opts.files.length > 0 ? opts.files : demoFiles().map((f) => relative(process.cwd(), f) || f);
+  const files = commandFiles(opts.files);
   const stage = await OutputStage.open(opts.out);
   try {
-    const loaded = await loadCatalogue(files);
-    const errors = loaded.errors.map(inputErrorLine);
-    if (loaded.files.length > 0 && errors.length === loaded.files.length) throw new Error(`no input could be read; nothing written, ${opts.out} left as it was`);
+    const { loaded, errors } = await loadCommandCatalogue(files, opts.out);
     const co: CoorbitalOptions = { ...COORBITAL_DEFAULTS, planets: opts.planet, windowYears: opts.years, confirm: 'all', budgetCpuSeconds: opts.budget, threads: opts.threads, series: true };
     const { results, notScreened, skipped } = await analyseCoorbitals(loaded.catalogue, co);
     sortRejectsInPlace(loaded.rejects, files);

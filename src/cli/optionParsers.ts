@@ -91,3 +91,24 @@ export function parseOutputFormat(value: string): 'text' | 'json' {
   if (value !== 'text' && value !== 'json') throw new InvalidArgumentError(`unknown output format '${value}'; one of: text, json`);
   return value;
 }
+
+/** A probability level in (0, 1] (a false-alarm threshold). */
+export function parseProbabilityLevel(value: string): number {
+  const x = parseFiniteNumber(value);
+  if (!(x > 0 && x <= 1)) throw new InvalidArgumentError(`'${value}' is not in (0, 1]`);
+  return x;
+}
+
+/** A finite number > 0 (a cutoff speed). */
+export function parsePositiveNumber(value: string): number {
+  const x = parseFiniteNumber(value);
+  if (!(x > 0)) throw new InvalidArgumentError(`'${value}' is not a positive number`);
+  return x;
+}
+
+/** N_min of a family: an integer ≥ 2. */
+export function parseMinMembers(value: string): number {
+  const x = Number(value);
+  if (!Number.isInteger(x) || x < 2) throw new InvalidArgumentError(`'${value}' is not an integer ≥ 2`);
+  return x;
+}

@@ -2,6 +2,7 @@
 import { Command } from 'commander';
 import { packageVersion } from './packageInfo.js';
 import { registerCoorbitals } from './coorbitals.js';
+import { registerFamilies } from './families.js';
 import { registerPropagate } from './propagate.js';
 import { registerScan } from './scan.js';
 
@@ -16,5 +17,6 @@ export function buildProgram(): Command {
   registerScan(program);
   registerPropagate(program);
   registerCoorbitals(program);
+  registerFamilies(program);
   return program;
 }

@@ -11,6 +11,8 @@ import type { Progress } from '../core/progress.js';
 import { DETECTORS, detectorById } from '../detect/registry.js';
 import { TISSERAND_DEFAULTS } from '../detect/tisserand.js';
 import { COORBITAL_DEFAULTS, type CoorbitalOptions } from '../detect/coorbitalOptions.js';
+import { FAMILIES_DEFAULTS, type FamiliesOptions } from '../detect/familiesOptions.js';
+import { membershipRejectLines, readFamiliesInputs } from './familiesInputs.js';
 import type { Candidate, DetectorOptions } from '../detect/types.js';
 import type { CsvKindChoice } from '../io/bodyKind.js';
 import type { InputFormat } from '../io/types.js';
@@ -27,7 +29,7 @@ import { loadCatalogue } from './loadCatalogue.js';
 import { withDefault } from './optionDefault.js';
 import {
   INPUT_FORMATS, parseColumnMapping, parseCsvKind, parseDetectorList, parseFiniteNumber, parseInputFormat,
-  parseNonNegativeNumber, parseOutputFormat, parsePlanet, parsePlanetList, parsePositiveInteger,
+  parseNonNegativeNumber, parseOutputFormat, parsePlanet, parsePlanetList, parsePositiveInteger, parsePositiveNumber, parseProbabilityLevel, parseMinMembers,
 } from './optionParsers.js';
 import { demoFiles, packageVersion } from './packageInfo.js';
 import { scanStdoutTable } from './scanTable.js';
@@ -48,6 +50,10 @@ export interface ScanOptions {
   coorbitalYears?: number; // N-body window ± years
   coorbitalBudget?: number; // N-body budget, CPU-seconds (bodies at the nominal cost)
   threads?: number; // worker threads for N-body work and co-orbital predictions
+  families?: string; // --families FILE: a user's family membership list naming the clusters
+  familyFap?: number; // --family-fap: false-alarm threshold of the family outliers
+  familyCutoff?: number; // --family-cutoff: one HCM cutoff (m/s) instead of the quasi-random levels
+  familyMin?: number; // --family-min: N_min
   reproducible: boolean; // leave timings and memory out of summary.json
 }
 
@@ -55,6 +61,7 @@ export interface ScanResult {
   summary: ScanSummary;
   ranked: Candidate[];
   errors: string[]; // one line per unreadable input
+  warnings: string[]; // one line per bad line of a side list (--families)
   outDir: string;
 }
 
@@ -132,6 +139,8 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
   if (loaded.files.length > 0 && loaded.errors.length === loaded.files.length) {
     throw new NoInputReadError(loaded.errors.map(inputErrorLine), opts.out);
   }
+  const familyInputs = opts.detectors.includes('families') ? await readFamiliesInputs(opts.families) : null;
+  const warnings = familyInputs ? membershipRejectLines(familyInputs) : [];
   timing.readSeconds = seconds(t0);
   const detOpts: DetectorOptions = {
     tisserand: {
@@ -148,6 +157,14 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
       budgetCpuSeconds: opts.coorbitalBudget ?? COORBITAL_DEFAULTS.budgetCpuSeconds,
       threads: opts.threads ?? COORBITAL_DEFAULTS.threads,
     },
+    families: {
+      ...FAMILIES_DEFAULTS,
+      cutoffMPerS: opts.familyCutoff ?? FAMILIES_DEFAULTS.cutoffMPerS,
+      minMembers: opts.familyMin ?? FAMILIES_DEFAULTS.minMembers,
+      fapThreshold: opts.familyFap ?? FAMILIES_DEFAULTS.fapThreshold,
+      published: familyInputs?.published.families ?? [],
+      membership: familyInputs?.membership ?? null,
+    },
   };
   const { runs, candidates } = await runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, progress);
   const ranked = rankInPlace(candidates, opts.detectors);
@@ -158,7 +175,7 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
   await writeRejectsCsv(stage.path('rejects.csv'), loaded.rejects);
   const options = {
     detectors: opts.detectors, planet: opts.planet,
-    tisserand: detOpts.tisserand, coorbital: coorbitalOptionsRecord(detOpts.coorbital),
+    tisserand: detOpts.tisserand, coorbital: coorbitalOptionsRecord(detOpts.coorbital), families: familiesOptionsRecord(detOpts.families, opts.families),
     inputFormat: opts.inputFormat ?? 'auto', columns: opts.columns ?? {},
     csvKind: opts.csvKind ?? 'auto',
     validity: DEFAULT_VALIDITY, quality: DEFAULT_QUALITY,
@@ -175,13 +192,19 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
     ? forReport
     : buildSummary({ ...base, timing, peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024) });
   await writeFileAtomic(stage.path('summary.json'), JSON.stringify(summary, null, 2) + '\n');
-  return { summary, ranked, errors: loaded.errors.map(inputErrorLine), outDir: opts.out };
+  return { summary, ranked, errors: loaded.errors.map(inputErrorLine), warnings, outDir: opts.out };
 }
 
 /** The co-orbital options as summary.json records them: not the thread count, which changes no output. */
 function coorbitalOptionsRecord(o: CoorbitalOptions): Omit<CoorbitalOptions, 'threads'> {
   const { threads: _threads, ...rest } = o;
   return rest;
+}
+
+/** The families options as summary.json records them: the membership file by name, not its lines. */
+function familiesOptionsRecord(o: FamiliesOptions, membershipFile: string | undefined): Record<string, unknown> {
+  const { published, membership: _m, ...rest } = o;
+  return { ...rest, publishedFamilies: published.length, membershipFile: membershipFile ?? null };
 }
 
 /** What commander hands the action: the scan options plus the ones only the CLI uses. */
@@ -217,6 +240,12 @@ export function registerScan(program: Command): void {
       COORBITAL_DEFAULTS.budgetCpuSeconds, String(COORBITAL_DEFAULTS.budgetCpuSeconds), parseNonNegativeNumber))
     .addOption(withDefault('--threads <n>', 'worker threads for co-orbital predictions and N-body work (outputs identical for any number)',
       COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
+    .option('--families <file>', 'family membership list (CSV/TSV: designation and family columns) whose labels name the families found')
+    .addOption(withDefault('--family-fap <p>', 'family outliers: candidates below this false-alarm probability',
+      FAMILIES_DEFAULTS.fapThreshold, String(FAMILIES_DEFAULTS.fapThreshold), parseProbabilityLevel))
+    .option('--family-cutoff <m/s>', "families: one HCM cutoff for every belt region (default: each region's quasi-random level)", parsePositiveNumber)
+    .addOption(withDefault('--family-min <n>', 'families: fewest members of a family (N_min)',
+      FAMILIES_DEFAULTS.minMembers, String(FAMILIES_DEFAULTS.minMembers), parseMinMembers))
     .addOption(new Option('--input-format <format>',
       `force the input format, one of: ${INPUT_FORMATS.join(', ')} (without it: detected from each file's content)`).argParser(parseInputFormat))
     .option('--columns <map>', 'CSV column mapping field=header,…, e.g. designation=objname,a=semimajor', parseColumnMapping)
@@ -237,7 +266,7 @@ export function registerScan(program: Command): void {
         if (err instanceof NoInputReadError) for (const line of err.errors) process.stderr.write(`wayward: ${line}\n`);
         throw err;
       }
-      for (const line of result.errors) process.stderr.write(`wayward: ${line}\n`);
+      for (const line of [...result.warnings, ...result.errors]) process.stderr.write(`wayward: ${line}\n`);
       if (flags.format === 'json') process.stdout.write(JSON.stringify(result.summary, null, 2) + '\n');
       else if (!flags.quiet) {
         if (result.summary.demoCatalogue) process.stdout.write(`${demoNotice(result)}\n`);

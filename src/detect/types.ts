@@ -17,6 +17,7 @@ import type { PlanetName } from '../core/constants.js';
 import type { Progress } from '../core/progress.js';
 import type { Catalogue } from '../clean/types.js';
 import type { CoorbitalOptions } from './coorbitalOptions.js';
+import type { FamiliesOptions } from './familiesOptions.js';
 
 /** One body raised by one detector. */
 export interface Candidate {
@@ -65,6 +66,7 @@ export interface TisserandOptions {
 export interface DetectorOptions {
   tisserand: TisserandOptions;
   coorbital: CoorbitalOptions;
+  families: FamiliesOptions;
 }
 
 export interface Detector {

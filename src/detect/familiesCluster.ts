@@ -1,0 +1,45 @@
+/**
+ * The families of the trusted proper elements: HCM region by region (families/clusterByRegion.ts)
+ * at each region's quasi-random level (families/qrlCutoff.ts) or at one cutoff for all, then
+ * the family table (families/familyTable.ts). A region with fewer bodies than N_min has no
+ * cutoff (NaN) and no family.
+ */
+import { clusterByRegion } from './families/clusterByRegion.js';
+import { buildFamilyTable, type FamilyRow } from './families/familyTable.js';
+import { quasiRandomLevel } from './families/qrlCutoff.js';
+import { pick, regionMembers, regionOfAu } from './families/qrlRegion.js';
+import { LABEL_NOISE } from './families/clusterLabels.js';
+import { FAMILIES_QRL, type FamiliesOptions } from './familiesOptions.js';
+
+export interface FamiliesClustering {
+  labels: Int32Array; // per screened body (position in the screened list): family id or LABEL_NOISE
+  table: FamilyRow[]; // members as positions in the screened list
+  familyRegion: Int32Array; // 0 inner, 1 middle, 2 outer per family id
+  regionCutoffMPerS: [number, number, number]; // NaN for a region without enough bodies
+  cutoffFromQrl: boolean;
+}
+
+/** Clusters the screened bodies' proper elements (a, e, sin i, one entry per screened body). */
+export function clusterFamilies(a: Float64Array, e: Float64Array, sinI: Float64Array, opts: FamiliesOptions): FamiliesClustering {
+  const cut: [number, number, number] = [NaN, NaN, NaN];
+  for (let r = 0; r < 3; r++) {
+    const ids = regionMembers(a, r);
+    if (ids.length < opts.minMembers) continue;
+    if (opts.cutoffMPerS !== null) { cut[r] = opts.cutoffMPerS; continue; }
+    const ar = pick(a, ids);
+    const aRefAu = ar.reduce((x, y) => x + y, 0) / ar.length;
+    try {
+      cut[r] = quasiRandomLevel(ar, pick(e, ids), pick(sinI, ids), { ...FAMILIES_QRL, minMembers: opts.minMembers, aRefAu, seed: opts.seed + r }).cutoffMPerS;
+    } catch (err) {
+      if (!(err instanceof RangeError)) throw err;
+      // too few bodies for any chance group of N_min below the highest cutoff tried: no level, no family
+    }
+  }
+  // a region without a cutoff is left out of the linking (its bodies read as missing, then as no family)
+  const aUsed = Float64Array.from(a, (v) => (Number.isFinite(cut[regionOfAu(v)]) ? v : NaN));
+  const used = cut.map((v) => (Number.isFinite(v) ? v : 1)) as [number, number, number];
+  const c = clusterByRegion(aUsed, e, sinI, used, opts.minMembers);
+  for (let k = 0; k < c.labels.length; k++) if (c.labels[k] < 0) c.labels[k] = LABEL_NOISE;
+  const table = buildFamilyTable(a, e, sinI, c.labels, c.familyCutoffMPerS);
+  return { labels: c.labels, table, familyRegion: c.familyRegion, regionCutoffMPerS: cut, cutoffFromQrl: opts.cutoffMPerS === null };
+}

@@ -1,0 +1,83 @@
+/**
+ * Which bodies the families detector judges, and their proper elements (core/secular, linear
+ * theory). Not screened, each body under the first reason that applies: from the comet
+ * catalogue, elements missing, unbound (e ≥ 1 or a ≤ 0), e ≥ 0.9, a outside the range the
+ * secular theory is used in. The rest get proper elements; those the theory does not trust
+ * (`proper-unreliable`, core/secular/reliability.ts) are counted apart and listed with their
+ * reasons, never clustered nor used in the outliers' calibration.
+ */
+import { planetarySecularModel } from '../core/secular/planetarySecularModel.js';
+import { newProperColumns, properElementsColumns, type ProperColumns } from '../core/secular/properElementsColumns.js';
+import { SECULAR_A_MAX_AU, SECULAR_A_MIN_AU } from '../core/secular/reliability.js';
+import { KIND_COMET, type Catalogue } from '../clean/types.js';
+
+/** Eccentricity from which a body is not screened (our choice: far beyond any family, where the second-order theory means nothing). */
+export const FAMILIES_E_MAX = 0.9;
+
+export const FAMILIES_NOT_SCREENED = {
+  'comet-catalogue': 'from the comet catalogue (families are asteroid families)',
+  'elements-missing': 'a, e, i, node, argument of perihelion or epoch missing',
+  unbound: 'unbound: e ≥ 1 or a ≤ 0',
+  'high-eccentricity': `e ≥ ${FAMILIES_E_MAX}`,
+  'outside-secular-range': `a outside ${SECULAR_A_MIN_AU}–${SECULAR_A_MAX_AU} au, where the secular theory is used`,
+  'proper-unreliable': 'proper elements not trusted (linear secular theory); listed with the reasons apart',
+} as const;
+export type FamiliesSkipReason = keyof typeof FAMILIES_NOT_SCREENED;
+
+/** The screening reason of row k, or '' when its proper elements are computed. */
+export function familiesSkipReason(cat: Catalogue, k: number): Exclude<FamiliesSkipReason, 'proper-unreliable'> | '' {
+  if (cat.kind[k] === KIND_COMET) return 'comet-catalogue';
+  const a = cat.a[k], e = cat.e[k];
+  if ([a, e, cat.i[k], cat.node[k], cat.peri[k], cat.epochJdTT[k]].some((x) => Number.isNaN(x))) return 'elements-missing';
+  if (e >= 1 || a <= 0) return 'unbound';
+  if (e >= FAMILIES_E_MAX) return 'high-eccentricity';
+  if (a < SECULAR_A_MIN_AU || a > SECULAR_A_MAX_AU) return 'outside-secular-range';
+  return '';
+}
+
+export interface FamiliesScreen {
+  reason: (FamiliesSkipReason | '')[]; // per catalogue row; '' = screened (trusted proper elements)
+  notScreened: Record<FamiliesSkipReason, number>;
+  proper: ProperColumns; // per catalogue row; filled for rows with reason '' or 'proper-unreliable'
+  screened: Int32Array; // rows with trusted proper elements, ascending
+  models: number; // secular models built (one per distinct epoch)
+}
+
+/**
+ * Screens the catalogue and computes proper elements with one planetary model per distinct
+ * epoch (the osculation epoch JD TT taken as TDB: they differ by under 2 ms, common practice).
+ */
+export function screenFamilies(cat: Catalogue): FamiliesScreen {
+  const n = cat.size;
+  const reason: (FamiliesSkipReason | '')[] = new Array(n);
+  const notScreened = Object.fromEntries(Object.keys(FAMILIES_NOT_SCREENED).map((id) => [id, 0])) as Record<FamiliesSkipReason, number>;
+  const proper = newProperColumns(n);
+  proper.aAu.fill(NaN); proper.e.fill(NaN); proper.sinI.fill(NaN);
+  const byEpoch = new Map<number, number[]>();
+  for (let k = 0; k < n; k++) {
+    reason[k] = familiesSkipReason(cat, k);
+    if (reason[k] !== '') continue;
+    const rows = byEpoch.get(cat.epochJdTT[k]);
+    if (rows) rows.push(k); else byEpoch.set(cat.epochJdTT[k], [k]);
+  }
+  const epochs = [...byEpoch.keys()].sort((x, y) => x - y);
+  for (const epoch of epochs) {
+    const rows = byEpoch.get(epoch)!;
+    const model = planetarySecularModel(epoch);
+    const pickCol = (col: Float64Array) => Float64Array.from(rows, (k) => col[k]);
+    const out = newProperColumns(rows.length);
+    properElementsColumns(model, { a: pickCol(cat.a), e: pickCol(cat.e), i: pickCol(cat.i), node: pickCol(cat.node), peri: pickCol(cat.peri) }, out);
+    rows.forEach((k, m) => {
+      proper.aAu[k] = out.aAu[m]; proper.e[k] = out.e[m]; proper.sinI[k] = out.sinI[m];
+      proper.gArcsecPerYear[k] = out.gArcsecPerYear[m]; proper.sArcsecPerYear[k] = out.sArcsecPerYear[m];
+      proper.reliability[k] = out.reliability[m];
+      if (out.reliability[m] !== 0) reason[k] = 'proper-unreliable';
+    });
+  }
+  let m = 0;
+  for (let k = 0; k < n; k++) if (reason[k] === '') m++; else notScreened[reason[k] as FamiliesSkipReason]++;
+  const screened = new Int32Array(m);
+  m = 0;
+  for (let k = 0; k < n; k++) if (reason[k] === '') screened[m++] = k;
+  return { reason, notScreened, proper, screened, models: epochs.length };
+}

@@ -1,0 +1,127 @@
+// `wayward families` and the families detector in `scan`. The synthetic catalogue
+// (familiesSynthetic.ts, invented data) has known places in proper-element space; the demo
+// catalogue is invented too (data/demo/README.md). Counts are checked against the rows each
+// output holds, not against the code that made them.
+import { readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { parse } from 'csv-parse/sync';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { runCli, tempDir } from './cliHarness.js';
+import { GROUP_SIZE, ISOLATED, UNRELIABLE, writeSyntheticCatalogue } from './familiesSynthetic.js';
+
+type Row = Record<string, string>;
+const table = (dir: string, name: string): Row[] => parse(readFileSync(join(dir, name)), { columns: true }) as Row[];
+const OUTPUTS = ['families.csv', 'members.csv', 'outliers.csv', 'unreliable.csv', 'not-screened.csv', 'rejects.csv', 'families.json', 'report.md'];
+
+describe('wayward families on a synthetic belt', () => {
+  const dir = tempDir();
+  const { file, group } = writeSyntheticCatalogue(dir);
+  const labels = join(dir, 'labels.csv');
+  // one bad line (3 fields where the header has 2) among the group's labels
+  writeFileSync(labels, ['designation,family', ...group.map((d) => `${d},Planted`), 'SYN-BG-1,Other,extra'].join('\n') + '\n');
+  const out = join(dir, 'out');
+  let run: ReturnType<typeof runCli>;
+  beforeAll(() => {
+    run = runCli(['families', file, '--families', labels, '--out', out]);
+  });
+
+  it('runs, and names the membership list\'s bad line by file and line', () => {
+    expect(run.status, run.stderr).toBe(0);
+    expect(run.stderr).toContain(`${labels}:${GROUP_SIZE + 2}: 3 fields where the header has 2`);
+    const rej = table(out, 'rejects.csv');
+    expect(rej.map((r) => `${r.file}:${r.line}`)).toEqual([`${labels}:${GROUP_SIZE + 2}`]);
+  });
+
+  it('accounts for every body: screened + not screened = accepted, and each list holds its count', () => {
+    const j = JSON.parse(readFileSync(join(out, 'families.json'), 'utf8'));
+    const lines = readFileSync(file, 'utf8').trim().split('\n').length - 1; // data rows of the file written
+    expect(j.accepted).toBe(lines);
+    const not = Object.values(j.notScreened as Record<string, number>).reduce((s, n) => s + n, 0);
+    expect(j.screened + not).toBe(j.accepted);
+    expect(table(out, 'unreliable.csv')).toHaveLength(j.notScreened['proper-unreliable']);
+    expect(table(out, 'not-screened.csv')).toHaveLength(not - j.notScreened['proper-unreliable']);
+    expect(table(out, 'not-screened.csv').map((r) => r.reason).sort()).toEqual(['comet-catalogue', 'high-eccentricity', 'outside-secular-range']);
+    expect(table(out, 'members.csv')).toHaveLength(table(out, 'families.csv').reduce((s, f) => s + Number(f.members), 0));
+  });
+
+  it('finds the dense planted group as one family, named by the membership list', () => {
+    const members = table(out, 'members.csv');
+    const ids = new Set(members.filter((m) => group.includes(m.designation)).map((m) => m.family_id));
+    expect(members.filter((m) => group.includes(m.designation))).toHaveLength(GROUP_SIZE);
+    expect(ids.size).toBe(1);
+    const fam = table(out, 'families.csv').find((f) => f.id === [...ids][0])!;
+    expect(fam.name).toBe('Planted');
+    expect(fam.named_by).toBe('membership list');
+  });
+
+  it('reports the isolated body in the empty region with false-alarm probability < 0.01', () => {
+    const o = table(out, 'outliers.csv').find((r) => r.designation === ISOLATED);
+    expect(o).toBeDefined();
+    expect(Number(o!.false_alarm_prob)).toBeLessThan(0.01);
+    expect(Number(o!.nearest_family_mps)).toBeGreaterThan(0);
+    expect(table(out, 'members.csv').some((m) => m.designation === ISOLATED)).toBe(false);
+  });
+
+  it('keeps the untrusted bodies in their own section only, with the reason', () => {
+    const unrel = table(out, 'unreliable.csv');
+    for (const d of UNRELIABLE) {
+      expect(unrel.find((r) => r.designation === d)?.reasons).toContain('high-inclination');
+      expect(table(out, 'outliers.csv').some((r) => r.designation === d)).toBe(false);
+      expect(table(out, 'members.csv').some((r) => r.designation === d)).toBe(false);
+    }
+  });
+
+  it('writes the same bytes for the same input', () => {
+    const again = join(dir, 'again');
+    expect(runCli(['families', file, '--families', labels, '--out', again]).status).toBe(0);
+    for (const f of OUTPUTS) expect(readFileSync(join(again, f)), f).toEqual(readFileSync(join(out, f)));
+  });
+
+  it('stops with exit 1 and the file named when the membership list cannot be read', () => {
+    const r = runCli(['families', file, '--families', join(dir, 'missing.csv'), '--out', join(dir, 'none')]);
+    expect(r.status).toBe(1);
+    expect(r.stderr).toContain('missing.csv');
+  });
+
+  it('scan runs the families detector: the isolated body is a candidate with its false-alarm probability, the bad label line is named', () => {
+    const scanOut = join(dir, 'scan');
+    const r = runCli(['scan', file, '--detectors', 'families', '--families', labels, '--reproducible', '--out', scanOut]);
+    expect(r.status, r.stderr).toBe(0);
+    expect(r.stderr).toContain(`${labels}:${GROUP_SIZE + 2}: 3 fields where the header has 2`);
+    const raw = readFileSync(join(scanOut, 'candidates.jsonl'), 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    const c = raw.find((x) => x.designation === ISOLATED);
+    expect(c?.class).toBe('family-outlier');
+    expect(c.falseAlarmProb).toBeLessThan(0.01);
+    expect(c.details.nearest_family).toBe('Planted');
+    const s = JSON.parse(readFileSync(join(scanOut, 'summary.json'), 'utf8'));
+    const f = s.detectors.families;
+    expect(f.screened + Object.values(f.notScreened as Record<string, number>).reduce((x, y) => x + y, 0)).toBe(s.rows.accepted);
+    expect(raw.filter((x) => x.detector === 'families')).toHaveLength(table(join(dir, 'out'), 'outliers.csv').length); // same analysis as the command
+  });
+
+  it('refuses a false-alarm threshold outside (0, 1] and N_min below 2 (usage errors)', () => {
+    expect(runCli(['families', file, '--fap', '0']).status).toBe(2);
+    expect(runCli(['families', file, '--min', '1']).status).toBe(2);
+  });
+});
+
+describe('wayward families on the demo catalogue', () => {
+  const out = tempDir();
+  let run: ReturnType<typeof runCli>;
+  beforeAll(() => {
+    run = runCli(['families', '--out', out]);
+  });
+
+  it('adds up, names clusters from the bundled published list, and puts no untrusted body in a family', () => {
+    expect(run.status, run.stderr).toBe(0);
+    const j = JSON.parse(readFileSync(join(out, 'families.json'), 'utf8'));
+    const not = Object.values(j.notScreened as Record<string, number>).reduce((s, n) => s + n, 0);
+    expect(j.screened + not).toBe(j.accepted);
+    const fams = table(out, 'families.csv');
+    expect(fams.length).toBeGreaterThan(0);
+    for (const f of fams) expect(Number(f.members)).toBeGreaterThanOrEqual(20); // N_min default
+    const unrel = new Set(table(out, 'unreliable.csv').map((r) => r.designation));
+    expect(table(out, 'members.csv').filter((m) => unrel.has(m.designation))).toEqual([]);
+    for (const o of table(out, 'outliers.csv')) expect(Number(o.false_alarm_prob)).toBeLessThan(0.01);
+  });
+});
