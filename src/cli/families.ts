@@ -92,12 +92,25 @@ function reportText(r: FamiliesCliResult, opts: FamiliesCliOptions): string {
     fams.length ? markdownTable(['id', 'name', 'named by', 'region', 'members', 'cutoff (m/s)', 'a (au)', 'e', 'sin i'], fams) : 'None.', '',
     `## Outliers (${a.candidates.length}, false-alarm probability below ${r.options.fapThreshold})`, '',
     a.outliers ? `${a.outliers.nullModel} The false-alarm probability is the fraction of that null sample scoring at least as high; it holds under this null model only.` : 'Too few bodies screened to score isolation.', '',
+    ...(a.outliers ? [`${multipleTestingNote(a, r.options.fapThreshold)}`, ''] : []),
     outl.length ? markdownTable(['designation', 'score', 'false-alarm prob.', 'a (au)', 'e', 'sin i', 'nearest family', 'distance (m/s)'], outl) : 'None.',
     a.candidates.length > 50 ? `\nThe 50 most isolated shown; all ${a.candidates.length} in outliers.csv.` : '', '',
     `## Proper elements not trusted (${a.screen.notScreened['proper-unreliable']})`, '',
     'Kept out of the clustering and of the outliers\' calibration; each with its reasons in unreliable.csv.', '',
     ...(opts.families ? [`## Membership list`, '', `${opts.families}: ${r.options.membership?.length ?? 0} lines read, ${r.warnings.length} set aside (rejects.csv), ${a.unmatched.length} naming no catalogue body (families.json).`, ''] : []),
   ].join('\n');
+}
+
+/**
+ * Every body outside the families is tested at once: under the null model about α of them pass
+ * the threshold by chance (the expectation of a sum of indicators; common practice), so the
+ * count found is read against that number.
+ */
+function multipleTestingNote(a: FamiliesAnalysis, fap: number): string {
+  let tested = 0;
+  for (const label of a.clustering.labels) if (label < 0) tested++;
+  const expected = fap * tested;
+  return `${tested} bodies outside every family were tested at once: a catalogue drawn from the null model would put about ${expected.toFixed(1)} of them below ${fap} by chance; ${a.candidates.length} found. A count near that number is what the background alone gives.`;
 }
 
 export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCliResult> {
@@ -140,6 +153,7 @@ export function familiesStdout(r: FamiliesCliResult, out: string): string {
     `${rowsLine(r).replace('(rejects.csv)', `(${out}/rejects.csv)`)}.`,
     `${a.screen.screened.length} bodies screened with trusted proper elements; ${unrel} with untrusted ones (unreliable.csv); ${other} not screened (not-screened.csv).`,
     `${a.clustering.table.length} families (${a.names.filter((n) => n.namedBy !== 'none').length} named); ${a.candidates.length} outliers below false-alarm probability ${r.options.fapThreshold}.`,
+    ...(a.outliers ? [multipleTestingNote(a, r.options.fapThreshold)] : []),
     fams.length ? textTable(['id', 'name', 'region', 'members', 'cutoff (m/s)'], fams, [false, false, false, true, true]) : '',
     `Outputs in ${out}/ (families.csv, members.csv, outliers.csv, unreliable.csv, not-screened.csv, rejects.csv, families.json, report.md). Screening candidates only.`,
   ].filter(Boolean).join('\n') + '\n';

@@ -8,7 +8,7 @@ import { DEFAULT_QUALITY, DEFAULT_VALIDITY } from '../clean/thresholds.js';
 import type { Catalogue } from '../clean/types.js';
 import { PLANETS, type PlanetName } from '../core/constants.js';
 import type { Progress } from '../core/progress.js';
-import { DETECTORS, detectorById } from '../detect/registry.js';
+import { DEFAULT_DETECTOR_IDS, DETECTORS, detectorById } from '../detect/registry.js';
 import { TISSERAND_DEFAULTS } from '../detect/tisserand.js';
 import { COORBITAL_DEFAULTS, type CoorbitalOptions } from '../detect/coorbitalOptions.js';
 import { FAMILIES_DEFAULTS, type FamiliesOptions } from '../detect/familiesOptions.js';
@@ -224,7 +224,7 @@ export function registerScan(program: Command): void {
     .argument('[files...]', "orbit dumps: one-line orbit or comet export format, CSV/TSV; '-' reads standard input; gzip read transparently")
     .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-out', 'wayward-out'))
     .addOption(withDefault('-d, --detectors <list>', `comma-separated detectors, of: ${DETECTORS.map((d) => d.id).join(', ')}`,
-      DETECTORS.map((d) => d.id), 'all', parseDetectorList))
+      [...DEFAULT_DETECTOR_IDS], DEFAULT_DETECTOR_IDS.join(','), parseDetectorList))
     .addOption(withDefault('--planet <name>', `planet the Tisserand parameter is taken with respect to: ${PLANETS.join(', ')}`,
       TISSERAND_DEFAULTS.planet, TISSERAND_DEFAULTS.planet, parsePlanet))
     .addOption(withDefault('--tisserand-boundary <T>', 'asteroid/comet dividing value of T (Levison 1996)',

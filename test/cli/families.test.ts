@@ -32,6 +32,18 @@ describe('wayward families on a synthetic belt', () => {
     expect(rej.map((r) => `${r.file}:${r.line}`)).toEqual([`${labels}:${GROUP_SIZE + 2}`]);
   });
 
+  it('reads the outliers against the number the null model alone would give (α × bodies tested)', () => {
+    const j = JSON.parse(readFileSync(join(out, 'families.json'), 'utf8'));
+    const members = table(out, 'members.csv').length;
+    const tested = j.screened - members; // every screened body outside the families is tested
+    const m = /(\d+) bodies outside every family were tested at once: .* about ([\d.]+) of them below 0\.01 by chance; (\d+) found/.exec(run.stdout);
+    expect(m, run.stdout).not.toBeNull();
+    expect(Number(m![1])).toBe(tested);
+    expect(Number(m![2])).toBeCloseTo(0.01 * tested, 1); // expectation of a sum of indicators (common practice)
+    expect(Number(m![3])).toBe(table(out, 'outliers.csv').length);
+    expect(readFileSync(join(out, 'report.md'), 'utf8')).toContain(m![0]);
+  });
+
   it('accounts for every body: screened + not screened = accepted, and each list holds its count', () => {
     const j = JSON.parse(readFileSync(join(out, 'families.json'), 'utf8'));
     const lines = readFileSync(file, 'utf8').trim().split('\n').length - 1; // data rows of the file written
