@@ -10,7 +10,6 @@
  */
 import { readFileSync } from 'node:fs';
 import { loadavg } from 'node:os';
-import { gunzipSync } from 'node:zlib';
 import { Command, InvalidArgumentError } from 'commander';
 import { seededRandom } from '../src/core/random.js';
 import { scaledProperCoordinates, SCALED_A_WEIGHT, SCALED_E_WEIGHT, SCALED_SIN_I_WEIGHT } from '../src/detect/families/outlierMetric.js';
@@ -19,7 +18,7 @@ import { buildOutlierBackground, drawFromBackground } from '../src/detect/famili
 import { calibrateIsolation, nullCataloguePlan, nullTailFractions } from '../src/detect/families/outlierCalibration.js';
 import { DEFAULT_NULL_SCORES_WANTED, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../src/detect/families/outliers.js';
 
-const FILE = new URL('../test/fixtures/proper-elements-sdss/proper-elements-sdss.csv.gz', import.meta.url);
+const FILE = new URL('../test/fixtures/proper-elements-sdss/proper-elements-sdss.csv', import.meta.url);
 
 function integerAtLeast(min: number): (value: string) => number {
   return (value: string): number => {
@@ -41,7 +40,7 @@ const options = { ...DEFAULT_PROPER_OUTLIER_OPTIONS, replicates: opts.replicates
 interface Elements { a: Float64Array; e: Float64Array; s: Float64Array }
 
 function readReal(distinct: boolean): Elements {
-  const lines = gunzipSync(readFileSync(FILE)).toString('utf8').split('\n').slice(1).filter((l) => l !== '');
+  const lines = readFileSync(FILE, 'utf8').split('\n').slice(1).filter((l) => l !== '');
   const keep = distinct ? [...new Set(lines.map((l) => l.split(',').slice(0, 3).join(',')))] : lines;
   const a = new Float64Array(keep.length), e = new Float64Array(keep.length), s = new Float64Array(keep.length);
   keep.forEach((l, j) => { const f = l.split(','); a[j] = Number(f[0]); e[j] = Number(f[1]); s[j] = Number(f[2]); });

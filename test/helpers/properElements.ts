@@ -6,9 +6,8 @@
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { gunzipSync } from 'node:zlib';
 
-export const PROPER_ELEMENTS_SDSS_PATH = fileURLToPath(new URL('../fixtures/proper-elements-sdss/proper-elements-sdss.csv.gz', import.meta.url));
+export const PROPER_ELEMENTS_SDSS_PATH = fileURLToPath(new URL('../fixtures/proper-elements-sdss/proper-elements-sdss.csv', import.meta.url));
 
 export interface ProperElements {
   readonly aAu: Float64Array;
@@ -17,9 +16,9 @@ export interface ProperElements {
   readonly badLines: string[]; // "file:line: text" of each row with a cell that is not a number
 }
 
-/** Read the (gzipped) CSV at `path`; every data line becomes one row. */
+/** Read the CSV at `path`; every data line becomes one row. */
 export function readProperElements(path = PROPER_ELEMENTS_SDSS_PATH): ProperElements {
-  const text = gunzipSync(readFileSync(path)).toString('utf8');
+  const text = readFileSync(path, 'utf8');
   const lines = text.split(/\r?\n/);
   const header = lines[0].split(',');
   const col = (name: string): number => {

@@ -8,7 +8,7 @@
  */
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
-import { gunzipSync } from 'node:zlib';
+import { distinctBodies, PROPER_ELEMENTS_SDSS_PATH, readProperElements } from '../../../helpers/properElements.js';
 
 const DIR = new URL('../../../fixtures/proper-elements-sdss/', import.meta.url);
 const PROPER_SHA256 = 'd6616ab43527595502b17ebccff222aa77dfac9f0715e98d08ebb298a0173695';
@@ -17,8 +17,7 @@ const FAMILIES_SHA256 = 'b28f868ff0968ac83627902a7078a3fdbd2aad450b9e6d3ec8512d9
 export interface ProperElements { aAu: Float64Array; e: Float64Array; sinI: Float64Array; rows: number }
 
 function checkedText(name: string, sha256: string): string {
-  const raw = readFileSync(new URL(name, DIR));
-  const bytes = name.endsWith('.gz') ? gunzipSync(raw) : raw;
+  const bytes = readFileSync(new URL(name, DIR));
   const got = createHash('sha256').update(bytes).digest('hex');
   if (got !== sha256) throw new Error(`${name}: SHA-256 ${got}, expected ${sha256} (see its README)`);
   return bytes.toString('utf8');
@@ -26,20 +25,14 @@ function checkedText(name: string, sha256: string): string {
 
 let cached: ProperElements | undefined;
 
-/** Distinct bodies of the real proper-element file (first row of each (a, e, sin i)). */
+/** Distinct bodies of the real proper-element file (first row of each (a, e, sin i)), hash-checked. */
 export function distinctProperElements(): ProperElements {
   if (cached) return cached;
-  const lines = checkedText('proper-elements-sdss.csv.gz', PROPER_SHA256).split('\n').slice(1).filter((l) => l !== '');
-  const seen = new Set<string>();
-  const a: number[] = [], e: number[] = [], s: number[] = [];
-  for (const line of lines) {
-    const f = line.split(',');
-    const key = `${f[0]},${f[1]},${f[2]}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    a.push(Number(f[0])); e.push(Number(f[1])); s.push(Number(f[2]));
-  }
-  cached = { aAu: Float64Array.from(a), e: Float64Array.from(e), sinI: Float64Array.from(s), rows: lines.length };
+  checkedText('proper-elements-sdss.csv', PROPER_SHA256);
+  const all = readProperElements(PROPER_ELEMENTS_SDSS_PATH);
+  if (all.badLines.length > 0) throw new Error(`proper-elements-sdss.csv: rows that are not numbers: ${all.badLines[0]}`);
+  const d = distinctBodies(all);
+  cached = { aAu: d.aAu, e: d.e, sinI: d.sinI, rows: all.aAu.length };
   return cached;
 }
 
