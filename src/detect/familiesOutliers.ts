@@ -6,25 +6,29 @@
 import { qualityNames, type Catalogue } from '../clean/types.js';
 import { memberUpperTailFraction } from './empiricalTail.js';
 import type { FamilyRow } from './families/familyTable.js';
-import { velocityDistanceMPerS } from './families/metricVelocity.js';
+import { orbitalSpeedMPerS } from './families/metricVelocity.js';
+import { FamilyMemberSearch } from './families/nearestMember.js';
 import type { ProperOutliers } from './families/outliers.js';
 import type { FamilyName } from './familiesNaming.js';
 import type { Candidate } from './types.js';
 
-/** The family nearest to screened body j and its distance in m/s: through its k nearest bodies, else the closest family centre. */
+/**
+ * The family nearest to screened body j: the family of its nearest family member in the velocity
+ * metric, and that member's distance in m/s (scaled distance times the body's own n·a, as for
+ * its k nearest bodies: families/outlierMetric.ts). The first member among its k nearest bodies
+ * is that member (`via` 'neighbour'); when none of them is a member, the members alone are
+ * searched (`via` 'members', families/nearestMember.ts). No family at all: −1, NaN, ''.
+ */
 export function nearestFamily(
-  j: number, o: ProperOutliers, labels: Int32Array, table: readonly FamilyRow[], a: Float64Array, e: Float64Array, sinI: Float64Array,
-): { family: number; distanceMPerS: number; via: 'neighbour' | 'centre' | '' } {
+  j: number, o: ProperOutliers, labels: Int32Array, members: FamilyMemberSearch, a: Float64Array,
+): { family: number; member: number; distanceMPerS: number; via: 'neighbour' | 'members' | '' } {
   for (let m = 0; m < o.k; m++) {
-    const l = labels[o.neighbourIndex[j * o.k + m]];
-    if (l >= 0) return { family: l, distanceMPerS: o.neighbourDistanceMps[j * o.k + m], via: 'neighbour' };
+    const b = o.neighbourIndex[j * o.k + m];
+    if (labels[b] >= 0) return { family: labels[b], member: b, distanceMPerS: o.neighbourDistanceMps[j * o.k + m], via: 'neighbour' };
   }
-  let family = -1, distanceMPerS = NaN;
-  for (const f of table) {
-    const d = velocityDistanceMPerS(a[j], e[j], sinI[j], f.aAu.median, f.e.median, f.sinI.median, a[j]);
-    if (!(d >= distanceMPerS)) { family = f.id; distanceMPerS = d; }
-  }
-  return { family, distanceMPerS, via: family >= 0 ? 'centre' : '' };
+  const near = members.nearest(o.scaledXyz[3 * j], o.scaledXyz[3 * j + 1], o.scaledXyz[3 * j + 2]);
+  if (near.body < 0) return { family: -1, member: -1, distanceMPerS: NaN, via: '' };
+  return { family: near.family, member: near.body, distanceMPerS: orbitalSpeedMPerS(a[j]) * near.scaledDistance, via: 'members' };
 }
 
 const fixed = (x: number, d: number): number => (Number.isFinite(x) ? Number(x.toFixed(d)) : x);
@@ -36,13 +40,14 @@ export function familyOutlierCandidates(
 ): Candidate[] {
   const sorted = Float64Array.from(o.score).sort();
   const out: Candidate[] = [];
+  const members = new FamilyMemberSearch(o.scaledXyz, labels);
   for (let j = 0; j < screened.length; j++) {
     if (labels[j] >= 0 || !(o.nullTailFraction[j] < threshold)) continue;
     const k = screened[j];
-    const near = nearestFamily(j, o, labels, table, a, e, sinI);
+    const near = nearestFamily(j, o, labels, members, a);
     const fam = near.family >= 0 ? names[near.family] : undefined;
     const nearText = fam
-      ? `nearest family ${fam.name === fam.id ? fam.id : `${fam.name} (${fam.id})`} ${near.distanceMPerS.toFixed(0)} m/s away (${near.via === 'neighbour' ? `one of its ${o.k} nearest bodies` : 'its median centre'})`
+      ? `nearest family ${fam.name === fam.id ? fam.id : `${fam.name} (${fam.id})`} ${near.distanceMPerS.toFixed(0)} m/s away (its nearest member ${cat.designation[screened[near.member]]}${near.via === 'neighbour' ? `, one of its ${o.k} nearest bodies` : ''})`
       : 'no family found in this catalogue';
     out.push({
       designation: cat.designation[k], index: k, detector: 'families', class: 'family-outlier', boundary: false,

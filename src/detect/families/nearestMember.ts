@@ -1,0 +1,67 @@
+/**
+ * The nearest member of any family to a point in proper-element space, in the outlier stage's
+ * scaled coordinates (outlierMetric.ts: |δz| times a body's n·a is the velocity metric in m/s).
+ * A k-nearest search with k = 1 over the family members alone, through the grid of
+ * kNearestGrid.ts (about four members a cell, as the outlier stage's own grid), never all
+ * pairs. Ties go to the member with the lower index, as in kNearest.ts. The grid is built on
+ * the first query, so a run that asks nothing pays nothing.
+ */
+import { cellSizeForOccupancy } from './kNearestCellSize.js';
+import { buildKNearestGrid, type KNearestGrid } from './kNearestGrid.js';
+import { kNearestOf } from './kNearest.js';
+
+/** Mean members per occupied cell (common practice for grid indices: a few points a cell). */
+const MEMBERS_PER_CELL = 4;
+
+export interface NearestMember {
+  readonly body: number; // index of the member (same numbering as labels), −1 when there is no member
+  readonly family: number; // its family label, −1 when there is no member
+  readonly scaledDistance: number; // |δz| in scaled coordinates; NaN when there is no member
+}
+
+export class FamilyMemberSearch {
+  private readonly members: Int32Array; // body indices of the members, ascending
+  private readonly xyz: Float64Array;
+  private readonly labels: Int32Array;
+  private grid: KNearestGrid | null = null;
+
+  /** `scaledXyz`: interleaved scaled coordinates per body; `labels`: family per body, < 0 for none. */
+  constructor(scaledXyz: Float64Array, labels: Int32Array) {
+    if (scaledXyz.length !== 3 * labels.length) {
+      throw new RangeError(`FamilyMemberSearch: ${scaledXyz.length / 3} bodies of coordinates for ${labels.length} labels`);
+    }
+    let m = 0;
+    for (let j = 0; j < labels.length; j++) if (labels[j] >= 0) m++;
+    this.members = new Int32Array(m);
+    m = 0;
+    for (let j = 0; j < labels.length; j++) if (labels[j] >= 0) this.members[m++] = j;
+    this.xyz = scaledXyz;
+    this.labels = labels;
+  }
+
+  /** Number of family members searched. */
+  get memberCount(): number {
+    return this.members.length;
+  }
+
+  /** The family member nearest to (x, y, z) in scaled coordinates. */
+  nearest(x: number, y: number, z: number): NearestMember {
+    if (this.members.length === 0) return { body: -1, family: -1, scaledDistance: NaN };
+    const grid = this.grid ?? (this.grid = this.buildGrid());
+    const found = kNearestOf(grid, Float64Array.of(x, y, z), 1);
+    const body = this.members[found.index[0]];
+    return { body, family: this.labels[body], scaledDistance: found.distance[0] };
+  }
+
+  private buildGrid(): KNearestGrid {
+    const m = this.members.length;
+    const pts = new Float64Array(3 * m);
+    for (let t = 0; t < m; t++) {
+      const j = this.members[t];
+      pts[3 * t] = this.xyz[3 * j];
+      pts[3 * t + 1] = this.xyz[3 * j + 1];
+      pts[3 * t + 2] = this.xyz[3 * j + 2];
+    }
+    return buildKNearestGrid(pts, cellSizeForOccupancy(pts, MEMBERS_PER_CELL, 4 * m + 64));
+  }
+}
