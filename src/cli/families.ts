@@ -4,7 +4,8 @@
  * row per member), outliers.csv (the candidates), unreliable.csv (bodies whose proper elements
  * the linear theory does not trust, with the reasons), not-screened.csv (bodies left out for a
  * reason of their own), rejects.csv (rows the readers and cleaning set aside, and bad lines of
- * a --families list), families.json (all of it with the run's accounting) and report.md.
+ * a --families list), families.json (all of it with the run's accounting), report.md, and the
+ * proper-element maps a–e and a–sin i in plots/ (report/familiesPlots.ts).
  */
 import { Command } from 'commander';
 import { analyseFamilies, type FamiliesAnalysis } from '../detect/families.js';
@@ -13,6 +14,7 @@ import { FAMILIES_NOT_SCREENED } from '../detect/familiesScreen.js';
 import type { Catalogue, Reject } from '../clean/types.js';
 import { BELT_REGIONS } from '../detect/families/qrlRegion.js';
 import { writeFileAtomic } from '../report/atomicWrite.js';
+import { writeFamiliesPlots, type FamiliesPlot } from '../report/familiesPlots.js';
 import { csvRecord } from '../report/csvField.js';
 import {
   FAMILY_COLUMNS, familyRows, MEMBER_COLUMNS, memberRows, NOT_SCREENED_COLUMNS, notScreenedRows, OUTLIER_COLUMNS, outlierRows,
@@ -74,7 +76,15 @@ function rowsLine(r: FamiliesCliResult): string {
   return `${r.rowsRead} rows read: ${r.cat.size} bodies accepted, ${r.rejects.length} rejected (rejects.csv)`;
 }
 
-function reportText(r: FamiliesCliResult, opts: FamiliesCliOptions): string {
+/** The maps as Markdown images, each linking its SVG. */
+function mapsSection(plots: readonly FamiliesPlot[]): string[] {
+  if (plots.length === 0) return [];
+  return ['## Maps', '',
+    'Proper elements of the screened bodies, coloured by family (the largest named in the legend, the others in one grey, bodies outside every family light grey), outliers marked; each subtitle says what is drawn. Each picture links its SVG.', '',
+    plots.map((p) => `[![${p.caption}](${p.stem}.png)](${p.stem}.svg)`).join(' '), ''];
+}
+
+function reportText(r: FamiliesCliResult, opts: FamiliesCliOptions, plots: readonly FamiliesPlot[]): string {
   const a = r.analysis;
   const not = Object.entries(a.screen.notScreened).map(([id, n]) => [`not screened: ${FAMILIES_NOT_SCREENED[id as keyof typeof FAMILIES_NOT_SCREENED]}`, String(n)]);
   const fams = familyRows(a).map((row) => [row[0], row[1], row[2], row[3], row[4], row[5], row[6], row[7], row[8]].map(String));
@@ -98,6 +108,7 @@ function reportText(r: FamiliesCliResult, opts: FamiliesCliOptions): string {
     `## Proper elements not trusted (${a.screen.notScreened['proper-unreliable']})`, '',
     'Kept out of the clustering and of the outliers\' calibration; each with its reasons in unreliable.csv.', '',
     ...(opts.families ? [`## Membership list`, '', `${opts.families}: ${r.options.membership?.length ?? 0} lines read, ${r.warnings.length} set aside (rejects.csv), ${a.unmatched.length} naming no catalogue body (families.json).`, ''] : []),
+    ...mapsSection(plots),
   ].join('\n');
 }
 
@@ -135,7 +146,8 @@ export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCli
     await writeFileAtomic(stage.path('unreliable.csv'), csvText(UNRELIABLE_COLUMNS, unreliableRows(loaded.catalogue, analysis)));
     await writeFileAtomic(stage.path('not-screened.csv'), csvText(NOT_SCREENED_COLUMNS, notScreenedRows(loaded.catalogue, analysis)));
     await writeFileAtomic(stage.path('families.json'), jsonText(r, opts));
-    await writeFileAtomic(stage.path('report.md'), reportText(r, opts));
+    const plots = await writeFamiliesPlots(stage, loaded.catalogue, analysis, opts.fap);
+    await writeFileAtomic(stage.path('report.md'), reportText(r, opts, plots));
     await stage.commit();
     return r;
   } catch (err) {
@@ -155,7 +167,7 @@ export function familiesStdout(r: FamiliesCliResult, out: string): string {
     `${a.clustering.table.length} families (${a.names.filter((n) => n.namedBy !== 'none').length} named); ${a.candidates.length} outliers below false-alarm probability ${r.options.fapThreshold}.`,
     ...(a.outliers ? [multipleTestingNote(a, r.options.fapThreshold)] : []),
     fams.length ? textTable(['id', 'name', 'region', 'members', 'cutoff (m/s)'], fams, [false, false, false, true, true]) : '',
-    `Outputs in ${out}/ (families.csv, members.csv, outliers.csv, unreliable.csv, not-screened.csv, rejects.csv, families.json, report.md). Screening candidates only.`,
+    `Outputs in ${out}/ (families.csv, members.csv, outliers.csv, unreliable.csv, not-screened.csv, rejects.csv, families.json, report.md, plots/). Screening candidates only.`,
   ].filter(Boolean).join('\n') + '\n';
 }
 

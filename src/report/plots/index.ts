@@ -5,3 +5,6 @@ export * from './decimate.js';
 export * from './resonantAngleChart.js';
 export * from './rotatingFrameChart.js';
 export * from './scatterMapChart.js';
+export * from './cellMerge.js';
+export * from './niceDomain.js';
+export * from './properElementMapChart.js';

@@ -41,5 +41,23 @@ export const CATEGORY_COLOURS: readonly string[] = [
   OKABE_ITO.skyBlue, OKABE_ITO.vermillion, OKABE_ITO.yellow,
 ];
 
+/**
+ * Colours of up to twelve families on a proper-element map: the twelve of ColorBrewer's
+ * qualitative scheme 'Paired' (Harrower & Brewer, "ColorBrewer.org: an online tool for
+ * selecting colour schemes for maps", The Cartographic Journal 40, 27–37, 2003; hex values
+ * from memory), its six dark members first so that the six largest families get the strongest
+ * colours, then the six light ones. Not designed for colour-vision deficiency (no published
+ * set of twelve is); the legend names every family.
+ */
+export const FAMILY_COLOURS: readonly string[] = [
+  '#1f78b4', '#33a02c', '#e31a1c', '#ff7f00', '#6a3d9a', '#b15928',
+  '#a6cee3', '#b2df8a', '#fb9a99', '#fdbf6f', '#cab2d6', '#ffff99',
+];
+
+/** Families beyond the coloured ones, one grey for all (our choice). */
+export const OTHER_FAMILIES_COLOUR = '#8c8c8c';
+/** Bodies outside every family, a light grey under everything else (our choice). */
+export const BACKGROUND_BODIES_COLOUR = '#d4d4d4';
+
 /** Opacity of background bands, so the data drawn over them stay readable (common practice). */
 export const BAND_OPACITY = 0.25;
