@@ -60,8 +60,8 @@ describe('wayward families: proper-element maps', () => {
       expect(legend).toContain(`Planted, ${planted.id} (${planted.members})`);
       expect(Number(planted.members)).toBeGreaterThanOrEqual(GROUP_SIZE);
       const marks = groupsOf(doc, 'mark-symbol role-mark');
-      expect(marks).toHaveLength(3); // outside families, members, outliers
-      expect(Array.from(marks[2].childNodes).filter((n) => n.nodeType === 1)).toHaveLength(outliers.length);
+      expect(marks).toHaveLength(3); // outside families, outliers, members
+      expect(Array.from(marks[1].childNodes).filter((n) => n.nodeType === 1)).toHaveLength(outliers.length);
       const sub = textsOf(doc, 'role-title-subtitle', 'tspan');
       expect(sub).toContain(`${unreliable} bodies with untrusted proper elements not drawn (unreliable.csv)`);
       const screened = JSON.parse(readFileSync(join(out, 'families.json'), 'utf8')).screened;

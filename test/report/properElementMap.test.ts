@@ -71,8 +71,8 @@ describe('proper-element map', () => {
 
   it('marks every outlier with its own symbol and names it when few; says what it drew in the subtitle', () => {
     const marks = groups(doc, 'mark-symbol', 'role-mark');
-    expect(marks).toHaveLength(3); // background, members, outliers
-    expect(children(marks[2], 'path')).toHaveLength(5);
+    expect(marks).toHaveLength(3); // background, outliers, members (drawn over the outliers)
+    expect(children(marks[1], 'path')).toHaveLength(5);
     expect(texts(doc, 'mark-text', 'role-mark')).toEqual(input.outlierDesignations);
     const bg = children(marks[0], 'path').length;
     expect(bg).toBeLessThanOrEqual(10_000);
@@ -87,7 +87,7 @@ describe('proper-element map', () => {
   it('draws every family member: each lies inside a drawn symbol of its family\'s colour', () => {
     const spec = properElementMapChart(input) as unknown as { layer: { encoding: { x: { scale: { domain: number[] } }; y: { scale: { domain: number[] } } } }[] };
     const [a0, a1] = spec.layer[0].encoding.x.scale.domain, [y0, y1] = spec.layer[0].encoding.y.scale.domain;
-    const drawn = children(groups(doc, 'mark-symbol', 'role-mark')[1], 'path').map((p) => ({ at: translate(p), fill: p.getAttribute('fill') }));
+    const drawn = children(groups(doc, 'mark-symbol', 'role-mark')[2], 'path').map((p) => ({ at: translate(p), fill: p.getAttribute('fill') }));
     const members = input.family.length - 30_000;
     const sub = subtitle(doc);
     expect(sub).toContain(`all ${members} family members drawn as ${drawn.length} symbols (members of one family within one pixel share one)`);
@@ -115,9 +115,20 @@ describe('proper-element map', () => {
   it('names no outlier when there are more than maxLabels, and draws them all', async () => {
     const many = belt(40);
     const d = parseSvg((await renderChart(properElementMapChart(many))).svg);
-    expect(children(groups(d, 'mark-symbol', 'role-mark')[2], 'path')).toHaveLength(40);
+    expect(children(groups(d, 'mark-symbol', 'role-mark')[1], 'path')).toHaveLength(40);
     expect(groups(d, 'mark-text', 'role-mark')).toHaveLength(0);
     expect(subtitle(d)).toContain('40 outliers marked ◇');
+  });
+
+  it('draws many outliers with smaller diamonds, so they do not cover the map', async () => {
+    // half-width of the first diamond's path (Vega draws a symbol of area A as a path around its centre)
+    const halfWidthPx = async (outliers: number) => {
+      const d = parseSvg((await renderChart(properElementMapChart(belt(outliers)))).svg);
+      const path = children(groups(d, 'mark-symbol', 'role-mark')[1], 'path')[0].getAttribute('d') ?? '';
+      return Math.max(...(path.match(/-?[\d.]+/g) ?? []).map((v) => Math.abs(Number(v))));
+    };
+    const few = await halfWidthPx(5), many = await halfWidthPx(250);
+    expect(many / few).toBeCloseTo(Math.sqrt(24 / 50), 2); // areas 50 and 24 px²: widths as their square roots
   });
 
   it('refuses inconsistent input (caller misuse)', () => {

@@ -3,7 +3,7 @@
  * coloured by family. The largest families (by members; ties by their order in `families`)
  * get the colours of FAMILY_COLOURS with their names in the legend, the other families one
  * grey, the bodies outside every family a light grey under everything else; the outliers are
- * drawn on top as open black diamonds, named when there are few of them.
+ * open black diamonds (smaller when many), named when there are few of them.
  *
  * What is drawn, for any catalogue size (each said in the subtitle):
  * - bodies outside every family: at most `maxBackground`, evenly spaced in the order given
@@ -52,6 +52,11 @@ export const MAP_MERGE_CELL_PX = 1;
 /** Symbol area of family members in px²: radius √(9/π) ≈ 1.69 px, above the cell's diagonal √2 (cellMerge.ts). */
 const MEMBER_SYMBOL_AREA_PX2 = 9;
 const BACKGROUND_SYMBOL_AREA_PX2 = 6;
+
+/** Symbol area of the outliers' diamonds in px²: smaller as they grow many, so they do not cover the map (our choice). */
+export function outlierSymbolAreaPx2(outliers: number): number {
+  return outliers <= 100 ? 50 : outliers <= 1000 ? 24 : 12;
+}
 
 function checkInput(input: ProperElementMapInput): void {
   const n = input.aAu.length;
@@ -138,21 +143,24 @@ export function properElementMapChart(input: ProperElementMapInput): TopLevelSpe
     field: 'c', type: 'nominal', title: 'family (members)',
     scale: { domain: shown.map((c) => classLabel[c]), range: shown.map((c) => classColour[c]) },
   } as const;
-  const layer: object[] = [
-    { data: { values: bgKeep.map(row) }, mark: { type: 'point', filled: true, size: BACKGROUND_SYMBOL_AREA_PX2, opacity: 1, aria: false }, encoding: { x, y, color: colour } },
-    { data: { values: memberKeep.map(row) }, mark: { type: 'point', filled: true, size: MEMBER_SYMBOL_AREA_PX2, opacity: 1, aria: false }, encoding: { x, y, color: colour } },
-  ];
   const outRows = input.outliers
     .map((i, t) => ({ a: input.aAu[i], y: input.y[i], h: input.outlierLegend, d: input.outlierDesignations[t] }))
     .filter((r) => Number.isFinite(r.a) && Number.isFinite(r.y));
   const labelled = outRows.length > 0 && outRows.length <= (input.maxLabels ?? MAP_MAX_LABELS);
+  const symbols = (rows: object[], area: number) =>
+    ({ data: { values: rows }, mark: { type: 'point', filled: true, size: area, opacity: 1, aria: false }, encoding: { x, y, color: colour } });
+  // Outliers under the family members: outliers lie outside every family, so only when they
+  // are many (crowding the map) do their symbols reach a family, which stays visible.
+  const layer: object[] = [symbols(bgKeep.map(row), BACKGROUND_SYMBOL_AREA_PX2)];
   if (outRows.length > 0) {
+    const area = outlierSymbolAreaPx2(outRows.length);
     layer.push({
       data: { values: outRows },
-      mark: { type: 'point', filled: false, color: 'black', size: 50, strokeWidth: 1.2, opacity: 1, aria: false },
+      mark: { type: 'point', filled: false, color: 'black', size: area, strokeWidth: area >= 50 ? 1.2 : 0.7, opacity: 1, aria: false },
       encoding: { x, y, shape: { field: 'h', type: 'nominal', title: '', scale: { domain: [input.outlierLegend], range: ['diamond'] } } },
     });
   }
+  layer.push(symbols(memberKeep.map(row), MEMBER_SYMBOL_AREA_PX2));
   if (labelled) {
     layer.push({
       data: { values: outRows },
