@@ -75,7 +75,7 @@ function stressInput(n: number): { base: Omit<ProperElementMapInput, 'element' |
   for (; i < n; i++) { a[i] = 2.1 + 1.2 * r(); e[i] = 0.3 * r(); sinI[i] = 0.3 * r(); if (r() < 0.01) outliers.push(i); }
   return {
     base: { aAu: a, family, families: sizes.map((members, f) => ({ label: `Family ${f + 1}`, members })), outliers,
-      outlierDesignations: outliers.map((k) => `X${k}`), outlierLegend: 'outlier (false-alarm prob. < 0.01)', bodiesNoun: 'synthetic bodies' },
+      outlierDesignations: outliers.map((k) => `X${k}`), outlierLegend: 'outlier (false-alarm prob. < 0.01)', bodiesNoun: ['synthetic body', 'synthetic bodies'] },
     e, sinI,
   };
 }

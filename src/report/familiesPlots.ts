@@ -39,7 +39,7 @@ export function familiesMapInput(cat: Catalogue, analysis: FamiliesAnalysis, fap
   const untrusted = analysis.screen.notScreened['proper-unreliable'];
   return {
     aAu: analysis.a, family, families, outliers, outlierDesignations,
-    bodiesNoun: 'screened bodies',
+    bodiesNoun: ['screened body', 'screened bodies'],
     outlierLegend: `outlier (false-alarm prob. < ${fapThreshold})`,
     notes: untrusted > 0 ? [`${untrusted} ${untrusted === 1 ? 'body' : 'bodies'} with untrusted proper elements not drawn (unreliable.csv)`] : [],
   };

@@ -131,6 +131,11 @@ describe('proper-element map', () => {
     expect(many / few).toBeCloseTo(Math.sqrt(24 / 50), 2); // areas 50 and 24 px²: widths as their square roots
   });
 
+  it('says "body" of one body, and names what the bodies are when told', () => {
+    const one = properElementMapChart({ ...belt(0), aAu: [2.5], y: [0.1], family: [-1], bodiesNoun: ['screened body', 'screened bodies'] });
+    expect((one as { title: { text: string } }).title.text).toBe('Proper a–e of 1 screened body');
+  });
+
   it('refuses inconsistent input (caller misuse)', () => {
     expect(() => properElementMapChart({ ...input, y: [0.1] })).toThrow(RangeError);
     expect(() => properElementMapChart({ ...input, outlierDesignations: [] })).toThrow(/designations/);

@@ -34,7 +34,7 @@ export interface ProperElementMapInput {
   outliers: readonly number[]; // bodies drawn as outliers (indices, ascending)
   outlierDesignations: readonly string[]; // one per outlier, for the labels
   outlierLegend: string; // legend entry of the outliers, e.g. 'outlier (false-alarm prob. < 0.01)'
-  bodiesNoun?: string; // what the bodies are, for the title; default 'bodies' (e.g. 'screened bodies')
+  bodiesNoun?: readonly [string, string]; // what the bodies are, one and many, for the title; default ['body', 'bodies']
   notes?: readonly string[]; // more subtitle lines from the caller (e.g. bodies left out and why)
   maxBackground?: number; // default MAP_MAX_BACKGROUND
   colouredFamilies?: number; // default FAMILY_COLOURS.length (the most there are colours for)
@@ -179,7 +179,7 @@ export function properElementMapChart(input: ProperElementMapInput): TopLevelSpe
   ].filter((s) => s !== '');
   return {
     $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
-    title: { text: `Proper a–${input.element} of ${n - unplaced} ${input.bodiesNoun ?? 'bodies'}`, subtitle: notes },
+    title: { text: `Proper a–${input.element} of ${count(n - unplaced, ...(input.bodiesNoun ?? ['body', 'bodies']))}`, subtitle: notes },
     width: MAP_WIDTH_PX,
     height: MAP_HEIGHT_PX,
     config: { legend: { labelLimit: 0 } }, // legend labels in full (Vega's default cuts at 160 px)
