@@ -2,7 +2,8 @@
  * Writes the demo asteroid file (one-line orbit export format): header, then the numbered,
  * multi-opposition and one-opposition blocks of natural bodies with the planted bodies and
  * bad rows inserted at random places, then a block of older re-submitted orbits (duplicate
- * designations). Streams: natural rows are drawn, written and forgotten, so 1.5 M rows
+ * designations). The natural rows come from a stream of their own (spec.naturalRandom), so
+ * the same bodies can be drawn ahead of writing (naturalTrusted.ts). Streams: natural rows are drawn, written and forgotten, so 1.5 M rows
  * need no more memory than 20 000. One scratch OrbitRow, DemoElements and DemoQuality serve
  * every natural row.
  */
@@ -15,11 +16,12 @@ import type { DesignationAllocator } from './designations.js';
 import { planDuplicate } from './duplicates.js';
 import { asteroidFileHeader } from './header.js';
 import { LineWriter } from './lineWriter.js';
-import { fillAsteroidRow, roundAsteroidElements } from './orbitRows.js';
+import type { FamiliesTruthWriter } from './familiesTruthTable.js';
+import { drawNaturalRow } from './naturalRows.js';
+import { fillAsteroidRow } from './orbitRows.js';
 import type { PlantedAsteroid } from './plantedAsteroids.js';
 import type { CoorbitalTruthRow } from './coorbitalTruthTable.js';
-import { pickAsteroidClass, sampleNaturalAsteroid } from './population.js';
-import { sampleQuality } from './quality.js';
+import { emptyNaturalPlant, type NaturalPlant, type PopulationContext } from './population.js';
 import type { Random } from './random.js';
 import { uniformInt } from './random.js';
 import type { Section } from './scenario.js';
@@ -31,12 +33,14 @@ import { emptyElements, emptyQuality } from './types.js';
 export interface AsteroidFileSpec {
   path: string;
   seed: number;
-  random: Random;
+  random: Random; // plants' places, bad rows, duplicates
+  naturalRandom: Random; // the natural rows only (naturalRows.ts), so they can be drawn again ahead
+  population: PopulationContext;
+  familiesTruth: FamiliesTruthWriter | null; // families-truth.csv, appended to
   bodies: number; // natural rows (planted, bad and duplicate rows come on top)
   plants: readonly PlantedAsteroid[];
   badRows: boolean;
   duplicates: number;
-  jupiterLambdaDeg: number;
   allocator: DesignationAllocator;
   truth: TruthRow[]; // appended to
   classCounts: Record<string, number>; // natural rows per class, appended to
@@ -101,13 +105,6 @@ function truthOf(file: TruthRow['file'], w: Written, cls: string, detector: stri
   };
 }
 
-function drawNatural(spec: AsteroidFileSpec, section: Section, el: DemoElements, q: DemoQuality, count: boolean): void {
-  const cls = pickAsteroidClass(spec.random, section);
-  sampleNaturalAsteroid(spec.random, cls, section, spec.jupiterLambdaDeg, el);
-  roundAsteroidElements(el);
-  sampleQuality(spec.random, section, el.H, q);
-  if (count) spec.classCounts[cls] = (spec.classCounts[cls] ?? 0) + 1;
-}
 
 function writeSpecial(spec: AsteroidFileSpec, w: LineWriter, row: OrbitRow, s: Special, section: Section): void {
   if (s.kind === 'plant') {
@@ -115,6 +112,7 @@ function writeSpecial(spec: AsteroidFileSpec, w: LineWriter, row: OrbitRow, s: S
     const written = writeBody(spec, w, row, p.el, p.q, section);
     spec.truth.push(truthOf('orbits.txt', written, p.plantedClass, p.detector, p.el, p.note));
     if (p.coorbital) spec.coorbitals.push({ designation: written.designation, line: written.line, plant: p.coorbital });
+    if (p.outlier) spec.familiesTruth?.outlier(written.designation, written.line, p.el.H, p.outlier);
   } else if (s.kind === 'bad') {
     if (s.bad === 'garbage') {
       const line = w.write(spoilLine('garbage', ''));
@@ -123,7 +121,7 @@ function writeSpecial(spec: AsteroidFileSpec, w: LineWriter, row: OrbitRow, s: S
     }
     const el = emptyElements();
     const q = emptyQuality();
-    drawNatural(spec, section, el, q, false);
+    drawNaturalRow(spec.random, section, spec.population, el, q, emptyNaturalPlant());
     const designation = fillNewBody(spec, row, el, q, section);
     const line = w.write(spoilLine(s.bad, formatOrbitExportLine(row)));
     spec.truth.push(truthOf('orbits.txt', { designation, line }, 'bad-row', 'clean', null, s.reason));
@@ -153,6 +151,7 @@ export function writeAsteroidFile(spec: AsteroidFileSpec, populationOnly: boolea
   const row = emptyOrbitRow();
   const el = emptyElements();
   const q = emptyQuality();
+  const plant: NaturalPlant = emptyNaturalPlant();
   const duplicateSources: DuplicateSource[] = [];
   for (const line of asteroidFileHeader(spec.seed, packEpochJd(DEMO_EPOCH_JD_TT), populationOnly)) w.write(line);
   SECTIONS.forEach((section, k) => {
@@ -167,8 +166,10 @@ export function writeAsteroidFile(spec: AsteroidFileSpec, populationOnly: boolea
         else writeSpecial(spec, w, row, s, section);
       }
       if (j === sizes[section]) break;
-      drawNatural(spec, section, el, q, true);
+      const cls = drawNaturalRow(spec.naturalRandom, section, spec.population, el, q, plant);
+      spec.classCounts[cls] = (spec.classCounts[cls] ?? 0) + 1;
       const written = writeBody(spec, w, row, el, q, section);
+      spec.familiesTruth?.natural(written.designation, written.line, el.H, plant);
       if (dupHere) duplicateSources.push({ written, el: { ...el }, q: { ...q } });
     }
   });

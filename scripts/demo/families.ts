@@ -1,47 +1,69 @@
 /**
- * Asteroid families of the demo main belt. Centres and ranges of proper a, e, i are taken
- * from Nesvorný (2015), "Nesvorny HCM Asteroid Families V3.0", NASA Planetary Data System
- * (the table /work/shared/data/families-2015.json: a_center_au, e_center, i_center_deg and
- * the min/max ranges), for six families chosen for their spread over the belt. The demo
- * places members with osculating elements equal to proper elements plus small noise, so
- * that families stay tight clusters; real osculating elements scatter more (forced terms).
+ * The demo's own asteroid families: invented break-ups at invented places of the main belt,
+ * in zones where the families stage trusts the linear secular theory (away from the
+ * mean-motion bands of src/core/secular/meanMotionResonances.ts and the secular-resonance
+ * divisors of reliability.ts; between 2.1 and 3.58 au the trusted a zones at the demo epoch
+ * are 2.099–2.249, 2.265–2.413, 2.425–2.471, 2.531–2.799, 2.849–2.945, 2.969–3.024,
+ * 3.036–3.069, 3.081–3.227 and 3.327–3.574 au, measured with the stage's own kernel at
+ * e = 0.1, i = 0.05 rad), and where no family of the bundled published list has its ranges
+ * (test/demo/demoFamilies.test.ts checks both).
+ *
+ * A member's proper elements: the parent's plus the Gauss-equation change of an isotropic
+ * ejection velocity (breakup.ts), each component normal with σ = `sigmaMPerS` (a Maxwellian
+ * speed), σ of order a parent's escape speed, 15–60 m/s (our choice per family), plus a
+ * Yarkovsky drift in a since the break-up (yarkovsky.ts). Then osculating elements from the
+ * planets' forced vectors (properToOsculating.ts).
  */
+import { DEG_PER_RAD } from '../../src/core/constants.js';
+import { gaussChange, type GaussChange } from './breakup.js';
+import type { ProperPlant } from './properToOsculating.js';
 import type { Random } from './random.js';
-import { normal, uniform, uniformAngleDeg } from './random.js';
-import type { DemoElements } from './types.js';
+import { normal } from './random.js';
+import { yarkovskyDriftAu } from './yarkovsky.js';
 
 export interface DemoFamily {
-  name: string;
-  weight: number; // relative share of family members
-  aMinAu: number;
-  aMaxAu: number;
-  eCentre: number;
-  eHalfWidth: number;
-  iCentreDeg: number;
-  iHalfWidthDeg: number;
+  id: string; // id in families-truth.csv
+  name: string; // invented
+  weight: number; // relative share of family members (expected members in the 20 000-body demo ≈ weight)
+  aAu: number; e: number; sinI: number; // parent's proper elements at the break-up
+  sigmaMPerS: number; // σ of each ejection-velocity component
+  trueAnomalyDeg: number; // f at the break-up
+  argLatitudeDeg: number; // ω + f at the break-up
+  albedo: number; // geometric albedo p_V, for D from H
+  ageMyr: number; // time since the break-up (Yarkovsky drift)
 }
 
-/** Nesvorný (2015) rows 401 Vesta, 502 Eunomia, 602 Themis, 605 Koronis, 606 Eos, 610 Karin. */
+/** Invented; every number is our choice (see the file comment for the constraints). */
 export const DEMO_FAMILIES: readonly DemoFamily[] = [
-  { name: 'Vesta', weight: 3, aMinAu: 2.2407, aMaxAu: 2.4897, eCentre: 0.104, eHalfWidth: 0.0294, iCentreDeg: 6.56, iHalfWidthDeg: 1.19 },
-  { name: 'Eunomia', weight: 1.5, aMinAu: 2.5257, aMaxAu: 2.7102, eCentre: 0.1498, eHalfWidth: 0.0249, iCentreDeg: 13.105, iHalfWidthDeg: 1.095 },
-  { name: 'Themis', weight: 1.5, aMinAu: 3.019, aMaxAu: 3.2398, eCentre: 0.1489, eHalfWidth: 0.0374, iCentreDeg: 1.49, iHalfWidthDeg: 0.83 },
-  { name: 'Koronis', weight: 1.5, aMinAu: 2.8273, aMaxAu: 2.9638, eCentre: 0.0615, eHalfWidth: 0.0386, iCentreDeg: 2.095, iHalfWidthDeg: 0.495 },
-  { name: 'Eos', weight: 2, aMinAu: 2.9533, aMaxAu: 3.1549, eCentre: 0.0683, eHalfWidth: 0.0387, iCentreDeg: 10.065, iHalfWidthDeg: 1.355 },
-  { name: 'Karin', weight: 0.3, aMinAu: 2.8575, aMaxAu: 2.8755, eCentre: 0.0445, eHalfWidth: 0.0028, iCentreDeg: 2.08, iHalfWidthDeg: 0.06 },
+  { id: 'A', name: 'Demo family A', weight: 260, aAu: 2.175, e: 0.085, sinI: 0.14, sigmaMPerS: 20, trueAnomalyDeg: 90, argLatitudeDeg: 50, albedo: 0.25, ageMyr: 40 },
+  { id: 'B', name: 'Demo family B', weight: 180, aAu: 2.345, e: 0.17, sinI: 0.155, sigmaMPerS: 35, trueAnomalyDeg: 60, argLatitudeDeg: 120, albedo: 0.2, ageMyr: 25 },
+  { id: 'C', name: 'Demo family C', weight: 380, aAu: 2.68, e: 0.06, sinI: 0.14, sigmaMPerS: 50, trueAnomalyDeg: 120, argLatitudeDeg: 30, albedo: 0.07, ageMyr: 60 },
+  { id: 'D', name: 'Demo family D', weight: 110, aAu: 2.897, e: 0.19, sinI: 0.087, sigmaMPerS: 15, trueAnomalyDeg: 100, argLatitudeDeg: 80, albedo: 0.22, ageMyr: 10 },
+  { id: 'E', name: 'Demo family E', weight: 220, aAu: 3.15, e: 0.05, sinI: 0.245, sigmaMPerS: 40, trueAnomalyDeg: 75, argLatitudeDeg: 150, albedo: 0.06, ageMyr: 50 },
+  { id: 'F', name: 'Demo family F', weight: 90, aAu: 3.4, e: 0.06, sinI: 0.07, sigmaMPerS: 25, trueAnomalyDeg: 140, argLatitudeDeg: 20, albedo: 0.05, ageMyr: 20 },
 ];
 
 export const FAMILY_WEIGHTS: readonly number[] = DEMO_FAMILIES.map((f) => f.weight);
 
-/**
- * A family member: a uniform in the family's range, e and i normal about the centre with
- * σ = half-width / 2 (so ~95 % fall inside the published range). Angles uniform.
- */
-export function sampleFamilyMember(random: Random, family: DemoFamily, out: DemoElements): void {
-  out.aAu = uniform(random, family.aMinAu, family.aMaxAu);
-  out.e = Math.max(0.001, normal(random, family.eCentre, family.eHalfWidth / 2));
-  out.iDeg = Math.max(0.01, normal(random, family.iCentreDeg, family.iHalfWidthDeg / 2));
-  out.nodeDeg = uniformAngleDeg(random);
-  out.periDeg = uniformAngleDeg(random);
-  out.meanAnomalyDeg = uniformAngleDeg(random);
+/** What a member was given, for families-truth.csv. */
+export interface MemberDraw {
+  ejectionMPerS: number; // |δV|
+  yarkovskyAu: number; // drift in a since the break-up
+  diameterKm: number;
+}
+
+const change: GaussChange = { daAu: NaN, de: NaN, diRad: NaN };
+
+/** A member's proper elements into `proper`; H must be known (it sets D for the drift). */
+export function sampleFamilyMember(random: Random, family: DemoFamily, H: number, proper: ProperPlant, draw: MemberDraw): void {
+  const vr = normal(random, 0, family.sigmaMPerS), vt = normal(random, 0, family.sigmaMPerS), vw = normal(random, 0, family.sigmaMPerS);
+  gaussChange(family.aAu, family.e, family.trueAnomalyDeg / DEG_PER_RAD, family.argLatitudeDeg / DEG_PER_RAD, vr, vt, vw, change);
+  const yark = yarkovskyDriftAu(random, H, family.albedo, family.ageMyr);
+  const iParent = Math.asin(family.sinI);
+  proper.aAu = family.aAu + change.daAu + yark.driftAu;
+  proper.e = Math.abs(family.e + change.de);
+  proper.sinI = Math.abs(Math.sin(iParent + change.diRad));
+  draw.ejectionMPerS = Math.hypot(vr, vt, vw);
+  draw.yarkovskyAu = yark.driftAu;
+  draw.diameterKm = yark.diameterKm;
 }

@@ -1,54 +1,20 @@
 /**
- * Samplers of the inner-solar-system asteroid classes: main belt (with Kirkwood gaps),
- * Hungarias, Mars-crossers and near-Earth objects (Apollo, Aten, Amor). Shapes are the
+ * Samplers of the inner-solar-system asteroid classes drawn in osculating elements:
+ * Hungarias, Mars-crossers and near-Earth objects (Apollo, Aten, Amor). The main belt is
+ * drawn in proper elements (mainBeltBackground.ts). Shapes are the
  * common practice of the trade; the numbers (ranges, scales) are from memory and only need
  * to look like the real belt, not to match it.
  * Class boundaries (common practice): NEO q < 1.3 au; Apollo a > 1 au, q < 1.017 au;
  * Aten a < 1 au, Q > 0.983 au; Amor 1.017 < q < 1.3 au; Mars-crosser 1.3 < q < 1.666 au.
  */
 import type { Random } from './random.js';
-import { normal, pickWeighted, rayleigh, uniform, uniformAngleDeg } from './random.js';
+import { rayleigh, uniform, uniformAngleDeg } from './random.js';
 import type { DemoElements } from './types.js';
-
-/** Kirkwood gaps (mean-motion resonances with Jupiter): centre and half-width, au. */
-const KIRKWOOD_GAPS: readonly (readonly [number, number])[] = [
-  [2.502, 0.012], // 3:1
-  [2.825, 0.008], // 5:2
-  [2.958, 0.006], // 7:3
-  [3.279, 0.02], // 2:1
-];
-
-/** Main-belt a ranges (inner, middle, pristine, outer, Cybele) and their weights. */
-const BELT_ZONES: readonly (readonly [number, number])[] = [
-  [2.1, 2.5], [2.5, 2.82], [2.82, 2.96], [2.96, 3.26], [3.3, 3.6],
-];
-const BELT_ZONE_WEIGHTS = [0.32, 0.3, 0.08, 0.27, 0.03];
-
-export function inKirkwoodGap(aAu: number): boolean {
-  for (const [centre, half] of KIRKWOOD_GAPS) if (Math.abs(aAu - centre) < half) return true;
-  return false;
-}
 
 function randomAngles(random: Random, out: DemoElements): void {
   out.nodeDeg = uniformAngleDeg(random);
   out.periDeg = uniformAngleDeg(random);
   out.meanAnomalyDeg = uniformAngleDeg(random);
-}
-
-/** Main-belt background: q ≥ 1.666 au, a outside the gaps, e ~ |N(0.13, 0.07)|, i Rayleigh 7°. */
-export function sampleMainBelt(random: Random, out: DemoElements): void {
-  let a = NaN;
-  do {
-    const zone = BELT_ZONES[pickWeighted(random, BELT_ZONE_WEIGHTS)];
-    a = uniform(random, zone[0], zone[1]);
-  } while (inKirkwoodGap(a));
-  let e = NaN;
-  do e = Math.abs(normal(random, 0.13, 0.07));
-  while (e > 0.35 || a * (1 - e) < 1.666);
-  out.aAu = a;
-  out.e = e;
-  out.iDeg = Math.min(rayleigh(random, 7), 35);
-  randomAngles(random, out);
 }
 
 /** Hungarias: a 1.78–2.0 au, e 0.02–0.18, i 16–34°. */

@@ -5,8 +5,7 @@
  * poor ones among one-opposition orbits.
  */
 import type { CoorbitalPlant } from './coorbitalPlan.js';
-import type { OutlierVariant } from './plantedOutliers.js';
-import { sampleFamilyOutlier } from './plantedOutliers.js';
+import type { OutlierPlant } from './plantedOutliers.js';
 import type { CometLikeVariant } from './plantedTisserand.js';
 import { sampleBoundaryAsteroid, sampleCometLikeAsteroid } from './plantedTisserand.js';
 import { samplePoorQuality, sampleQuality } from './quality.js';
@@ -24,6 +23,7 @@ export interface PlantedAsteroid {
   q: DemoQuality;
   note: string;
   coorbital?: CoorbitalPlant; // a co-orbital plant or control, with its judgement (coorbital-truth.csv)
+  outlier?: OutlierPlant; // a planted isolated body in proper elements (families-truth.csv)
 }
 
 const COMET_LIKE_PLAN: readonly (readonly [CometLikeVariant, boolean])[] = [
@@ -31,10 +31,6 @@ const COMET_LIKE_PLAN: readonly (readonly [CometLikeVariant, boolean])[] = [
   ...Array.from({ length: 5 }, () => ['ordinary', true] as const),
   ...Array.from({ length: 5 }, () => ['high-inclination', false] as const),
   ['retrograde', false], ['retrograde', false],
-];
-const OUTLIER_PLAN: readonly OutlierVariant[] = [
-  'isolated-high-inclination', 'isolated-high-inclination', 'unusual-eccentricity',
-  'kirkwood-gap', 'family-halo', 'family-halo',
 ];
 
 function goodSection(random: Random): Section {
@@ -73,7 +69,7 @@ function coorbitalNote(c: CoorbitalPlant): string {
 }
 
 /** Every planted asteroid-file body, in a fixed order (deterministic for a seed). */
-export function planAsteroidPlants(random: Random, coorbitals: readonly CoorbitalPlant[]): PlantedAsteroid[] {
+export function planAsteroidPlants(random: Random, coorbitals: readonly CoorbitalPlant[], outliers: readonly OutlierPlant[]): PlantedAsteroid[] {
   const out: PlantedAsteroid[] = [];
   for (const [variant, poor] of COMET_LIKE_PLAN) {
     const el = emptyElements();
@@ -89,10 +85,9 @@ export function planAsteroidPlants(random: Random, coorbitals: readonly Coorbita
     const p = finish(random, coorbitalClass(c), 'coorbital', false, { ...c.el }, coorbitalNote(c));
     out.push({ ...p, coorbital: c });
   }
-  OUTLIER_PLAN.forEach((variant, k) => {
-    const el = emptyElements();
-    sampleFamilyOutlier(random, variant, k, el);
-    out.push(finish(random, 'family-outlier', 'families', false, el, `main-belt body away from every family (${variant})`));
-  });
+  for (const o of outliers) {
+    const note = `main-belt body isolated in proper elements: nearest drawn body ${o.nearestMPerS.toFixed(0)} m/s, 8th nearest ${o.eighthMPerS.toFixed(0)} m/s (families-truth.csv)`;
+    out.push({ ...finish(random, 'family-outlier', 'families', false, { ...o.el }, note), outlier: o });
+  }
   return out;
 }

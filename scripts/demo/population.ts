@@ -3,12 +3,18 @@
  * magnitude laws, and the honest-truth rule that keeps unplanted bodies off the Tisserand
  * detector's list (a < 4.8 au outside the Trojan and Hilda zones ⇒ T_J ≥ 3.10).
  * Shares are chosen to show every class in a 20 000-body demo (rare classes are boosted
- * over their real shares); they are not a model of the real catalogue.
+ * over their real shares); they are not a model of the real catalogue. The main-belt
+ * background and the family members are drawn in proper elements (mainBeltBackground.ts,
+ * families.ts) and given osculating elements through the planets' forced vectors
+ * (properToOsculating.ts); the other classes are drawn in osculating elements.
  */
-import { DEMO_FAMILIES, FAMILY_WEIGHTS, sampleFamilyMember } from './families.js';
+import { DEMO_FAMILIES, FAMILY_WEIGHTS, sampleFamilyMember, type MemberDraw } from './families.js';
 import {
-  sampleAmor, sampleApollo, sampleAten, sampleHungaria, sampleMainBelt, sampleMarsCrosser,
+  sampleAmor, sampleApollo, sampleAten, sampleHungaria, sampleMarsCrosser,
 } from './innerPopulation.js';
+import { sampleBackgroundProper } from './mainBeltBackground.js';
+import { properToOsculating, type ProperPlant } from './properToOsculating.js';
+import type { DemoSecularField } from './secularForced.js';
 import { samplePowerLawH } from './magnitudes.js';
 import { sampleCentaur, sampleHilda, sampleJupiterTrojan, sampleTno } from './outerPopulation.js';
 import type { Random } from './random.js';
@@ -24,9 +30,9 @@ export const ASTEROID_CLASSES: readonly AsteroidClass[] = [
 
 /** Class weights per section, in ASTEROID_CLASSES order (one-opposition: more NEOs). */
 const SECTION_CLASS_WEIGHTS: Readonly<Record<Section, readonly number[]>> = {
-  numbered: [70, 14, 2, 1.5, 4, 1, 0.2, 0.8, 3, 0.3, 3.2],
-  multiOpposition: [68, 10, 2, 1.5, 4, 2.5, 0.4, 1.6, 3, 0.7, 6.3],
-  oneOpposition: [62, 4, 1, 1, 3, 12, 2, 6, 3, 1, 5],
+  numbered: [77.3, 6.7, 2, 1.5, 4, 1, 0.2, 0.8, 3, 0.3, 3.2],
+  multiOpposition: [72.5, 5.5, 2, 1.5, 4, 2.5, 0.4, 1.6, 3, 0.7, 6.3],
+  oneOpposition: [63, 3, 1, 1, 3, 12, 2, 6, 3, 1, 5],
 };
 
 /** Power-law H range [min, max] and slope α per class (from memory, see magnitudes.ts). */
@@ -48,33 +54,73 @@ export function pickAsteroidClass(random: Random, section: Section): AsteroidCla
   return ASTEROID_CLASSES[pickWeighted(random, SECTION_CLASS_WEIGHTS[section])];
 }
 
-function sampleOnce(random: Random, cls: AsteroidClass, jupiterLambdaDeg: number, out: DemoElements): void {
+/** What a natural main-belt or family body was planted as (families-truth.csv); role '' for other classes. */
+export interface NaturalPlant {
+  role: '' | 'background' | 'family member';
+  family: number; // index into DEMO_FAMILIES, −1 for none
+  proper: ProperPlant; // planted proper elements
+  member: MemberDraw; // ejection speed, Yarkovsky drift, D (family members)
+}
+
+export function emptyNaturalPlant(): NaturalPlant {
+  return {
+    role: '', family: -1, proper: { aAu: NaN, e: NaN, sinI: NaN },
+    member: { ejectionMPerS: NaN, yarkovskyAu: NaN, diameterKm: NaN },
+  };
+}
+
+/** What the samplers need besides the random stream. */
+export interface PopulationContext {
+  jupiterLambdaDeg: number;
+  field: DemoSecularField; // the planets' secular field at the epoch
+}
+
+function clearPlant(plant: NaturalPlant): void {
+  plant.role = ''; plant.family = -1;
+  plant.member.ejectionMPerS = NaN; plant.member.yarkovskyAu = NaN; plant.member.diameterKm = NaN;
+}
+
+/** False when the draw must be repeated (forced vectors undefined at that a). */
+function sampleOnce(random: Random, cls: AsteroidClass, ctx: PopulationContext, out: DemoElements, plant: NaturalPlant): boolean {
+  clearPlant(plant);
   switch (cls) {
-    case 'main-belt': return sampleMainBelt(random, out);
-    case 'family': return sampleFamilyMember(random, DEMO_FAMILIES[pickWeighted(random, FAMILY_WEIGHTS)], out);
-    case 'hungaria': return sampleHungaria(random, out);
-    case 'hilda': return sampleHilda(random, jupiterLambdaDeg, out);
-    case 'jupiter-trojan': return sampleJupiterTrojan(random, jupiterLambdaDeg, out);
-    case 'apollo': return sampleApollo(random, out);
-    case 'aten': return sampleAten(random, out);
-    case 'amor': return sampleAmor(random, out);
-    case 'mars-crosser': return sampleMarsCrosser(random, out);
-    case 'centaur': return sampleCentaur(random, out);
-    case 'tno': return sampleTno(random, out);
+    case 'main-belt':
+      plant.role = 'background';
+      sampleBackgroundProper(random, plant.proper);
+      return properToOsculating(random, ctx.field, plant.proper, out);
+    case 'family': {
+      plant.role = 'family member';
+      plant.family = pickWeighted(random, FAMILY_WEIGHTS);
+      sampleFamilyMember(random, DEMO_FAMILIES[plant.family], out.H, plant.proper, plant.member);
+      return properToOsculating(random, ctx.field, plant.proper, out);
+    }
+    case 'hungaria': sampleHungaria(random, out); return true;
+    case 'hilda': sampleHilda(random, ctx.jupiterLambdaDeg, out); return true;
+    case 'jupiter-trojan': sampleJupiterTrojan(random, ctx.jupiterLambdaDeg, out); return true;
+    case 'apollo': sampleApollo(random, out); return true;
+    case 'aten': sampleAten(random, out); return true;
+    case 'amor': sampleAmor(random, out); return true;
+    case 'mars-crosser': sampleMarsCrosser(random, out); return true;
+    case 'centaur': sampleCentaur(random, out); return true;
+    case 'tno': sampleTno(random, out); return true;
   }
 }
 
 /**
- * Elements and H of one natural body of a class, resampled until the honest-truth rule
- * holds. Fails loudly (with the last sample) if a class cannot satisfy it.
+ * H, then elements of one natural body of a class, resampled until the honest-truth rule
+ * holds (H is kept: it only sets a family member's Yarkovsky drift). Fails loudly (with the
+ * last sample) if a class cannot satisfy it.
  */
 export function sampleNaturalAsteroid(
-  random: Random, cls: AsteroidClass, section: Section, jupiterLambdaDeg: number, out: DemoElements,
+  random: Random, cls: AsteroidClass, section: Section, ctx: PopulationContext, out: DemoElements, plant: NaturalPlant,
 ): void {
+  const [hMin, hMax, alpha] = H_LAW[cls];
+  const shift = section === 'oneOpposition' ? ONE_OPPOSITION_H_SHIFT : 0;
+  out.H = samplePowerLawH(random, hMin + shift, hMax + shift, alpha);
   for (let k = 0; k < MAX_TRIES; k++) {
-    sampleOnce(random, cls, jupiterLambdaDeg, out);
-    if (!asteroidRuleApplies(out.aAu, out.e)) break;
-    if (tisserandJupiter(out.aAu, out.e, out.iDeg) >= NATURAL_ASTEROID_MIN_TJ) break;
+    const drawn = sampleOnce(random, cls, ctx, out, plant);
+    if (drawn && !asteroidRuleApplies(out.aAu, out.e)) break;
+    if (drawn && tisserandJupiter(out.aAu, out.e, out.iDeg) >= NATURAL_ASTEROID_MIN_TJ) break;
     if (k === MAX_TRIES - 1) {
       throw new Error(
         `sampleNaturalAsteroid: class ${cls} gave no orbit with T_J ≥ ${NATURAL_ASTEROID_MIN_TJ} ` +
@@ -82,7 +128,4 @@ export function sampleNaturalAsteroid(
       );
     }
   }
-  const [hMin, hMax, alpha] = H_LAW[cls];
-  const shift = section === 'oneOpposition' ? ONE_OPPOSITION_H_SHIFT : 0;
-  out.H = samplePowerLawH(random, hMin + shift, hMax + shift, alpha);
 }

@@ -9,6 +9,11 @@ import { DEFAULT_BODIES, DEFAULT_COMETS } from './scenario.js';
 import type { DemoOptions, DemoResult } from './generate.js';
 import { COORBITAL_PLAN } from './coorbitalPlan.js';
 import type { CoorbitalTruthRow } from './coorbitalTruthTable.js';
+import { DEMO_FAMILIES } from './families.js';
+import { BACKGROUND_E_SCALE, BACKGROUND_SIN_I_SCALE } from './mainBeltBackground.js';
+import { MIN_APART_MPS, MIN_NEAREST_MPS } from './plantedOutliers.js';
+import { SHORT_PERIOD_MPS } from './properToOsculating.js';
+import { YARKOVSKY_AU_PER_MYR_1KM } from './yarkovsky.js';
 
 /** The command line that regenerates a demo directory with these options. */
 export function regenerateCommand(opts: DemoOptions): string {
@@ -75,6 +80,50 @@ nothing there circulates once in +-500 years.`
 ${coorbitalTable(result)}`;
 }
 
+function familyTable(result: DemoResult): string {
+  return DEMO_FAMILIES.map((f) => `| ${f.id} | ${f.name} | ${f.aAu.toFixed(3)} | ${f.e.toFixed(3)} | ${f.sinI.toFixed(3)} | ${f.sigmaMPerS} | ` +
+    `${f.trueAnomalyDeg} | ${f.argLatitudeDeg} | ${f.albedo} | ${f.ageMyr} | ${result.familiesTruthCounts[`family member ${f.id}`] ?? 0} |`).join('\n');
+}
+
+function familiesSection(result: DemoResult): string {
+  const o = result.outliers;
+  const nearest = o.length ? Math.min(...o.map((x) => x.nearestMPerS)) : NaN;
+  const eighth = o.length ? Math.min(...o.map((x) => x.eighthMPerS)) : NaN;
+  return `**Families, background and isolated bodies** (the families detector; \`families-truth.csv\`, one row per
+body planted in proper elements, ${result.familiesTruthRows} rows: role, planted family, the proper a, e, sin i as
+planted, H, and for members the diameter, ejection speed and Yarkovsky drift, for isolated bodies the
+distances to the nearest and 8th-nearest drawn body). Everything here is invented: the families, their
+names and places are the demo's own. The main-belt background is one smooth density in proper elements
+(a from three overlapping normal laws about 2.36, 2.76 and 3.08 au, e and sin i from Rayleigh laws of scale
+${BACKGROUND_E_SCALE} and ${BACKGROUND_SIN_I_SCALE}); no gap is carved. Bodies that fall in a mean-motion band, near a secular
+resonance, across Mars's orbit or beyond the theory's e and sin i limits are drawn like the others and
+set apart by the families stage itself (\`unreliable.csv\`): the holes they leave are the stage's, with hard
+edges, and the sparse side of such an edge is where the background's false alarms gather.
+
+Each family is a break-up: every member gets an isotropic ejection velocity (each component normal with
+the family's sigma) turned into changes of a, e and i by Gauss's equations at the break-up's true anomaly
+f and argument of latitude omega + f (Zappala et al. 1996; Morbidelli et al. 1995), plus a Yarkovsky drift
+in a of up to ${YARKOVSKY_AU_PER_MYR_1KM} au/Myr x (1 km / D) x age, D from H and the family's albedo. The
+places are in zones where the secular theory is trusted, and no published family's ranges hold them.
+
+| id | name | a (au) | e | sin i | sigma (m/s) | f (deg) | omega + f (deg) | albedo | age (Myr) | members |
+|---|---|---|---|---|---|---|---|---|---|---|
+${familyTable(result)}
+
+**Osculating elements** of background bodies, members and isolated bodies are their proper elements put
+back through the project's own linear secular theory at the epoch (src/core/secular, the model the
+families stage uses): the free vectors (proper e and sin i at a random phase) plus the planets' forced
+vectors at the body's a, and a small scatter standing in for the short-period terms (normal in a, e and
+sin i, each ${SHORT_PERIOD_MPS} m/s in the families metric, about ${(SHORT_PERIOD_MPS * Math.sqrt(3)).toFixed(0)} m/s in all). Real short-period terms are larger
+(up to ~0.01 au in a and ~0.01 in e in the outer belt), so real families are looser than these.
+
+**${o.length} isolated bodies** (class \`family-outlier\` in truth.csv, role \`outlier\` in families-truth.csv) are
+placed in proper elements in the emptiest places, against every natural body the families stage will
+trust (drawn ahead of writing), inside boxes where the theory is trusted with a margin: each at least
+${MIN_NEAREST_MPS} m/s from every drawn body (here at least ${nearest.toFixed(0)} m/s; the 8th nearest at least ${eighth.toFixed(0)} m/s) and
+${MIN_APART_MPS} m/s from each other. The sparse high-inclination edge of the background is where such places are.`;
+}
+
 export function writeDemoReadme(path: string, opts: DemoOptions, result: DemoResult): void {
   const lon = result.planetLongitudesDeg;
   const text = `# wayward demo catalogue
@@ -87,8 +136,7 @@ provisional comet designations and invented names.
 
 **Scenario.** A catalogue cut on 2032 May 28, all orbits osculating at 2032 May 10.0 TT
 (J2000 ecliptic). \`orbits.txt\` (one-line orbit export format) holds a natural population -
-main belt with six tight families (centres and ranges of Nesvorny 2015, PDS families V3.0),
-Hungarias, Hildas (3:2 with Jupiter), Jupiter Trojans about L4/L5, near-Earth objects
+main belt with ${DEMO_FAMILIES.length} invented asteroid families (below), Hungarias, Hildas (3:2 with Jupiter), Jupiter Trojans about L4/L5, near-Earth objects
 (Apollo, Aten, Amor), Mars-crossers, Centaurs and trans-Neptunian objects - with
 power-law absolute magnitudes and quality fields (observations, oppositions, arc, U, rms,
 last observation) in three blocks: numbered, multi-opposition, one-opposition.
@@ -108,8 +156,9 @@ each planet (Earth-Moon barycentre, Mars, Jupiter, Neptune) from the project's V
 ephemeris state at the epoch, with the planet's heliocentric Kepler constant GM_sun + GM_planet.
 Osculating mean longitudes at the epoch: Earth ${lon.earth.toFixed(4)} deg, Mars ${lon.mars.toFixed(4)} deg,
 Jupiter ${lon.jupiter.toFixed(4)} deg, Neptune ${lon.neptune.toFixed(4)} deg (J2000 ecliptic). Hildas and the
-natural Jupiter Trojans are plausible initial conditions only. Family members have osculating
-elements equal to proper elements plus small noise (real osculating elements scatter more).
+natural Jupiter Trojans are plausible initial conditions only.
+
+${familiesSection(result)}
 
 ${coorbitalSection(result)}
 

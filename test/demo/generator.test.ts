@@ -31,7 +31,7 @@ import { tisserandJupiter } from '../../scripts/demo/tisserand.js';
 
 const SEED = 4242;
 const SMALL = { bodies: 2000, comets: 60 };
-const FILES = ['orbits.txt', 'comets.txt', 'truth.csv', 'coorbital-truth.csv', 'README.md'];
+const FILES = ['orbits.txt', 'comets.txt', 'truth.csv', 'families-truth.csv', 'coorbital-truth.csv', 'README.md'];
 const ROOT = join(import.meta.dirname, '../..');
 
 /**
@@ -108,7 +108,7 @@ describe('determinism', () => {
     expect(readme(dirA)).toContain(`--seed ${SEED} --out OUT --bodies ${SMALL.bodies} --comets ${SMALL.comets}`);
   });
   it('gives different files for a different seed', () => {
-    for (const f of ['orbits.txt', 'comets.txt', 'truth.csv', 'coorbital-truth.csv']) {
+    for (const f of ['orbits.txt', 'comets.txt', 'truth.csv', 'families-truth.csv', 'coorbital-truth.csv']) {
       expect(readFileSync(join(dirC, f)).equals(readFileSync(join(dirA, f))), f).toBe(false);
     }
   });
@@ -146,6 +146,18 @@ describe('every written line is re-read by the project parsers', () => {
       const b = (t.file === 'orbits.txt' ? orbits : comets).get(t.line);
       expect(b?.row?.designation, `${t.file}:${t.line}`).toBe(t.designation);
     }
+  });
+
+  it('families-truth.csv designations are the designations read back at the listed lines, each body once', () => {
+    const orbits = new Map(readBack(join(dirA, 'orbits.txt'), 'orbit').map((b) => [b.line, b]));
+    const rows = parse(readFileSync(join(dirA, 'families-truth.csv')), { columns: true }) as Record<string, string>[];
+    expect(rows.length).toBe(result.familiesTruthRows);
+    expect(new Set(rows.map((r) => r.designation)).size).toBe(rows.length);
+    for (const r of rows) expect(orbits.get(Number(r.line))?.row?.designation, `orbits.txt:${r.line}`).toBe(r.designation);
+    // the isolated bodies are the truth.csv rows of class family-outlier, at the same lines
+    const outliers = result.truth.filter((t) => t.plantedClass === 'family-outlier').map((t) => `${t.designation}:${t.line}`).sort();
+    expect(rows.filter((r) => r.role === 'outlier').map((r) => `${r.designation}:${r.line}`).sort()).toEqual(outliers);
+    expect(outliers.length).toBe(result.outliers.length);
   });
 });
 

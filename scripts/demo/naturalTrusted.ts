@@ -1,0 +1,34 @@
+/**
+ * Look-ahead over the natural rows of the asteroid file: draws them again from a fresh copy
+ * of the natural stream (the same bodies, in the same order, that the file writer will
+ * write) and keeps those whose proper elements the families stage will trust, in the
+ * stage's own scaled coordinates (src/detect/families/outlierMetric.ts). The planted
+ * outliers are placed against these bodies (plantedOutliers.ts).
+ */
+import { scaledProperCoordinates } from '../../src/detect/families/outlierMetric.js';
+import { drawNaturalRow } from './naturalRows.js';
+import { emptyNaturalPlant, type PopulationContext } from './population.js';
+import type { Random } from './random.js';
+import { SECTIONS, type Section } from './scenario.js';
+import type { StageProper } from './secularForced.js';
+import { emptyElements, emptyQuality } from './types.js';
+
+export interface TrustedBodies {
+  count: number;
+  xyz: Float64Array; // scaled coordinates (√(5/4) ln a, √2 e, √2 sin i), interleaved
+}
+
+export function trustedNaturalBodies(random: Random, sizes: Record<Section, number>, ctx: PopulationContext): TrustedBodies {
+  const el = emptyElements(), q = emptyQuality(), plant = emptyNaturalPlant();
+  const p: StageProper = { aAu: NaN, e: NaN, sinI: NaN, code: 0 };
+  const a: number[] = [], e: number[] = [], s: number[] = [];
+  for (const section of SECTIONS) {
+    for (let j = 0; j < sizes[section]; j++) {
+      drawNaturalRow(random, section, ctx, el, q, plant);
+      ctx.field.properOf(el, p);
+      if (p.code !== 0) continue;
+      a.push(p.aAu); e.push(p.e); s.push(p.sinI);
+    }
+  }
+  return { count: a.length, xyz: scaledProperCoordinates(a, e, s) };
+}
