@@ -11,6 +11,7 @@ import { Command } from 'commander';
 import { analyseFamilies, type FamiliesAnalysis } from '../detect/families.js';
 import { FAMILIES_DEFAULTS, type FamiliesOptions } from '../detect/familiesOptions.js';
 import { FAMILIES_NOT_SCREENED } from '../detect/familiesScreen.js';
+import { FAP_EXTRAPOLATED_FLAG } from '../detect/familiesOutliers.js';
 import type { Catalogue, Reject } from '../clean/types.js';
 import { BELT_REGIONS } from '../detect/families/qrlRegion.js';
 import { writeFileAtomic } from '../report/atomicWrite.js';
@@ -34,6 +35,7 @@ export interface FamiliesCliOptions {
   out: string;
   families?: string; // a user's membership list
   fap: number;
+  fdr: number;
   cutoff?: number;
   min: number;
 }
@@ -67,9 +69,22 @@ function jsonText(r: FamiliesCliResult, opts: FamiliesCliOptions): string {
       aAu: f.aAu, e: f.e, sinI: f.sinI,
     })),
     familyMembers: a.clustering.table.reduce((s, f) => s + f.memberCount, 0),
-    outliers: a.candidates.length, nullModel: a.outliers ? a.outliers.nullModel : null,
+    outliers: a.candidates.length, bodiesTested: a.tested, outliersBelowFdr: a.fdrCandidates.length,
+    setApartOccupyingSpace: a.occupying.length,
+    nullModel: a.outliers ? a.outliers.nullModel : null, nullScores: a.outliers ? a.outliers.nullScores : null,
+    nullTailFit: a.outliers ? tailFitRecord(a.outliers) : null,
     unmatchedMembership: a.unmatched.map((m) => ({ designation: m.designation, family: m.family, line: m.line })),
   }, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v), 2) + '\n';
+}
+
+/** The null sample's tail fit as families.json records it. */
+function tailFitRecord(o: NonNullable<FamiliesAnalysis['outliers']>): Record<string, unknown> {
+  const f = o.tail.fit;
+  if (f === null) return { accepted: false, attempts: o.tail.attempts, bestRejectedFitPValue: o.tail.bestRejectedPValue };
+  return {
+    accepted: true, exceedances: f.exceedances, thresholdScore: f.thresholdT, shapeXi: f.gpd.shapeXi, scale: f.gpd.scaleSigma,
+    extrapolatedWithShapeXi: f.extrapolateWith.shapeXi, extrapolatedWithScale: f.extrapolateWith.scaleSigma, fitPValue: f.fitPValue,
+  };
 }
 
 function rowsLine(r: FamiliesCliResult): string {
@@ -88,7 +103,7 @@ function reportText(r: FamiliesCliResult, opts: FamiliesCliOptions, plots: reado
   const a = r.analysis;
   const not = Object.entries(a.screen.notScreened).map(([id, n]) => [`not screened: ${FAMILIES_NOT_SCREENED[id as keyof typeof FAMILIES_NOT_SCREENED]}`, String(n)]);
   const fams = familyRows(a).map((row) => [row[0], row[1], row[2], row[3], row[4], row[5], row[6], row[7], row[8]].map(String));
-  const outl = outlierRows(a).slice(0, 50).map((row) => [row[0], row[1], row[2], row[5], row[6], row[7], row[9] || row[8] || 'none', row[10]].map(String));
+  const outl = outlierRows(a).slice(0, 50).map((row) => [row[0], row[1], row[2], row[3], row[4], row[5], row[8], row[9], row[10], row[12] || row[11] || 'none', row[13]].map(String));
   const cut = BELT_REGIONS.map((name, k) => `${name} ${Number.isFinite(a.clustering.regionCutoffMPerS[k]) ? `${a.clustering.regionCutoffMPerS[k].toFixed(1)} m/s` : 'none (too few bodies)'}`).join(', ');
   return [
     '# wayward families report', '', `> ${SCREENING_CAVEAT}`, '',
@@ -101,27 +116,37 @@ function reportText(r: FamiliesCliResult, opts: FamiliesCliOptions, plots: reado
     `## Families (${a.clustering.table.length})`, '',
     fams.length ? markdownTable(['id', 'name', 'named by', 'region', 'members', 'cutoff (m/s)', 'a (au)', 'e', 'sin i'], fams) : 'None.', '',
     `## Outliers (${a.candidates.length}, false-alarm probability below ${r.options.fapThreshold})`, '',
-    a.outliers ? `${a.outliers.nullModel} The false-alarm probability is the fraction of that null sample scoring at least as high; it holds under this null model only.` : 'Too few bodies screened to score isolation.', '',
-    ...(a.outliers ? [`${multipleTestingNote(a, r.options.fapThreshold)}`, ''] : []),
-    outl.length ? markdownTable(['designation', 'score', 'false-alarm prob.', 'a (au)', 'e', 'sin i', 'nearest family', 'distance (m/s)'], outl) : 'None.',
+    a.outliers ? `${a.outliers.nullModel} ${fapNote(a.outliers)}` : 'Too few bodies screened to score isolation.', '',
+    ...(a.outliers ? [`${multipleTestingNote(a, r.options.fapThreshold, r.options.fdrLevel)}`, ''] : []),
+    outl.length ? markdownTable(['designation', 'score', 'false-alarm prob.', 'from', 'q', `q < ${r.options.fdrLevel}`, 'a (au)', 'e', 'sin i', 'nearest family', 'distance (m/s)'], outl) : 'None.',
     a.candidates.length > 50 ? `\nThe 50 most isolated shown; all ${a.candidates.length} in outliers.csv.` : '', '',
     `## Proper elements not trusted (${a.screen.notScreened['proper-unreliable']})`, '',
-    'Kept out of the clustering and of the outliers\' calibration; each with its reasons in unreliable.csv.', '',
+    `Kept out of the clustering and never scored as outliers; each with its reasons in unreliable.csv. The ${a.occupying.length} of them whose proper elements could be computed still occupy proper-element space in the outliers' stage (neighbours, background density, the null model's kernels), so that setting them apart leaves no hole the null model does not have.`, '',
     ...(opts.families ? [`## Membership list`, '', `${opts.families}: ${r.options.membership?.length ?? 0} lines read, ${r.warnings.length} set aside (rejects.csv), ${a.unmatched.length} naming no catalogue body (families.json).`, ''] : []),
     ...mapsSection(plots),
   ].join('\n');
 }
 
+/** What the false-alarm probability is, and where it is an extrapolation. */
+function fapNote(o: NonNullable<FamiliesAnalysis['outliers']>): string {
+  const f = o.tail.fit;
+  const fit = f === null
+    ? `No generalized Pareto fit to the null sample's upper tail passed its goodness-of-fit check (${o.tail.attempts} tried), so no false-alarm probability is below ${(1 / (o.nullScores + 1)).toPrecision(2)}, the null sample's resolution.`
+    : `Where fewer than 10 of the ${o.nullScores} null scores are as high, it is extrapolated by a generalized Pareto fit to the ${f.exceedances} highest (shape ξ ${f.gpd.shapeXi.toFixed(3)}${f.extrapolateWith.shapeXi !== f.gpd.shapeXi ? ', extrapolated as an exponential tail so as not to be lighter' : ''}; goodness-of-fit p ${f.fitPValue.toFixed(2)}): from "tail fit" and flag ${FAP_EXTRAPOLATED_FLAG}. Below ${(1 / (o.nullScores + 1)).toPrecision(2)}, the null sample's resolution, such a number is a model extrapolation, not a count.`;
+  return `The false-alarm probability is the fraction of that null sample scoring at least as high; it holds under this null model only. ${fit}`;
+}
+
 /**
  * Every body outside the families is tested at once: under the null model about α of them pass
  * the threshold by chance (the expectation of a sum of indicators; common practice), so the
- * count found is read against that number.
+ * count found is read against that number; the Benjamini–Hochberg q-values control the expected
+ * share of false discoveries among those listed at q < Q (Benjamini & Hochberg 1995).
  */
-function multipleTestingNote(a: FamiliesAnalysis, fap: number): string {
-  let tested = 0;
-  for (const label of a.clustering.labels) if (label < 0) tested++;
+function multipleTestingNote(a: FamiliesAnalysis, fap: number, fdr: number): string {
+  const tested = a.tested;
   const expected = fap * tested;
-  return `${tested} bodies outside every family were tested at once: a catalogue drawn from the null model would put about ${expected.toFixed(1)} of them below ${fap} by chance; ${a.candidates.length} found. A count near that number is what the background alone gives.`;
+  return `${tested} bodies outside every family were tested at once: a catalogue drawn from the null model would put about ${expected.toFixed(1)} of them below ${fap} by chance; ${a.candidates.length} found. A count near that number is what the background alone gives. ` +
+    `${a.fdrCandidates.length} of them have a Benjamini–Hochberg q-value below ${fdr} over all ${tested} (these are scan's candidates): if the null model holds, at most about ${fdr} of such a list is expected to be false alarms. A q-value is that adjusted level, not the probability that a body is truly isolated.`;
 }
 
 export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCliResult> {
@@ -131,7 +156,7 @@ export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCli
     const { loaded, errors } = await loadCommandCatalogue(files, opts.out);
     const inputs = await readFamiliesInputs(opts.families);
     const options: FamiliesOptions = {
-      ...FAMILIES_DEFAULTS, cutoffMPerS: opts.cutoff ?? null, minMembers: opts.min, fapThreshold: opts.fap,
+      ...FAMILIES_DEFAULTS, cutoffMPerS: opts.cutoff ?? null, minMembers: opts.min, fapThreshold: opts.fap, fdrLevel: opts.fdr,
       published: inputs.published.families, membership: inputs.membership,
     };
     const analysis = analyseFamilies(loaded.catalogue, options);
@@ -165,7 +190,7 @@ export function familiesStdout(r: FamiliesCliResult, out: string): string {
     `${rowsLine(r).replace('(rejects.csv)', `(${out}/rejects.csv)`)}.`,
     `${a.screen.screened.length} bodies screened with trusted proper elements; ${unrel} with untrusted ones (unreliable.csv); ${other} not screened (not-screened.csv).`,
     `${a.clustering.table.length} families (${a.names.filter((n) => n.namedBy !== 'none').length} named); ${a.candidates.length} outliers below false-alarm probability ${r.options.fapThreshold}.`,
-    ...(a.outliers ? [multipleTestingNote(a, r.options.fapThreshold)] : []),
+    ...(a.outliers ? [multipleTestingNote(a, r.options.fapThreshold, r.options.fdrLevel)] : []),
     fams.length ? textTable(['id', 'name', 'region', 'members', 'cutoff (m/s)'], fams, [false, false, false, true, true]) : '',
     `Outputs in ${out}/ (families.csv, members.csv, outliers.csv, unreliable.csv, not-screened.csv, rejects.csv, families.json, report.md, plots/). Screening candidates only.`,
   ].filter(Boolean).join('\n') + '\n';
@@ -177,7 +202,8 @@ export function registerFamilies(program: Command): void {
     .description('asteroid families in proper elements (linear secular theory) and the bodies isolated from them (default: the bundled demo catalogue)')
     .argument('[files...]', 'orbit dumps, as for scan')
     .option('--families <file>', 'family membership list (CSV/TSV: designation and family columns) whose labels name the families found')
-    .addOption(withDefault('--fap <p>', 'outliers: candidates below this false-alarm probability', FAMILIES_DEFAULTS.fapThreshold, String(FAMILIES_DEFAULTS.fapThreshold), parseProbabilityLevel))
+    .addOption(withDefault('--fap <p>', 'outliers: listed below this false-alarm probability', FAMILIES_DEFAULTS.fapThreshold, String(FAMILIES_DEFAULTS.fapThreshold), parseProbabilityLevel))
+    .addOption(withDefault('--fdr <q>', 'outliers: marked as surviving the false-discovery control when their Benjamini–Hochberg q-value is below this', FAMILIES_DEFAULTS.fdrLevel, String(FAMILIES_DEFAULTS.fdrLevel), parseProbabilityLevel))
     .option('--cutoff <m/s>', "one HCM cutoff for every belt region (default: each region's quasi-random level)", parsePositiveNumber)
     .addOption(withDefault('--min <n>', 'fewest members of a family (N_min, ≥ 2)', FAMILIES_DEFAULTS.minMembers, String(FAMILIES_DEFAULTS.minMembers), parseMinMembers))
     .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-families', 'wayward-families'))

@@ -52,6 +52,7 @@ export interface ScanOptions {
   threads?: number; // worker threads for N-body work and co-orbital predictions
   families?: string; // --families FILE: a user's family membership list naming the clusters
   familyFap?: number; // --family-fap: false-alarm threshold of the family outliers
+  familyFdr?: number; // --family-fdr: false-discovery level: family outliers with Benjamini–Hochberg q below it are candidates
   familyCutoff?: number; // --family-cutoff: one HCM cutoff (m/s) instead of the quasi-random levels
   familyMin?: number; // --family-min: N_min
   reproducible: boolean; // leave timings and memory out of summary.json
@@ -162,6 +163,7 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
       cutoffMPerS: opts.familyCutoff ?? FAMILIES_DEFAULTS.cutoffMPerS,
       minMembers: opts.familyMin ?? FAMILIES_DEFAULTS.minMembers,
       fapThreshold: opts.familyFap ?? FAMILIES_DEFAULTS.fapThreshold,
+      fdrLevel: opts.familyFdr ?? FAMILIES_DEFAULTS.fdrLevel,
       published: familyInputs?.published.families ?? [],
       membership: familyInputs?.membership ?? null,
     },
@@ -241,8 +243,10 @@ export function registerScan(program: Command): void {
     .addOption(withDefault('--threads <n>', 'worker threads for co-orbital predictions and N-body work (outputs identical for any number)',
       COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
     .option('--families <file>', 'family membership list (CSV/TSV: designation and family columns) whose labels name the families found')
-    .addOption(withDefault('--family-fap <p>', 'family outliers: candidates below this false-alarm probability',
+    .addOption(withDefault('--family-fap <p>', 'family outliers: considered below this false-alarm probability',
       FAMILIES_DEFAULTS.fapThreshold, String(FAMILIES_DEFAULTS.fapThreshold), parseProbabilityLevel))
+    .addOption(withDefault('--family-fdr <q>', 'family outliers: candidates are those with Benjamini–Hochberg q-value (over every body tested) below this false-discovery level',
+      FAMILIES_DEFAULTS.fdrLevel, String(FAMILIES_DEFAULTS.fdrLevel), parseProbabilityLevel))
     .option('--family-cutoff <m/s>', "families: one HCM cutoff for every belt region (default: each region's quasi-random level)", parsePositiveNumber)
     .addOption(withDefault('--family-min <n>', 'families: fewest members of a family (N_min)',
       FAMILIES_DEFAULTS.minMembers, String(FAMILIES_DEFAULTS.minMembers), parseMinMembers))

@@ -7,13 +7,12 @@ import type { Detector } from './types.js';
 export const DETECTORS: readonly Detector[] = [tisserandDetector, coorbitalDetector, familiesDetector];
 
 /**
- * The detectors `scan` runs when none are named. `families` is run on request only
- * (`--detectors families`, or `wayward families`) until its candidate list accounts for
- * testing every screened body at once: at a false-alarm threshold α, about α × (bodies
- * screened) bodies of a catalogue drawn from the null model itself pass, so a default run
- * would list that many background bodies as outliers.
+ * The detectors `scan` runs when none are named: all three. `families` tests every body outside
+ * the families at once, and its candidates are those with a Benjamini–Hochberg q-value below the
+ * false-discovery level (`--family-fdr`, 0.05), not every body below a false-alarm threshold
+ * (which would list about α × bodies tested from the background alone).
  */
-export const DEFAULT_DETECTOR_IDS: readonly string[] = [tisserandDetector.id, coorbitalDetector.id];
+export const DEFAULT_DETECTOR_IDS: readonly string[] = [tisserandDetector.id, coorbitalDetector.id, familiesDetector.id];
 
 /** Detector by id, or undefined. */
 export function detectorById(id: string): Detector | undefined {

@@ -43,14 +43,15 @@ export function memberRows(cat: Catalogue, r: FamiliesAnalysis): Row[] {
 }
 
 export const OUTLIER_COLUMNS = [
-  'designation', 'score', 'false_alarm_prob', 'tail_fraction', 'tail_population', 'proper_a_au', 'proper_e', 'proper_sin_i',
+  'designation', 'score', 'false_alarm_prob', 'false_alarm_from', 'q_value', 'fdr_pass', 'tail_fraction', 'tail_population', 'proper_a_au', 'proper_e', 'proper_sin_i',
   'nearest_family_id', 'nearest_family', 'nearest_family_mps', 'nearest_family_via', 'nearest_body_mps', 'flags', 'why',
 ] as const;
 
 /** The candidates, most isolated first (ties in catalogue order). */
 export function outlierRows(r: FamiliesAnalysis): Row[] {
   const sorted = [...r.candidates].sort((p, q) => q.score - p.score || p.index - q.index);
-  return sorted.map((c) => [c.designation, c.score.toFixed(4), c.falseAlarmProb.toPrecision(3), c.tailFraction.toPrecision(3), c.tailPopulation,
+  return sorted.map((c) => [c.designation, c.score.toFixed(4), c.falseAlarmProb.toPrecision(3), String(c.details.false_alarm_from),
+    (c.details.q_value as number).toPrecision(3), String(c.details.fdr_pass), c.tailFraction.toPrecision(3), c.tailPopulation,
     String(c.details.proper_a_au), String(c.details.proper_e), String(c.details.proper_sin_i), String(c.details.nearest_family_id),
     String(c.details.nearest_family), String(c.details.nearest_family_mps), String(c.details.nearest_family_via),
     String(c.details.nearest_body_mps), c.flags.join(';'), c.why]);

@@ -3,8 +3,9 @@
  * bodies placed in PROPER elements and turned into osculating ones with the secular model's
  * forced vectors at the epoch (src/core/secular), so their places in proper-element space are
  * known exactly. Middle belt (2.56–2.79 au, clear of the listed mean-motion resonances):
- *   - a uniform background with an empty ellipsoidal hole around HOLE (radius HOLE_MPS in the
- *     velocity metric), and one body, ISOLATED, at the hole's centre;
+ *   - a uniform background of BACKGROUND bodies with an empty ellipsoidal hole around HOLE
+ *     (radius HOLE_MPS in the velocity metric), and one body, ISOLATED, at the hole's centre
+ *     (8 000 bodies: dense enough that the hole stands out against testing them all at once);
  *   - a dense group of GROUP_SIZE bodies within GROUP_MPS of GROUP_CENTRE, labelled 'Planted'
  *     in the membership list the test writes;
  *   - UNRELIABLE: two bodies at sin i 0.36 (beyond the theory's 0.3), one of them alone;
@@ -25,7 +26,7 @@ export const GROUP_MPS = 25;
 export const GROUP_SIZE = 40;
 export const ISOLATED = 'SYN-ISOLATED';
 export const UNRELIABLE = ['SYN-TILT-1', 'SYN-TILT-2'];
-export const BACKGROUND = 3000;
+export const BACKGROUND = 8000;
 
 const model = planetarySecularModel(EPOCH_JD);
 const scratch = newTestParticleScratch(model);

@@ -99,9 +99,15 @@ describe('scan on the bundled demo catalogue', () => {
     expect(s.detectors.tisserand.definitions.tailFraction).toContain('not a probability');
     expect(s.detectors.tisserand.definitions.falseAlarmProb).toContain('no null model');
     const raw = readFileSync(join(out, 'candidates.jsonl'), 'utf8').trim().split('\n').map((l) => JSON.parse(l));
-    // families is run on request only (src/detect/registry.ts); the default detectors state no null model
-    expect(s.detectors.families).toBeUndefined();
+    // families runs by default (src/detect/registry.ts) and is the one detector with a null model:
+    // its candidates carry a false-alarm probability and a q-value below the false-discovery level
+    expect(s.detectors.families.definitions.falseAlarmProb).toContain('Benjamini–Hochberg');
     for (const c of raw) {
+      if (c.detector === 'families') {
+        expect(c.falseAlarmProb).toBeGreaterThan(0);
+        expect(c.details.q_value).toBeLessThan(0.05);
+        continue;
+      }
       expect(c.falseAlarmProb).toBeNull();
       expect(c.tailFraction).toBeGreaterThan(0);
       expect(c.tailFraction).toBeLessThanOrEqual(1);

@@ -32,13 +32,15 @@ export interface OutlierBackground {
   readonly weightCap: number; // cap in w = min(1, cap·ρ_bg/ρ_k)
   readonly weightedBodies: number; // Σ w over the catalogue
   readonly guide: Uint32Array; // guide[i]: first body whose running sum exceeds i·Σw/guide.length
+  readonly scoredParent: Uint8Array | null; // 1 where the observed body is scored; null: every body is
 }
 
-/** Background from a catalogue (scaled xyz) and its isolation scores. */
-export function buildOutlierBackground(xyz: Float64Array, scores: IsolationScores, weightCap: number): OutlierBackground {
+/** Background from a catalogue (scaled xyz), its isolation scores and which of its bodies are scored (default: all). */
+export function buildOutlierBackground(xyz: Float64Array, scores: IsolationScores, weightCap: number, scoredParent: Uint8Array | null = null): OutlierBackground {
   if (!(weightCap > 0)) throw new RangeError(`buildOutlierBackground: weight cap must be > 0, got ${weightCap}`);
   const n = xyz.length / 3;
   if (scores.score.length !== n) throw new RangeError(`buildOutlierBackground: ${scores.score.length} scores for ${n} bodies`);
+  if (scoredParent !== null && scoredParent.length !== n) throw new RangeError(`buildOutlierBackground: ${scoredParent.length} scored marks for ${n} bodies`);
   const k = scores.neighbours.k;
   const radius = new Float64Array(n);
   const cumulative = new Float64Array(n);
@@ -48,7 +50,7 @@ export function buildOutlierBackground(xyz: Float64Array, scores: IsolationScore
     sum += Math.min(1, weightCap * Math.exp(scores.score[j]));
     cumulative[j] = sum;
   }
-  return { xyz, radius, cumulative, weightCap, weightedBodies: sum, guide: guideTable(cumulative) };
+  return { xyz, radius, cumulative, weightCap, weightedBodies: sum, guide: guideTable(cumulative), scoredParent };
 }
 
 /** guide[i] = first position whose running sum exceeds i·total/n, one slice per body (a walk through both arrays). */
@@ -65,13 +67,15 @@ function guideTable(cumulative: Float64Array): Uint32Array {
   return guide;
 }
 
-/** n bodies drawn independently from the background, scaled xyz interleaved. */
-export function drawFromBackground(bg: OutlierBackground, n: number, random: Random): Float64Array {
+/** n bodies drawn independently from the background, scaled xyz interleaved; each one's parent body into `parentOut` when given (length ≥ n). */
+export function drawFromBackground(bg: OutlierBackground, n: number, random: Random, parentOut?: Int32Array): Float64Array {
   if (!Number.isInteger(n) || n < 0) throw new RangeError(`drawFromBackground: n must be a whole number, got ${n}`);
+  if (parentOut !== undefined && parentOut.length < n) throw new RangeError(`drawFromBackground: parent buffer of ${parentOut.length} for ${n} bodies`);
   const out = new Float64Array(3 * n);
   const total = bg.cumulative[bg.cumulative.length - 1];
   for (let j = 0; j < n; j++) {
     const s = firstAbove(bg.cumulative, bg.guide, random() * total, total);
+    if (parentOut !== undefined) parentOut[j] = s;
     const r = bg.radius[s];
     let dx: number, dy: number, dz: number;
     do {

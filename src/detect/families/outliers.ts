@@ -4,6 +4,14 @@
  * (outlierBackground.ts) and calibration against synthetic catalogues drawn from it
  * (outlierCalibration.ts). Pure computation; randomness comes from the injected generator.
  *
+ * Selection: `scored` (optional, 1 per body) marks the bodies to score; the others — bodies
+ * whose proper elements are not trusted, set apart from the families — still occupy space: they
+ * are neighbours in the k-nearest search, count in the coarse background and carry kernels of
+ * the null background, but get no tail fraction (NaN). Removing them instead would leave
+ * hard-edged holes in the observed catalogue where the smooth null has soft edges, and the
+ * bodies on a hole's rim would come up as isolated (test/detect/families/outlierSelection.test.ts).
+ * The null catalogues undergo the same selection (outlierNullReplicate.ts).
+ *
  * For a later stage that names the nearest family: each body's k nearest other bodies (input
  * indices and velocity distances, nearest first) and its scaled coordinates; with family labels
  * per body, the nearest labelled neighbour or the distance to a family's members follow.
@@ -12,7 +20,8 @@ import type { Random } from '../../core/random.js';
 import { orbitalSpeedMPerS } from './metricVelocity.js';
 import { scaledProperCoordinates } from './outlierMetric.js';
 import { buildOutlierBackground } from './outlierBackground.js';
-import { calibrateIsolation, nullCataloguePlan, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
+import { calibrateIsolation, nullCataloguePlan, nullFalseAlarmProbs, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
+import type { UpperTailFitResult } from '../tailExtrapolation.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores, type IsolationOptions, type IsolationScores } from './outlierScore.js';
 
 export interface ProperOutlierOptions extends IsolationOptions {
@@ -41,7 +50,10 @@ export const DEFAULT_PROPER_OUTLIER_OPTIONS: Readonly<ProperOutlierOptions> = { 
 export interface ProperOutliers {
   readonly k: number;
   readonly score: Float64Array; // ln(ρ_bg·V_k/k), larger = more isolated
-  readonly nullTailFraction: Float64Array; // (1 + #{null ≥ score})/(n + 1): estimates the false-alarm probability under nullModel
+  readonly nullTailFraction: Float64Array; // (1 + #{null ≥ score})/(n + 1); NaN for a body not scored
+  readonly falseAlarmProb: Float64Array; // the tail fraction, or beyond the null sample's resolution the tail fit's extrapolation; NaN for a body not scored
+  readonly falseAlarmFrom: Uint8Array; // how: TAIL_FROM_* codes of tailExtrapolation.ts
+  readonly scored: Uint8Array; // 1 where the body was scored (all when no selection was given)
   readonly nearestDistanceMps: Float64Array; // n·a·|δz| to the nearest other body, m/s
   readonly kthDistanceMps: Float64Array; // to the k-th nearest, m/s
   readonly neighbourIndex: Int32Array; // k nearest per body, row-major (body·k + m), input indices
@@ -50,30 +62,42 @@ export interface ProperOutliers {
   readonly scaledXyz: Float64Array; // (√(5/4)·ln a, √2·e, √2·sin i) per body, interleaved
   readonly nullModel: string; // one sentence
   readonly nullScores: number; // size of the pooled null sample
+  readonly tail: UpperTailFitResult; // the null sample's upper-tail fit
 }
 
-/** Scores, background, calibration and null tail fractions of a catalogue in scaled coordinates. */
-export function calibratedIsolation(xyz: Float64Array, random: Random, options: ProperOutlierOptions): {
-  scores: IsolationScores; calibration: OutlierCalibration; nullTailFraction: Float64Array;
+/**
+ * Scores, background, calibration, null tail fractions and false-alarm probabilities of a
+ * catalogue in scaled coordinates; with `scored`, only the marked bodies are scored (NaN elsewhere).
+ */
+export function calibratedIsolation(xyz: Float64Array, random: Random, options: ProperOutlierOptions, scored: Uint8Array | null = null): {
+  scores: IsolationScores; calibration: OutlierCalibration; nullTailFraction: Float64Array; falseAlarmProb: Float64Array; falseAlarmFrom: Uint8Array;
 } {
   const n = xyz.length / 3;
   const k = options.k;
   if (!Number.isInteger(k) || k < 1 || k >= n) throw new RangeError(`calibratedIsolation: k must be an integer from 1 to ${n - 1}, got ${k}`);
+  if (scored !== null && scored.length !== n) throw new RangeError(`calibratedIsolation: ${scored.length} scored marks for ${n} bodies`);
+  const nScored = scored === null ? n : scored.reduce((s, v) => s + (v !== 0 ? 1 : 0), 0);
+  if (nScored < 1) throw new RangeError('calibratedIsolation: no body is marked to be scored');
   const scores = isolationScores(xyz, options);
-  const background = buildOutlierBackground(xyz, scores, options.weightCap);
-  const plan = nullCataloguePlan(n, options.replicates, options.nullScoresWanted ?? DEFAULT_NULL_SCORES_WANTED);
+  const background = buildOutlierBackground(xyz, scores, options.weightCap, scored);
+  const plan = nullCataloguePlan(nScored, options.replicates, options.nullScoresWanted ?? DEFAULT_NULL_SCORES_WANTED);
   const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate);
-  return { scores, calibration, nullTailFraction: nullTailFractions(scores.score, calibration) };
+  const nullTailFraction = nullTailFractions(scores.score, calibration);
+  const fap = nullFalseAlarmProbs(scores.score, calibration);
+  if (scored !== null) {
+    for (let j = 0; j < n; j++) if (scored[j] === 0) { nullTailFraction[j] = NaN; fap.p[j] = NaN; }
+  }
+  return { scores, calibration, nullTailFraction, falseAlarmProb: fap.p, falseAlarmFrom: fap.from };
 }
 
 export function properOutliers(
   aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, random: Random,
-  options: ProperOutlierOptions = DEFAULT_PROPER_OUTLIER_OPTIONS,
+  options: ProperOutlierOptions = DEFAULT_PROPER_OUTLIER_OPTIONS, scored: Uint8Array | null = null,
 ): ProperOutliers {
   const xyz = scaledProperCoordinates(aAu, e, sinI);
   const n = aAu.length;
   const k = options.k;
-  const { scores, calibration, nullTailFraction } = calibratedIsolation(xyz, random, options);
+  const { scores, calibration, nullTailFraction, falseAlarmProb, falseAlarmFrom } = calibratedIsolation(xyz, random, options, scored);
   const neighbourDistanceMps = new Float64Array(n * k);
   const nearestDistanceMps = new Float64Array(n);
   const kthDistanceMps = new Float64Array(n);
@@ -87,6 +111,9 @@ export function properOutliers(
     k,
     score: scores.score,
     nullTailFraction,
+    falseAlarmProb,
+    falseAlarmFrom,
+    scored: scored ?? new Uint8Array(n).fill(1),
     nearestDistanceMps,
     kthDistanceMps,
     neighbourIndex: scores.neighbours.index,
@@ -95,5 +122,6 @@ export function properOutliers(
     scaledXyz: xyz,
     nullModel: calibration.nullModel,
     nullScores: calibration.nullScoresSorted.length,
+    tail: calibration.tail,
   };
 }
