@@ -11,5 +11,6 @@ export * from './adesColumns.js';
 export * from './adesRow.js';
 export * from './adesPsvReader.js';
 export * from './observatoryCodes.js';
+export * from './observationStations.js';
 export * from './astrometryDesignations.js';
 export * from './readAstrometryFile.js';
