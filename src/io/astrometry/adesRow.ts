@@ -133,7 +133,8 @@ export function parseAdesRow(cells: AdesCells, index: Record<AdesField, number>,
   const raDecimals = decimalsOf(c.get('ra'));
   const decDecimals = decimalsOf(c.get('dec'));
   const obs: AstrometryObservation = {
-    ...d, timeJdUtc: times.jdUtc, timeJdTT: times.jdTT,
+    designation: d.designation, packed: d.packed, number: d.number, provisional: d.provisional, temporary: d.temporary,
+    timeJdUtc: times.jdUtc, timeJdTT: times.jdTT,
     raRad: ra * RAD_PER_DEG, decRad: dec * RAD_PER_DEG, raDecimals, decDecimals,
     raResolutionArcsec: 3600 / 10 ** raDecimals, decResolutionArcsec: 3600 / 10 ** decDecimals,
     sigmaRaCosDecArcsec: c.number('rmsRA', false), sigmaDecArcsec: c.number('rmsDec', false),

@@ -53,7 +53,9 @@ export function parseObs80Line(line: string, file: string, lineNo: number, d: Ob
   const mag = optionalNumber(line, C.mag, 'magnitude', file, lineNo);
   const note2 = line[C.note2[0]];
   return {
-    ...d,
+    // fields one by one, not `...d`: a spread into this literal made each observation a
+    // dictionary-mode object (measured 40 µs a line instead of a few)
+    designation: d.designation, packed: d.packed, number: d.number, provisional: d.provisional, temporary: d.temporary,
     timeJdUtc: times.jdUtc, timeJdTT: times.jdTT,
     raRad: ra.value * 15 * RAD_PER_DEG, decRad: dec.value * RAD_PER_DEG,
     raDecimals: ra.decimals, decDecimals: dec.decimals,
