@@ -1,14 +1,14 @@
 /**
- * Columns of the 80-column optical astrometry record. Source: the IAU Minor Planet Center's
+ * Columns of the 80-column optical astrometry record. Sources: the IAU Minor Planet Center's
  * published format description for optical astrometric observations of comets, minor
- * planets and natural satellites (columns 1–15, 16–32 date, 33–44 RA, 45–56 Dec, 57–65
- * blank, 66–71 magnitude and band, 78–80 observatory code; checked); the use of column 72
- * (catalogue code) and 73–77 (publication reference) in published records: format
- * description, from memory, and seen in the real sample lines (e.g. `Vca3812566`:
- * band V, catalogue c, reference a3812, station 566). The second lines of two-line records:
- * the published description of the satellite-based format (`s` line: column 33 units flag,
- * X 35–45, Y 47–57, Z 59–69, sign in the first column of each; checked) and of the roving
- * observer format (`v` line: longitude 35–44, latitude 46–55, altitude 57–61; from memory).
+ * planets and natural satellites (columns 1–13 of minor planets and comets: checked); its
+ * description of the satellite-based format (date 16–32 and observatory code 78–80, the same
+ * in both lines; `s` line: column 33 units flag, X 35–45, Y 47–57, Z 59–69, sign in the first
+ * column of each: checked). From memory, and matched on every line of the real sample: note 1
+ * 14, note 2 15, RA 33–44, Dec 45–56, magnitude 66–70, band 71, and in published records the
+ * catalogue code 72 and publication reference 73–77 (e.g. `Vca3812566`: band V, catalogue c,
+ * reference a3812, station 566). The roving observer's `v` line (longitude 35–44, latitude
+ * 46–55, altitude 57–61): format description, from memory; no real line at hand.
  * Comments give the published 1-based inclusive columns; the constants are 0-based
  * half-open [start, end) pairs.
  */
