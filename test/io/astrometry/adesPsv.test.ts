@@ -103,4 +103,22 @@ describe('ADES PSV files written here (invented rows)', () => {
     expect(read.observations.map((o) => [o.designation, o.station, o.raRad / DEG])).toEqual([['(433)', '500', 10.25]]);
     expect(read.rejected[0].message).toBe(`${path}:3:5: time scale TT; the standard gives UTC: '2020-01-01T12:00:00 TT' (field obsTime)`);
   });
+
+  it('rejects an Earth-fixed observer system and a roving site out of range; gives no TT before 1972', async () => {
+    const path = write('observers.psv', [
+      'permID|obsTime|ra|dec|stn|sys|ctr|pos1|pos2|pos3',
+      '433|2020-01-01T12:00:00Z|10.25|-5.5|C51|ITRF_KM|399|1|2|3',
+      '433|2020-01-01T13:00:00Z|10.25|-5.5|247|WGS84||370|50.25|100',
+      '433|1965-03-04T06:00:00Z|10.25|-5.5|500|||||',
+    ].join('\n'));
+    const read = await readAstrometryFile(path);
+    expect(read.rejected.map((e) => e.reason)).toEqual([
+      "observer coordinate system 'ITRF_KM' is not handled (ICRF_KM, ICRF_AU, WGS84 are) (field sys)",
+      'roving site longitude 370, latitude 50.25 out of range (field pos1)',
+    ]);
+    const old = read.observations[0];
+    expect(old.timeJdUtc).toBeCloseTo(isoToJd('1965-03-04T06:00:00'), 9);
+    expect(Number.isNaN(old.timeJdTT)).toBe(true);
+    expect(read.withoutTT).toBe(1);
+  });
 });

@@ -155,3 +155,33 @@ describe('Obs80Reader line by line', () => {
     expect(counts.rejected).toBe(4);
   });
 });
+
+describe('note 2 codes (format description, from memory) on an invented line', () => {
+  const LINE = '     K20A00B  C2020 01 01.50000 01 02 03.45 +04 05 06.7          20.1 VV     G96';
+  const withNote2 = (c: string) => LINE.slice(0, 14) + c + LINE.slice(15);
+  const outcome = (c: string) => {
+    const rej: string[] = [];
+    let n = 0;
+    const r = new Obs80Reader('f.txt', () => n++, (e) => rej.push(e.reason));
+    r.pushLine(withNote2(c), 1);
+    r.finish();
+    return n === 1 ? 'read' : rej[0];
+  };
+
+  it('reads the optical kinds', () => {
+    for (const c of [' ', 'P', 'e', 'C', 'c', 'T', 'M', 'E', 'H', 'N', 'n', 'A']) expect(outcome(c), `note 2 '${c}'`).toBe('read');
+  });
+
+  it('rejects offset, deleted and unknown kinds with their reasons', () => {
+    expect(outcome('O')).toBe('offset observation (note 2 O): relative to a planet, used for natural satellites only (column 15)');
+    expect(outcome('x')).toBe('deleted observation (note 2 x): not used in a fit (column 15)');
+    expect(outcome('Z')).toBe("unknown observation type 'Z' (note 2, column 15)");
+  });
+
+  it('rejects a comet provisional designation in no packed form', () => {
+    const rej: string[] = [];
+    const r = new Obs80Reader('f.txt', () => undefined, (e) => rej.push(e.message));
+    r.pushLine('    CJ95!010' + LINE.slice(12), 1);
+    expect(rej).toEqual(["f.txt:1:1: comet provisional designation 'CJ95!010' in no packed form (columns 5–12)"]);
+  });
+});
