@@ -15,7 +15,7 @@ export interface Obs80Designation {
   designation: string;
   packed: string; // columns 1–12 trimmed
   number: number; // NaN when none
-  provisional: string; // readable provisional when the record also carries one ('' otherwise)
+  provisional: string; // see AstrometryObservation.provisional (./types.ts)
   temporary: boolean;
 }
 

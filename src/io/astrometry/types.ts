@@ -26,7 +26,7 @@ export interface AstrometryObservation {
   designation: string; // readable: '(12893)', '2019 EU5', 'C/1995 O1', '1P', or a temporary designation as written
   packed: string; // the designation as written (80-column: columns 1–12 trimmed; ADES: the id field used)
   number: number; // minor-planet or periodic-comet number, NaN when not given
-  provisional: string; // readable provisional designation when the record also gives one, '' otherwise
+  provisional: string; // readable provisional designation the record gives ('' when none; the designation itself for a provisional-only record; as written when beside a number it does not unpack)
   temporary: boolean; // true when the designation is an observer's temporary one (no packed form)
   timeJdUtc: number; // Julian date, UTC, as written
   timeJdTT: number; // the same instant in TT through the leap-second table; NaN before 1972 (no table entry)
