@@ -28,3 +28,4 @@ export * from './detectFormat.js';
 export * from './readOrbitFile.js';
 export * from './publishedFamilies.js';
 export * from './familyMembership.js';
+export * from './astrometry/index.js';
