@@ -9,8 +9,9 @@
  * background forms such a group at or below it. Deterministic for a seed.
  */
 import { seededRandom } from '../../core/random.js';
-import { linkComponents } from './clusterHcm.js';
-import { toVelocitySpace } from './metricVelocity.js';
+import { createUnionFind, unite, type UnionFind } from './clusterUnionFind.js';
+import { pairsWithin, type PairList } from './gridPairList.js';
+import { toVelocitySpace, type VelocitySpace } from './metricVelocity.js';
 import { shuffledBackground } from './qrlBackground.js';
 import { coarseCellBackground, type CoarseCell } from './qrlBackgroundCells.js';
 
@@ -55,19 +56,43 @@ export function quasiRandomLevel(aAu: ArrayLike<number>, e: ArrayLike<number>, s
   return { cutoffMPerS, perBackgroundMPerS };
 }
 
-/** Largest cutoff (to `resolution`) at which the largest linked group is under `minMembers`. */
-export function groupLevel(space: ReturnType<typeof toVelocitySpace>, minMembers: number, resolution: number): number {
-  const formsGroup = (v: number): boolean => linkComponents(space, v).largestGroup >= minMembers;
+/**
+ * Largest cutoff (to `resolution`) at which the largest linked group is under `minMembers`.
+ * The pairs within the bracket's upper end are found once (gridPairList.ts) and each cutoff
+ * tried is read from them (the links at v are the pairs with d² ≤ v·v): the same answers as
+ * linking the bodies anew at every cutoff (clusterHcm.ts linkComponents), tested equal, at the
+ * cost of one grid per doubling of the bracket instead of one per cutoff tried.
+ */
+export function groupLevel(space: VelocitySpace, minMembers: number, resolution: number): number {
   let lo = 0;
   let hi = FIRST_HIGH_M_PER_S;
-  while (!formsGroup(hi)) {
+  let pairs = pairsWithin(space, hi);
+  const uf = createUnionFind(pairs.points);
+  while (!formsGroup(pairs, hi, minMembers, uf)) {
     lo = hi;
     hi *= 2;
     if (hi > HIGHEST_M_PER_S) throw new RangeError(`quasiRandomLevel: no group of ${minMembers} forms below ${HIGHEST_M_PER_S} m/s (too few bodies?)`);
+    pairs = pairsWithin(space, hi);
   }
   while (hi - lo > resolution) {
     const mid = 0.5 * (lo + hi);
-    if (formsGroup(mid)) hi = mid; else lo = mid;
+    if (formsGroup(pairs, mid, minMembers, uf)) hi = mid; else lo = mid;
   }
   return lo;
+}
+
+/**
+ * Whether the links at `cutoff` (≤ the list's radius) make a group of `minMembers` or more;
+ * a single indexed point is a group of one (as linkComponents counts). `uf` is scratch.
+ */
+function formsGroup(pairs: PairList, cutoff: number, minMembers: number, uf: UnionFind): boolean {
+  if ((pairs.indexedPoints > 0 ? 1 : 0) >= minMembers) return true;
+  for (let k = 0; k < uf.parent.length; k++) uf.parent[k] = k;
+  uf.size.fill(1);
+  const r2 = cutoff * cutoff;
+  const { first, second, distance2 } = pairs;
+  for (let p = 0; p < pairs.count; p++) {
+    if (distance2[p] <= r2 && unite(uf, first[p], second[p]) >= minMembers) return true;
+  }
+  return false;
 }
