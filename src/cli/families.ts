@@ -9,6 +9,7 @@
 import { Command } from 'commander';
 import { analyseFamilies, type FamiliesAnalysis } from '../detect/families.js';
 import { FAMILIES_DEFAULTS, type FamiliesOptions } from '../detect/familiesOptions.js';
+import { startKNearestThreads } from '../detect/families/kNearestThreads.js';
 import { FAMILIES_NOT_SCREENED } from '../detect/familiesScreen.js';
 import type { Catalogue, Reject } from '../clean/types.js';
 import { BELT_REGIONS } from '../detect/families/qrlRegion.js';
@@ -25,7 +26,10 @@ import { markdownTable, textTable } from '../report/textTable.js';
 import { membershipRejectLines, readFamiliesInputs } from './familiesInputs.js';
 import { commandFiles, loadCommandCatalogue } from './commandCatalogue.js';
 import { withDefault } from './optionDefault.js';
-import { parseMinMembers, parsePositiveNumber, parseProbabilityLevel } from './optionParsers.js';
+import { parseMinMembers, parsePositiveInteger, parsePositiveNumber, parseProbabilityLevel } from './optionParsers.js';
+
+/** Threads of `wayward families` by default: the two cores of the reference machine (as scan's --threads). */
+const FAMILIES_THREADS_DEFAULT = 2;
 
 export interface FamiliesCliOptions {
   files: string[]; // empty: the bundled demo catalogue
@@ -34,6 +38,7 @@ export interface FamiliesCliOptions {
   fap: number;
   cutoff?: number;
   min: number;
+  threads?: number; // threads of the outliers' neighbour searches (outputs identical for any number); default 1
 }
 
 export interface FamiliesCliResult {
@@ -123,7 +128,13 @@ export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCli
       ...FAMILIES_DEFAULTS, cutoffMPerS: opts.cutoff ?? null, minMembers: opts.min, fapThreshold: opts.fap,
       published: inputs.published.families, membership: inputs.membership,
     };
-    const analysis = analyseFamilies(loaded.catalogue, options);
+    const search = await startKNearestThreads(opts.threads ?? 1);
+    let analysis: FamiliesAnalysis;
+    try {
+      analysis = analyseFamilies(loaded.catalogue, options, search);
+    } finally {
+      await search.close();
+    }
     const rejects: Reject[] = [...loaded.rejects, ...inputs.membershipRejects.map((e) => ({ kind: 'parse' as const, file: e.file, line: e.line, reason: e.reason, text: e.text }))];
     sortRejectsInPlace(rejects, opts.families ? [...files, opts.families] : files);
     const rowsRead = loaded.files.reduce((n, f) => n + f.rows.read, 0);
@@ -168,6 +179,7 @@ export function registerFamilies(program: Command): void {
     .addOption(withDefault('--fap <p>', 'outliers: candidates below this false-alarm probability', FAMILIES_DEFAULTS.fapThreshold, String(FAMILIES_DEFAULTS.fapThreshold), parseProbabilityLevel))
     .option('--cutoff <m/s>', "one HCM cutoff for every belt region (default: each region's quasi-random level)", parsePositiveNumber)
     .addOption(withDefault('--min <n>', 'fewest members of a family (N_min, ≥ 2)', FAMILIES_DEFAULTS.minMembers, String(FAMILIES_DEFAULTS.minMembers), parseMinMembers))
+    .addOption(withDefault('--threads <n>', "worker threads for the outliers' neighbour searches (outputs identical for any number)", FAMILIES_THREADS_DEFAULT, String(FAMILIES_THREADS_DEFAULT), parsePositiveInteger))
     .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-families', 'wayward-families'))
     .action(async (files: string[], flags: Omit<FamiliesCliOptions, 'files'>) => {
       const r = await runFamilies({ files, ...flags });

@@ -7,7 +7,9 @@
  *      (familiesCluster.ts), named from the published list or a user's labels (familiesNaming.ts);
  *   3. outliers: isolation scores with a calibrated null model (families/outliers.ts);
  *      candidates are the bodies outside every family with falseAlarmProb below the threshold
- *      (familiesOutliers.ts). Deterministic for the seed.
+ *      (familiesOutliers.ts). Deterministic for the seed. The k-nearest searches of this
+ *      stage run on the scan's threads (DetectorContext.threads; families/kNearestThreads.ts),
+ *      with the same numbers on any count.
  */
 import { seededRandom } from '../core/random.js';
 import type { Catalogue } from '../clean/types.js';
@@ -17,6 +19,8 @@ import { membershipLabels, nameFamilies, type FamilyName } from './familiesNamin
 import type { FamilyMember } from '../io/familyMembership.js';
 import type { FamiliesOptions } from './familiesOptions.js';
 import { familyOutlierCandidates } from './familiesOutliers.js';
+import { SERIAL_KNEAREST, type KNearestSearch } from './families/kNearestSearch.js';
+import { startKNearestThreads } from './families/kNearestThreads.js';
 import { FAMILIES_NOT_SCREENED, screenFamilies, type FamiliesScreen } from './familiesScreen.js';
 import type { Candidate, Detector, DetectorResult } from './types.js';
 
@@ -30,8 +34,11 @@ export interface FamiliesAnalysis {
   unmatched: FamilyMember[]; // membership lines no catalogue body matched
 }
 
-/** Everything the detector finds; `wayward families` writes it all. */
-export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions): FamiliesAnalysis {
+/**
+ * Everything the detector finds; `wayward families` writes it all. `search`: the threads the
+ * outliers' k-nearest searches run on (startKNearestThreads); the same numbers on any.
+ */
+export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, search: KNearestSearch = SERIAL_KNEAREST): FamiliesAnalysis {
   if (!(opts.fapThreshold > 0 && opts.fapThreshold <= 1)) throw new RangeError(`analyseFamilies: fapThreshold must be in (0, 1], got ${opts.fapThreshold}`);
   if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`analyseFamilies: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
   if (opts.cutoffMPerS !== null && !(opts.cutoffMPerS > 0)) throw new RangeError(`analyseFamilies: cutoff must be positive m/s, got ${opts.cutoffMPerS}`);
@@ -42,7 +49,7 @@ export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions): Families
   const user = opts.membership ? membershipLabels(cat, opts.membership) : null;
   const names = nameFamilies(clustering.table, clustering.familyRegion, screen.screened, opts.published, user ? user.label : null);
   const k = DEFAULT_PROPER_OUTLIER_OPTIONS.k;
-  const outliers = a.length > k ? properOutliers(a, e, sinI, seededRandom(opts.seed)) : null;
+  const outliers = a.length > k ? properOutliers(a, e, sinI, seededRandom(opts.seed), DEFAULT_PROPER_OUTLIER_OPTIONS, search) : null;
   const candidates = outliers
     ? familyOutlierCandidates(cat, screen.screened, a, e, sinI, clustering.labels, clustering.table, names, outliers, opts.fapThreshold)
     : [];
@@ -63,7 +70,13 @@ export const familiesDetector: Detector = {
   notScreenedReasons: FAMILIES_NOT_SCREENED,
   async run(cat, all, ctx): Promise<DetectorResult> {
     ctx?.progress?.start('families');
-    const r = analyseFamilies(cat, all.families);
+    const search = await startKNearestThreads(ctx?.threads ?? 1);
+    let r: FamiliesAnalysis;
+    try {
+      r = analyseFamilies(cat, all.families, search);
+    } finally {
+      await search.close();
+    }
     ctx?.progress?.end();
     return { candidates: r.candidates, screened: r.screen.screened.length, notScreened: { ...r.screen.notScreened } };
   },

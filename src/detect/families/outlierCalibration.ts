@@ -15,6 +15,7 @@
 import type { Random } from '../../core/random.js';
 import { upperTailFraction } from '../empiricalTail.js';
 import { drawFromBackground, type OutlierBackground } from './outlierBackground.js';
+import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 import { isolationScoresOfFirst, type IsolationOptions } from './outlierScore.js';
 
 export interface OutlierCalibration {
@@ -27,7 +28,7 @@ export interface OutlierCalibration {
 
 export function calibrateIsolation(
   bg: OutlierBackground, catalogueSize: number, opts: IsolationOptions, replicates: number, random: Random,
-  scoredPerReplicate: number = catalogueSize,
+  scoredPerReplicate: number = catalogueSize, search: KNearestSearch = SERIAL_KNEAREST,
 ): OutlierCalibration {
   if (!Number.isInteger(replicates) || replicates < 1) throw new RangeError(`calibrateIsolation: replicates must be a positive integer, got ${replicates}`);
   if (!Number.isInteger(scoredPerReplicate) || scoredPerReplicate < 1) {
@@ -37,7 +38,7 @@ export function calibrateIsolation(
   const pooled = new Float64Array(replicates * scored);
   for (let r = 0; r < replicates; r++) {
     const synthetic = drawFromBackground(bg, catalogueSize, random);
-    pooled.set(isolationScoresOfFirst(synthetic, opts, scored), r * scored);
+    pooled.set(isolationScoresOfFirst(synthetic, opts, scored, search), r * scored);
   }
   pooled.sort();
   return {

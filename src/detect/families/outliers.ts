@@ -14,6 +14,7 @@ import { scaledProperCoordinates } from './outlierMetric.js';
 import { buildOutlierBackground } from './outlierBackground.js';
 import { calibrateIsolation, nullCataloguePlan, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores, type IsolationOptions, type IsolationScores } from './outlierScore.js';
+import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 
 export interface ProperOutlierOptions extends IsolationOptions {
   replicates: number; // at most this many synthetic null catalogues (outlierCalibration.ts nullCataloguePlan)
@@ -52,28 +53,28 @@ export interface ProperOutliers {
   readonly nullScores: number; // size of the pooled null sample
 }
 
-/** Scores, background, calibration and null tail fractions of a catalogue in scaled coordinates. */
-export function calibratedIsolation(xyz: Float64Array, random: Random, options: ProperOutlierOptions): {
+/** Scores, background, calibration and null tail fractions of a catalogue in scaled coordinates; `search`: on which threads (the same numbers). */
+export function calibratedIsolation(xyz: Float64Array, random: Random, options: ProperOutlierOptions, search: KNearestSearch = SERIAL_KNEAREST): {
   scores: IsolationScores; calibration: OutlierCalibration; nullTailFraction: Float64Array;
 } {
   const n = xyz.length / 3;
   const k = options.k;
   if (!Number.isInteger(k) || k < 1 || k >= n) throw new RangeError(`calibratedIsolation: k must be an integer from 1 to ${n - 1}, got ${k}`);
-  const scores = isolationScores(xyz, options);
+  const scores = isolationScores(xyz, options, search);
   const background = buildOutlierBackground(xyz, scores, options.weightCap);
   const plan = nullCataloguePlan(n, options.replicates, options.nullScoresWanted ?? DEFAULT_NULL_SCORES_WANTED);
-  const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate);
+  const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate, search);
   return { scores, calibration, nullTailFraction: nullTailFractions(scores.score, calibration) };
 }
 
 export function properOutliers(
   aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, random: Random,
-  options: ProperOutlierOptions = DEFAULT_PROPER_OUTLIER_OPTIONS,
+  options: ProperOutlierOptions = DEFAULT_PROPER_OUTLIER_OPTIONS, search: KNearestSearch = SERIAL_KNEAREST,
 ): ProperOutliers {
   const xyz = scaledProperCoordinates(aAu, e, sinI);
   const n = aAu.length;
   const k = options.k;
-  const { scores, calibration, nullTailFraction } = calibratedIsolation(xyz, random, options);
+  const { scores, calibration, nullTailFraction } = calibratedIsolation(xyz, random, options, search);
   const neighbourDistanceMps = new Float64Array(n * k);
   const nearestDistanceMps = new Float64Array(n);
   const kthDistanceMps = new Float64Array(n);
