@@ -15,6 +15,7 @@ import { seededRandom } from '../core/random.js';
 import type { Catalogue } from '../clean/types.js';
 import { DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers, type ProperOutliers } from './families/outliers.js';
 import { clusterFamilies, type FamiliesClustering } from './familiesCluster.js';
+import { pick } from './families/qrlRegion.js';
 import { membershipLabels, nameFamilies, type FamilyName } from './familiesNaming.js';
 import type { FamilyMember } from '../io/familyMembership.js';
 import type { FamiliesOptions } from './familiesOptions.js';
@@ -43,7 +44,7 @@ export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, search: K
   if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`analyseFamilies: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
   if (opts.cutoffMPerS !== null && !(opts.cutoffMPerS > 0)) throw new RangeError(`analyseFamilies: cutoff must be positive m/s, got ${opts.cutoffMPerS}`);
   const screen = screenFamilies(cat);
-  const pickCol = (col: Float64Array) => Float64Array.from(screen.screened, (k) => col[k]);
+  const pickCol = (col: Float64Array) => pick(col, screen.screened);
   const a = pickCol(screen.proper.aAu), e = pickCol(screen.proper.e), sinI = pickCol(screen.proper.sinI);
   const clustering = clusterFamilies(a, e, sinI, opts);
   const user = opts.membership ? membershipLabels(cat, opts.membership) : null;

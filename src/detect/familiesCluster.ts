@@ -36,7 +36,8 @@ export function clusterFamilies(a: Float64Array, e: Float64Array, sinI: Float64A
     }
   }
   // a region without a cutoff is left out of the linking (its bodies read as missing, then as no family)
-  const aUsed = Float64Array.from(a, (v) => (Number.isFinite(cut[regionOfAu(v)]) ? v : NaN));
+  const aUsed = new Float64Array(a.length);
+  for (let k = 0; k < a.length; k++) aUsed[k] = Number.isFinite(cut[regionOfAu(a[k])]) ? a[k] : NaN;
   const used = cut.map((v) => (Number.isFinite(v) ? v : 1)) as [number, number, number];
   const c = clusterByRegion(aUsed, e, sinI, used, opts.minMembers);
   for (let k = 0; k < c.labels.length; k++) if (c.labels[k] < 0) c.labels[k] = LABEL_NOISE;
