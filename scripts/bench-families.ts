@@ -36,7 +36,7 @@ import { loadCatalogue } from '../src/cli/loadCatalogue.js';
 import { seededRandom } from '../src/core/random.js';
 import { clusterHcm } from '../src/detect/families/clusterHcm.js';
 import { buildGridIndex } from '../src/detect/families/gridIndex.js';
-import { startKNearestThreads } from '../src/detect/families/kNearestThreads.js';
+import { startFamiliesThreads } from '../src/detect/families/familiesThreads.js';
 import { toVelocitySpace, type VelocitySpace } from '../src/detect/families/metricVelocity.js';
 import { buildOutlierBackground } from '../src/detect/families/outlierBackground.js';
 import { calibrateIsolation, nullCataloguePlan, nullTailFractions } from '../src/detect/families/outlierCalibration.js';
@@ -247,32 +247,34 @@ async function stages(file: string, seed: number): Promise<{ a: Float64Array; e:
   const [screen, screenS] = timed(() => screenFamilies(cat));
   const a = pick(screen.proper.aAu, screen.screened), e = pick(screen.proper.e, screen.screened), sinI = pick(screen.proper.sinI, screen.screened);
   console.log(`  screen and proper elements ${screenS.toFixed(2)} s: ${fmt(a.length)} screened with trusted proper elements, ${fmt(screen.notScreened['proper-unreliable'])} untrusted`);
-  const [clustering, clusterS] = timed(() => clusterFamilies(a, e, sinI, { ...FAMILIES_DEFAULTS, seed }));
-  console.log(`  clustering incl. QRL ${clusterS.toFixed(2)} s: cutoffs ${clustering.regionCutoffMPerS.map((v) => `${v} m/s`).join(', ')}; ${clustering.table.length} families`);
   const options = DEFAULT_PROPER_OUTLIER_OPTIONS;
   const xyz = scaledProperCoordinates(a, e, sinI);
   const n = a.length;
   const plan = nullCataloguePlan(n, options.replicates, options.nullScoresWanted ?? DEFAULT_NULL_SCORES_WANTED);
   const times: number[] = [];
   const hashes: string[] = [];
-  for (const threads of [1, 2]) {
-    const search = await startKNearestThreads(threads);
+  let clustering: FamiliesClustering | null = null;
+  for (const count of [1, 2]) {
+    const threads = await startFamiliesThreads(count);
     try {
-      const [scores, scoreS] = timed(() => isolationScores(xyz, options, search));
+      const [c, clusterS] = timed(() => clusterFamilies(a, e, sinI, { ...FAMILIES_DEFAULTS, seed }, threads.levels));
+      clustering = c;
+      const [scores, scoreS] = timed(() => isolationScores(xyz, options, threads.search));
       const [tails, nullS] = timed(() => {
         const bg = buildOutlierBackground(xyz, scores, options.weightCap);
-        const cal = calibrateIsolation(bg, n, options, plan.replicates, seededRandom(seed), plan.scoredPerReplicate, search);
+        const cal = calibrateIsolation(bg, n, options, plan.replicates, seededRandom(seed), plan.scoredPerReplicate, threads.search);
         return nullTailFractions(scores.score, cal);
       });
-      times.push(scoreS + nullS);
-      hashes.push(hashArrays([scores.score, scores.neighbours.distance, scores.neighbours.index, tails]));
-      console.log(`  ${threads} thread${threads > 1 ? 's' : ' '}: outlier scoring ${scoreS.toFixed(2)} s, null calibration (${plan.replicates} catalogues, ${fmt(plan.scoredPerReplicate)} scored in each) ${nullS.toFixed(2)} s; k-nearest claims by workers ${search.workerClaims()}`);
+      times.push(clusterS + scoreS + nullS);
+      hashes.push(hashArrays([Float64Array.from(c.regionCutoffMPerS), c.labels, scores.score, scores.neighbours.distance, scores.neighbours.index, tails]));
+      console.log(`  ${count} thread${count > 1 ? 's' : ' '}: clustering incl. QRL ${clusterS.toFixed(2)} s (cutoffs ${c.regionCutoffMPerS.map((v) => `${v}`).join(', ')} m/s, ${c.table.length} families); ` +
+        `outlier scoring ${scoreS.toFixed(2)} s; null calibration (${plan.replicates} catalogues, ${fmt(plan.scoredPerReplicate)} scored in each) ${nullS.toFixed(2)} s; pieces taken by workers ${threads.workerClaims()}`);
     } finally {
-      await search.close();
+      await threads.close();
     }
   }
-  console.log(`  outliers 1 thread / 2 threads: ${(times[0] / times[1]).toFixed(2)}; the same bits: ${hashes[0] === hashes[1] ? 'yes' : 'NO'} (load average ${load()})`);
-  return { a, e, sinI, clustering };
+  console.log(`  clustering + outliers, 1 thread / 2 threads: ${(times[0] / times[1]).toFixed(2)}; the same bits: ${hashes[0] === hashes[1] ? 'yes' : 'NO'} (load average ${load()})`);
+  return { a, e, sinI, clustering: clustering! };
 }
 
 /** Part 3: scikit-learn's DBSCAN against HCM, region by region, on the screened proper elements. */

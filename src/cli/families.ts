@@ -9,7 +9,7 @@
 import { Command } from 'commander';
 import { analyseFamilies, type FamiliesAnalysis } from '../detect/families.js';
 import { FAMILIES_DEFAULTS, type FamiliesOptions } from '../detect/familiesOptions.js';
-import { startKNearestThreads } from '../detect/families/kNearestThreads.js';
+import { startFamiliesThreads } from '../detect/families/familiesThreads.js';
 import { FAMILIES_NOT_SCREENED } from '../detect/familiesScreen.js';
 import type { Catalogue, Reject } from '../clean/types.js';
 import { BELT_REGIONS } from '../detect/families/qrlRegion.js';
@@ -38,7 +38,7 @@ export interface FamiliesCliOptions {
   fap: number;
   cutoff?: number;
   min: number;
-  threads?: number; // threads of the outliers' neighbour searches (outputs identical for any number); default 1
+  threads?: number; // threads of the QRL levels and the outliers' neighbour searches (outputs identical for any number); default 1
 }
 
 export interface FamiliesCliResult {
@@ -128,12 +128,12 @@ export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCli
       ...FAMILIES_DEFAULTS, cutoffMPerS: opts.cutoff ?? null, minMembers: opts.min, fapThreshold: opts.fap,
       published: inputs.published.families, membership: inputs.membership,
     };
-    const search = await startKNearestThreads(opts.threads ?? 1);
+    const threads = await startFamiliesThreads(opts.threads ?? 1);
     let analysis: FamiliesAnalysis;
     try {
-      analysis = analyseFamilies(loaded.catalogue, options, search);
+      analysis = analyseFamilies(loaded.catalogue, options, threads);
     } finally {
-      await search.close();
+      await threads.close();
     }
     const rejects: Reject[] = [...loaded.rejects, ...inputs.membershipRejects.map((e) => ({ kind: 'parse' as const, file: e.file, line: e.line, reason: e.reason, text: e.text }))];
     sortRejectsInPlace(rejects, opts.families ? [...files, opts.families] : files);
@@ -179,7 +179,7 @@ export function registerFamilies(program: Command): void {
     .addOption(withDefault('--fap <p>', 'outliers: candidates below this false-alarm probability', FAMILIES_DEFAULTS.fapThreshold, String(FAMILIES_DEFAULTS.fapThreshold), parseProbabilityLevel))
     .option('--cutoff <m/s>', "one HCM cutoff for every belt region (default: each region's quasi-random level)", parsePositiveNumber)
     .addOption(withDefault('--min <n>', 'fewest members of a family (N_min, ≥ 2)', FAMILIES_DEFAULTS.minMembers, String(FAMILIES_DEFAULTS.minMembers), parseMinMembers))
-    .addOption(withDefault('--threads <n>', "worker threads for the outliers' neighbour searches (outputs identical for any number)", FAMILIES_THREADS_DEFAULT, String(FAMILIES_THREADS_DEFAULT), parsePositiveInteger))
+    .addOption(withDefault('--threads <n>', "worker threads for the QRL levels and the outliers' neighbour searches (outputs identical for any number)", FAMILIES_THREADS_DEFAULT, String(FAMILIES_THREADS_DEFAULT), parsePositiveInteger))
     .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-families', 'wayward-families'))
     .action(async (files: string[], flags: Omit<FamiliesCliOptions, 'files'>) => {
       const r = await runFamilies({ files, ...flags });

@@ -49,7 +49,7 @@ export interface ScanOptions {
   coorbitalPlanet?: PlanetName[]; // --coorbital-planet; default: COORBITAL_DEFAULTS.planets
   coorbitalYears?: number; // N-body window ± years
   coorbitalBudget?: number; // N-body budget, CPU-seconds (bodies at the nominal cost)
-  threads?: number; // worker threads for N-body work, co-orbital predictions and the families' neighbour searches
+  threads?: number; // worker threads for N-body work, co-orbital predictions and the families' QRL levels and neighbour searches
   families?: string; // --families FILE: a user's family membership list naming the clusters
   familyFap?: number; // --family-fap: false-alarm threshold of the family outliers
   familyCutoff?: number; // --family-cutoff: one HCM cutoff (m/s) instead of the quasi-random levels
@@ -238,7 +238,7 @@ export function registerScan(program: Command): void {
       COORBITAL_DEFAULTS.windowYears, String(COORBITAL_DEFAULTS.windowYears), parsePositiveInteger))
     .addOption(withDefault('--coorbital-budget <s>', 'CPU-seconds of N-body confirmation, as a body count at a fixed nominal cost (outputs do not depend on machine speed)',
       COORBITAL_DEFAULTS.budgetCpuSeconds, String(COORBITAL_DEFAULTS.budgetCpuSeconds), parseNonNegativeNumber))
-    .addOption(withDefault('--threads <n>', 'worker threads for co-orbital predictions, N-body work and the families\' neighbour searches (outputs identical for any number)',
+    .addOption(withDefault('--threads <n>', 'worker threads for co-orbital predictions, N-body work and the families\' QRL levels and neighbour searches (outputs identical for any number)',
       COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
     .option('--families <file>', 'family membership list (CSV/TSV: designation and family columns) whose labels name the families found')
     .addOption(withDefault('--family-fap <p>', 'family outliers: candidates below this false-alarm probability',

@@ -7,9 +7,9 @@
  *      (familiesCluster.ts), named from the published list or a user's labels (familiesNaming.ts);
  *   3. outliers: isolation scores with a calibrated null model (families/outliers.ts);
  *      candidates are the bodies outside every family with falseAlarmProb below the threshold
- *      (familiesOutliers.ts). Deterministic for the seed. The k-nearest searches of this
- *      stage run on the scan's threads (DetectorContext.threads; families/kNearestThreads.ts),
- *      with the same numbers on any count.
+ *      (familiesOutliers.ts). Deterministic for the seed.
+ * The QRL levels (stage 2) and the k-nearest searches (stage 3) run on the scan's threads
+ * (DetectorContext.threads; families/familiesThreads.ts), with the same numbers on any count.
  */
 import { seededRandom } from '../core/random.js';
 import type { Catalogue } from '../clean/types.js';
@@ -20,8 +20,7 @@ import { membershipLabels, nameFamilies, type FamilyName } from './familiesNamin
 import type { FamilyMember } from '../io/familyMembership.js';
 import type { FamiliesOptions } from './familiesOptions.js';
 import { familyOutlierCandidates } from './familiesOutliers.js';
-import { SERIAL_KNEAREST, type KNearestSearch } from './families/kNearestSearch.js';
-import { startKNearestThreads } from './families/kNearestThreads.js';
+import { SERIAL_FAMILIES_WORK, startFamiliesThreads, type FamiliesWork } from './families/familiesThreads.js';
 import { FAMILIES_NOT_SCREENED, screenFamilies, type FamiliesScreen } from './familiesScreen.js';
 import type { Candidate, Detector, DetectorResult } from './types.js';
 
@@ -36,21 +35,22 @@ export interface FamiliesAnalysis {
 }
 
 /**
- * Everything the detector finds; `wayward families` writes it all. `search`: the threads the
- * outliers' k-nearest searches run on (startKNearestThreads); the same numbers on any.
+ * Everything the detector finds; `wayward families` writes it all. `work`: the threads the QRL
+ * levels and the outliers' k-nearest searches run on (startFamiliesThreads); the same numbers
+ * on any.
  */
-export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, search: KNearestSearch = SERIAL_KNEAREST): FamiliesAnalysis {
+export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, work: FamiliesWork = SERIAL_FAMILIES_WORK): FamiliesAnalysis {
   if (!(opts.fapThreshold > 0 && opts.fapThreshold <= 1)) throw new RangeError(`analyseFamilies: fapThreshold must be in (0, 1], got ${opts.fapThreshold}`);
   if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`analyseFamilies: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
   if (opts.cutoffMPerS !== null && !(opts.cutoffMPerS > 0)) throw new RangeError(`analyseFamilies: cutoff must be positive m/s, got ${opts.cutoffMPerS}`);
   const screen = screenFamilies(cat);
   const pickCol = (col: Float64Array) => pick(col, screen.screened);
   const a = pickCol(screen.proper.aAu), e = pickCol(screen.proper.e), sinI = pickCol(screen.proper.sinI);
-  const clustering = clusterFamilies(a, e, sinI, opts);
+  const clustering = clusterFamilies(a, e, sinI, opts, work.levels);
   const user = opts.membership ? membershipLabels(cat, opts.membership) : null;
   const names = nameFamilies(clustering.table, clustering.familyRegion, screen.screened, opts.published, user ? user.label : null);
   const k = DEFAULT_PROPER_OUTLIER_OPTIONS.k;
-  const outliers = a.length > k ? properOutliers(a, e, sinI, seededRandom(opts.seed), DEFAULT_PROPER_OUTLIER_OPTIONS, search) : null;
+  const outliers = a.length > k ? properOutliers(a, e, sinI, seededRandom(opts.seed), DEFAULT_PROPER_OUTLIER_OPTIONS, work.search) : null;
   const candidates = outliers
     ? familyOutlierCandidates(cat, screen.screened, a, e, sinI, clustering.labels, clustering.table, names, outliers, opts.fapThreshold)
     : [];
@@ -71,12 +71,12 @@ export const familiesDetector: Detector = {
   notScreenedReasons: FAMILIES_NOT_SCREENED,
   async run(cat, all, ctx): Promise<DetectorResult> {
     ctx?.progress?.start('families');
-    const search = await startKNearestThreads(ctx?.threads ?? 1);
+    const threads = await startFamiliesThreads(ctx?.threads ?? 1);
     let r: FamiliesAnalysis;
     try {
-      r = analyseFamilies(cat, all.families, search);
+      r = analyseFamilies(cat, all.families, threads);
     } finally {
-      await search.close();
+      await threads.close();
     }
     ctx?.progress?.end();
     return { candidates: r.candidates, screened: r.screen.screened.length, notScreened: { ...r.screen.notScreened } };

@@ -48,7 +48,7 @@ export function kNearestOfFirst(grid: KNearestGrid, inputXyz: Float64Array, m: n
  * the roots): row j at d2[j·k …], idx[j·k …]. Queries go in grid order, so neighbouring queries
  * read the same cells (a catalogue's input order is random in space). Each row depends on the
  * grid and its point alone, so any split of the positions gives the same rows: worker threads
- * share the positions this way (kNearestThreads.ts).
+ * share the positions this way (familiesThreads.ts).
  */
 export function kNearestSortedRange(
   grid: KNearestGrid, k: number, m: number, pFirst: number, pEnd: number, d2: Float64Array, idx: Int32Array,

@@ -1,6 +1,6 @@
 /**
  * How the k-nearest rows of a grid are computed: on this thread (SERIAL_KNEAREST), or shared
- * with worker threads (kNearestThreads.ts). Both give the rows of kNearest.ts bit for bit; the
+ * with worker threads (familiesThreads.ts). Both give the rows of kNearest.ts bit for bit; the
  * isolation scores and their null calibration take one and never see the difference.
  */
 import { kNearestAll, kNearestOfFirst, type KNearestResult } from './kNearest.js';

@@ -45,22 +45,51 @@ const FIRST_LIST_M_PER_S = 2 * FIRST_HIGH_M_PER_S;
 
 /** The QRL of the bodies (a, e, sin i). */
 export function quasiRandomLevel(aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, opts: QrlOptions): QrlResult {
-  if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`quasiRandomLevel: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
-  if (!Number.isInteger(opts.backgrounds) || opts.backgrounds < 1) throw new RangeError(`quasiRandomLevel: backgrounds must be a positive integer, got ${opts.backgrounds}`);
-  if (!(opts.resolutionMPerS > 0)) throw new RangeError(`quasiRandomLevel: resolution must be positive m/s, got ${opts.resolutionMPerS}`);
-  const random = seededRandom(opts.seed);
-  const perBackgroundMPerS = new Float64Array(opts.backgrounds);
-  for (let b = 0; b < opts.backgrounds; b++) {
-    const bg = 'cell' in opts.background
-      ? coarseCellBackground(aAu, e, sinI, opts.background.cell, random)
-      : shuffledBackground(aAu, e, sinI, opts.background.binWidthAu, random);
-    const space = toVelocitySpace(bg.aAu, bg.e, bg.sinI, opts.aRefAu);
-    perBackgroundMPerS[b] = groupLevel(space, opts.minMembers, opts.resolutionMPerS);
-  }
+  const spaces = qrlBackgroundSpaces(aAu, e, sinI, opts);
+  const perBackgroundMPerS = Float64Array.from(spaces, (space) => groupLevel(space, opts.minMembers, opts.resolutionMPerS));
   let cutoffMPerS = Infinity;
   for (const v of perBackgroundMPerS) if (v < cutoffMPerS) cutoffMPerS = v;
   return { cutoffMPerS, perBackgroundMPerS };
 }
+
+/**
+ * The random backgrounds of the bodies in velocity space, drawn in order from one generator
+ * seeded with opts.seed: the spaces quasiRandomLevel takes the levels of.
+ */
+export function qrlBackgroundSpaces(aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, opts: QrlOptions): VelocitySpace[] {
+  if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`quasiRandomLevel: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
+  if (!Number.isInteger(opts.backgrounds) || opts.backgrounds < 1) throw new RangeError(`quasiRandomLevel: backgrounds must be a positive integer, got ${opts.backgrounds}`);
+  if (!(opts.resolutionMPerS > 0)) throw new RangeError(`quasiRandomLevel: resolution must be positive m/s, got ${opts.resolutionMPerS}`);
+  const random = seededRandom(opts.seed);
+  const spaces: VelocitySpace[] = [];
+  for (let b = 0; b < opts.backgrounds; b++) {
+    const bg = 'cell' in opts.background
+      ? coarseCellBackground(aAu, e, sinI, opts.background.cell, random)
+      : shuffledBackground(aAu, e, sinI, opts.background.binWidthAu, random);
+    spaces.push(toVelocitySpace(bg.aAu, bg.e, bg.sinI, opts.aRefAu));
+  }
+  return spaces;
+}
+
+/**
+ * The levels of many spaces: each one's groupLevel, NaN where that throws a RangeError (no
+ * level: too few bodies). Serial, or shared with worker threads (familiesThreads.ts); the
+ * same numbers either way.
+ */
+export type LevelRunner = (spaces: readonly VelocitySpace[], minMembers: number, resolution: number) => Float64Array;
+
+/** groupLevel, or NaN where it throws a RangeError. */
+export function levelOrNaN(space: VelocitySpace, minMembers: number, resolution: number): number {
+  try {
+    return groupLevel(space, minMembers, resolution);
+  } catch (err) {
+    if (err instanceof RangeError) return NaN;
+    throw err;
+  }
+}
+
+export const SERIAL_LEVELS: LevelRunner = (spaces, minMembers, resolution) =>
+  Float64Array.from(spaces, (space) => levelOrNaN(space, minMembers, resolution));
 
 /**
  * Largest cutoff (to `resolution`) at which the largest linked group is under `minMembers`.

@@ -1,6 +1,7 @@
 /**
  * The k-nearest search shared with worker threads gives the rows of the serial search bit for
- * bit, and so the same isolation scores and null tail fractions. The outside check of the rows
+ * bit, and so the same isolation scores and null tail fractions; the QRL levels shared with
+ * them are the serial levels (a background with no level is NaN on both). The outside check of the rows
  * is brute force (kNearest.test.ts holds the serial search to it; here, for random point sets,
  * the worker rows are held to brute force directly and to the serial rows). The workers are
  * made to do the whole search (the calling thread claims nothing) with small claims, so rows
@@ -11,7 +12,9 @@ import { seededRandom } from '../../../src/core/random.js';
 import { kNearestAll, kNearestOfFirst } from '../../../src/detect/families/kNearest.js';
 import { cellSizeForOccupancy } from '../../../src/detect/families/kNearestCellSize.js';
 import { buildKNearestGrid } from '../../../src/detect/families/kNearestGrid.js';
-import { startKNearestThreads, type ThreadedKNearest } from '../../../src/detect/families/kNearestThreads.js';
+import { startFamiliesThreads, type FamiliesThreads } from '../../../src/detect/families/familiesThreads.js';
+import { toVelocitySpace } from '../../../src/detect/families/metricVelocity.js';
+import { qrlBackgroundSpaces, SERIAL_LEVELS } from '../../../src/detect/families/qrlCutoff.js';
 import { DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../../../src/detect/families/outliers.js';
 
 /** Points on a lattice of 1/4 (exact ties, duplicates) and free ones, in a 3 × 2 × 2 box. */
@@ -34,12 +37,12 @@ function bruteRow(xyz: Float64Array, j: number, k: number): number[] {
   return pairs.slice(0, k).flatMap(([d2, q]) => [Math.sqrt(d2), q]);
 }
 
-describe('k nearest on worker threads', () => {
-  let workersOnly: ThreadedKNearest;
-  let shared: ThreadedKNearest;
+describe('the families stage on worker threads', () => {
+  let workersOnly: FamiliesThreads;
+  let shared: FamiliesThreads;
   beforeAll(async () => {
-    workersOnly = await startKNearestThreads(3, { chunkPositions: 37, callerClaims: false });
-    shared = await startKNearestThreads(2);
+    workersOnly = await startFamiliesThreads(3, { chunkPositions: 37, callerClaims: false });
+    shared = await startFamiliesThreads(2);
   });
   afterAll(async () => {
     await workersOnly.close();
@@ -49,7 +52,7 @@ describe('k nearest on worker threads', () => {
   it('equal brute force for every point, computed by the workers alone', () => {
     const xyz = points(1500, 7);
     const k = 6;
-    const got = workersOnly.all(buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, 3, 4 * 1500 + 64)), k);
+    const got = workersOnly.search.all(buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, 3, 4 * 1500 + 64)), k);
     expect(workersOnly.workerClaims()).toBeGreaterThanOrEqual(Math.ceil(1500 / 37));
     for (let j = 0; j < 1500; j++) {
       const row: number[] = [];
@@ -64,10 +67,10 @@ describe('k nearest on worker threads', () => {
     const serialAll = kNearestAll(grid, 8);
     const serialFirst = kNearestOfFirst(grid, xyz, 3000, 8);
     for (const search of [workersOnly, shared]) {
-      const all = search.all(grid, 8);
+      const all = search.search.all(grid, 8);
       expect(Buffer.from(all.distance.buffer).equals(Buffer.from(serialAll.distance.buffer))).toBe(true);
       expect(Array.from(all.index)).toEqual(Array.from(serialAll.index));
-      const first = search.ofFirst(grid, xyz, 3000, 8);
+      const first = search.search.ofFirst(grid, xyz, 3000, 8);
       expect(Buffer.from(first.distance.buffer).equals(Buffer.from(serialFirst.distance.buffer))).toBe(true);
       expect(Array.from(first.index)).toEqual(Array.from(serialFirst.index));
     }
@@ -80,18 +83,36 @@ describe('k nearest on worker threads', () => {
     const e = Float64Array.from({ length: n }, () => 0.25 * r());
     const s = Float64Array.from({ length: n }, () => 0.25 * r());
     const one = properOutliers(a, e, s, seededRandom(11));
-    const more = properOutliers(a, e, s, seededRandom(11), DEFAULT_PROPER_OUTLIER_OPTIONS, workersOnly);
+    const more = properOutliers(a, e, s, seededRandom(11), DEFAULT_PROPER_OUTLIER_OPTIONS, workersOnly.search);
     for (const key of ['score', 'nullTailFraction', 'nearestDistanceMps', 'kthDistanceMps', 'neighbourDistanceMps', 'backgroundDensity'] as const) {
       expect(Buffer.from(more[key].buffer).equals(Buffer.from(one[key].buffer)), key).toBe(true);
     }
     expect(Array.from(more.neighbourIndex)).toEqual(Array.from(one.neighbourIndex));
   });
 
+  it('give the QRL levels of one thread, NaN where a background has no level (synthetic belt)', () => {
+    const r = seededRandom(4);
+    const n = 3000;
+    const a = Float64Array.from({ length: n }, () => 2.55 + 0.25 * r());
+    const e = Float64Array.from({ length: n }, () => 0.25 * r());
+    const s = Float64Array.from({ length: n }, () => 0.3 * r());
+    const spaces = qrlBackgroundSpaces(a, e, s, { minMembers: 10, aRefAu: 2.675, backgrounds: 5, seed: 2, background: { cell: { aAu: 0.02, e: 0.02, sinI: 0.02 } }, resolutionMPerS: 0.5 });
+    // two points alone make no group of 10 below the highest cutoff tried: no level (NaN)
+    spaces.push(toVelocitySpace(Float64Array.of(2.6, 2.7), Float64Array.of(0.1, 0.1), Float64Array.of(0.1, 0.1), 2.675));
+    const serial = SERIAL_LEVELS(spaces, 10, 0.5);
+    expect(Number.isNaN(serial[5])).toBe(true);
+    expect(serial.subarray(0, 5).every((v) => v > 0)).toBe(true);
+    const claimed = workersOnly.workerClaims();
+    expect(Array.from(workersOnly.levels(spaces, 10, 0.5))).toEqual(Array.from(serial));
+    expect(workersOnly.workerClaims() - claimed).toBe(spaces.length);
+    expect(Array.from(shared.levels(spaces, 10, 0.5))).toEqual(Array.from(serial));
+  });
+
   it('refuse a k the points cannot supply and a bad thread count (caller misuse)', async () => {
     const xyz = points(5, 9);
     const grid = buildKNearestGrid(xyz, 1);
-    expect(() => shared.all(grid, 5)).toThrow(RangeError);
-    expect(() => shared.ofFirst(grid, xyz, 6, 2)).toThrow(RangeError);
-    await expect(startKNearestThreads(0)).rejects.toThrow(RangeError);
+    expect(() => shared.search.all(grid, 5)).toThrow(RangeError);
+    expect(() => shared.search.ofFirst(grid, xyz, 6, 2)).toThrow(RangeError);
+    await expect(startFamiliesThreads(0)).rejects.toThrow(RangeError);
   });
 });
