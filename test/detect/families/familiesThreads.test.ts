@@ -25,6 +25,14 @@ function points(n: number, seed: number): Float64Array {
   return xyz;
 }
 
+/** n bodies uniform in a from aMin over aSpan au, e and sin i in [0, 0.25) (invented). */
+function uniformBelt(seed: number, n: number, aMin: number, aSpan: number): { a: Float64Array; e: Float64Array; s: Float64Array } {
+  const r = seededRandom(seed);
+  const a = new Float64Array(n), e = new Float64Array(n), s = new Float64Array(n);
+  for (let j = 0; j < n; j++) { a[j] = aMin + aSpan * r(); e[j] = 0.25 * r(); s[j] = 0.25 * r(); }
+  return { a, e, s };
+}
+
 /** The k smallest (squared distance, index) pairs of point j among the others, by brute force. */
 function bruteRow(xyz: Float64Array, j: number, k: number): number[] {
   const pairs: [number, number][] = [];
@@ -77,11 +85,7 @@ describe('the families stage on worker threads', () => {
   });
 
   it('give the same isolation scores and null tail fractions as one thread (synthetic belt)', () => {
-    const r = seededRandom(3);
-    const n = 6000;
-    const a = Float64Array.from({ length: n }, () => 2.2 + 1.0 * r());
-    const e = Float64Array.from({ length: n }, () => 0.25 * r());
-    const s = Float64Array.from({ length: n }, () => 0.25 * r());
+    const { a, e, s } = uniformBelt(3, 6000, 2.2, 1.0);
     const one = properOutliers(a, e, s, seededRandom(11));
     const more = properOutliers(a, e, s, seededRandom(11), DEFAULT_PROPER_OUTLIER_OPTIONS, workersOnly.search);
     for (const key of ['score', 'nullTailFraction', 'nearestDistanceMps', 'kthDistanceMps', 'neighbourDistanceMps', 'backgroundDensity'] as const) {
@@ -91,11 +95,7 @@ describe('the families stage on worker threads', () => {
   });
 
   it('give the QRL levels of one thread, NaN where a background has no level (synthetic belt)', () => {
-    const r = seededRandom(4);
-    const n = 3000;
-    const a = Float64Array.from({ length: n }, () => 2.55 + 0.25 * r());
-    const e = Float64Array.from({ length: n }, () => 0.25 * r());
-    const s = Float64Array.from({ length: n }, () => 0.3 * r());
+    const { a, e, s } = uniformBelt(4, 3000, 2.55, 0.25);
     const spaces = qrlBackgroundSpaces(a, e, s, { minMembers: 10, aRefAu: 2.675, backgrounds: 5, seed: 2, background: { cell: { aAu: 0.02, e: 0.02, sinI: 0.02 } }, resolutionMPerS: 0.5 });
     // two points alone make no group of 10 below the highest cutoff tried: no level (NaN)
     spaces.push(toVelocitySpace(Float64Array.of(2.6, 2.7), Float64Array.of(0.1, 0.1), Float64Array.of(0.1, 0.1), 2.675));
