@@ -15,8 +15,9 @@
  *    also the 2-thread scan with the co-orbital N-body confirmation switched off
  *    (--coorbital-budget 0), to show what the confirmation costs.
  * 2. The families stages in this process on the same file: ingest, screen and proper
- *    elements, clustering (QRL per region and HCM), outlier scoring and null calibration on 1
- *    and 2 threads (and whether their numbers are the same bits).
+ *    elements (and what became of the plants: screened, or set apart with a reason),
+ *    clustering (QRL per region and HCM), outlier scoring and null calibration on 1 and 2
+ *    threads (and whether their numbers are the same bits).
  * 3. scikit-learn's DBSCAN (Debian python3-sklearn, scripts/bench/dbscanSklearn.py) on the same
  *    proper elements, region by region in the same velocity space (reference a the region's
  *    mean a) at the region's cutoff, min_samples = 2, clusters under N_min then turned to
@@ -239,7 +240,7 @@ function endToEnd(file: string, dir: string, planted: readonly string[], budgetF
 }
 
 /** Part 2: the families stages in this process; returns the proper elements and clustering for part 3. */
-async function stages(file: string, seed: number): Promise<{ a: Float64Array; e: Float64Array; sinI: Float64Array; clustering: FamiliesClustering }> {
+async function stages(file: string, seed: number, planted: readonly string[]): Promise<{ a: Float64Array; e: Float64Array; sinI: Float64Array; clustering: FamiliesClustering }> {
   console.log(`2. families stages in this process (load average ${load()})`);
   const [loaded, ingestS] = await timedAsync(() => loadCatalogue([file], {}));
   const cat = loaded.catalogue;
@@ -247,6 +248,14 @@ async function stages(file: string, seed: number): Promise<{ a: Float64Array; e:
   const [screen, screenS] = timed(() => screenFamilies(cat));
   const a = pick(screen.proper.aAu, screen.screened), e = pick(screen.proper.e, screen.screened), sinI = pick(screen.proper.sinI, screen.screened);
   console.log(`  screen and proper elements ${screenS.toFixed(2)} s: ${fmt(a.length)} screened with trusted proper elements, ${fmt(screen.notScreened['proper-unreliable'])} untrusted`);
+  const plantReasons = new Map<string, number>();
+  const plantSet = new Set(planted);
+  for (let k = 0; k < cat.size; k++) {
+    if (!plantSet.has(cat.designation[k])) continue;
+    const why = screen.reason[k] === '' ? 'screened' : screen.reason[k];
+    plantReasons.set(why, (plantReasons.get(why) ?? 0) + 1);
+  }
+  console.log(`  the ${planted.length} planted family outliers: ${[...plantReasons].map(([why, count]) => `${count} ${why}`).join(', ')}`);
   const options = DEFAULT_PROPER_OUTLIER_OPTIONS;
   const xyz = scaledProperCoordinates(a, e, sinI);
   const n = a.length;
@@ -335,7 +344,7 @@ async function main(): Promise<void> {
     const [dump, genS] = await timedAsync(() => writeFamiliesDump(join(dir, 'dump'), o.rows, o.plants, o.seed));
     console.log(`dump: ${fmt(dump.rows)} rows (${fmt(o.rows)} natural + ${o.plants} planted family outliers), seed ${o.seed}, generated in ${genS.toFixed(1)} s (not measured below)`);
     endToEnd(dump.file, dir, dump.planted, o.budgetFree);
-    const s = await stages(dump.file, FAMILIES_DEFAULTS.seed);
+    const s = await stages(dump.file, FAMILIES_DEFAULTS.seed, dump.planted);
     if (o.reference) againstSklearn(s.a, s.e, s.sinI, s.clustering, FAMILIES_DEFAULTS.minMembers);
     else console.log('3. scikit-learn reference skipped (--no-reference)');
   } finally {
