@@ -10,6 +10,7 @@
 import { Command } from 'commander';
 import { analyseFamilies, type FamiliesAnalysis } from '../detect/families.js';
 import { FAMILIES_DEFAULTS, type FamiliesOptions } from '../detect/familiesOptions.js';
+import { startFamiliesThreads } from '../detect/families/familiesThreads.js';
 import { FAMILIES_NOT_SCREENED } from '../detect/familiesScreen.js';
 import { FAP_EXTRAPOLATED_FLAG } from '../detect/familiesOutliers.js';
 import type { Catalogue, Reject } from '../clean/types.js';
@@ -28,7 +29,10 @@ import { markdownTable, textTable } from '../report/textTable.js';
 import { membershipRejectLines, readFamiliesInputs } from './familiesInputs.js';
 import { commandFiles, loadCommandCatalogue } from './commandCatalogue.js';
 import { withDefault } from './optionDefault.js';
-import { parseMinMembers, parsePositiveNumber, parseProbabilityLevel } from './optionParsers.js';
+import { parseMinMembers, parsePositiveInteger, parsePositiveNumber, parseProbabilityLevel } from './optionParsers.js';
+
+/** Threads of `wayward families` by default: the two cores of the reference machine (as scan's --threads). */
+const FAMILIES_THREADS_DEFAULT = 2;
 
 export interface FamiliesCliOptions {
   files: string[]; // empty: the bundled demo catalogue
@@ -38,6 +42,7 @@ export interface FamiliesCliOptions {
   fdr: number;
   cutoff?: number;
   min: number;
+  threads?: number; // threads of the QRL levels and the outliers' neighbour searches (outputs identical for any number); default 1
 }
 
 export interface FamiliesCliResult {
@@ -159,7 +164,13 @@ export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCli
       ...FAMILIES_DEFAULTS, cutoffMPerS: opts.cutoff ?? null, minMembers: opts.min, fapThreshold: opts.fap, fdrLevel: opts.fdr,
       published: inputs.published.families, membership: inputs.membership,
     };
-    const analysis = analyseFamilies(loaded.catalogue, options);
+    const threads = await startFamiliesThreads(opts.threads ?? 1);
+    let analysis: FamiliesAnalysis;
+    try {
+      analysis = analyseFamilies(loaded.catalogue, options, threads);
+    } finally {
+      await threads.close();
+    }
     const rejects: Reject[] = [...loaded.rejects, ...inputs.membershipRejects.map((e) => ({ kind: 'parse' as const, file: e.file, line: e.line, reason: e.reason, text: e.text }))];
     sortRejectsInPlace(rejects, opts.families ? [...files, opts.families] : files);
     const rowsRead = loaded.files.reduce((n, f) => n + f.rows.read, 0);
@@ -206,6 +217,7 @@ export function registerFamilies(program: Command): void {
     .addOption(withDefault('--fdr <q>', 'outliers: marked as surviving the false-discovery control when their Benjamini–Hochberg q-value is below this', FAMILIES_DEFAULTS.fdrLevel, String(FAMILIES_DEFAULTS.fdrLevel), parseProbabilityLevel))
     .option('--cutoff <m/s>', "one HCM cutoff for every belt region (default: each region's quasi-random level)", parsePositiveNumber)
     .addOption(withDefault('--min <n>', 'fewest members of a family (N_min, ≥ 2)', FAMILIES_DEFAULTS.minMembers, String(FAMILIES_DEFAULTS.minMembers), parseMinMembers))
+    .addOption(withDefault('--threads <n>', "worker threads for the QRL levels and the outliers' neighbour searches (outputs identical for any number)", FAMILIES_THREADS_DEFAULT, String(FAMILIES_THREADS_DEFAULT), parsePositiveInteger))
     .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-families', 'wayward-families'))
     .action(async (files: string[], flags: Omit<FamiliesCliOptions, 'files'>) => {
       const r = await runFamilies({ files, ...flags });

@@ -49,7 +49,7 @@ export interface ScanOptions {
   coorbitalPlanet?: PlanetName[]; // --coorbital-planet; default: COORBITAL_DEFAULTS.planets
   coorbitalYears?: number; // N-body window ± years
   coorbitalBudget?: number; // N-body budget, CPU-seconds (bodies at the nominal cost)
-  threads?: number; // worker threads for N-body work and co-orbital predictions
+  threads?: number; // worker threads for N-body work, co-orbital predictions and the families' QRL levels and neighbour searches
   families?: string; // --families FILE: a user's family membership list naming the clusters
   familyFap?: number; // --family-fap: false-alarm threshold of the family outliers
   familyFdr?: number; // --family-fdr: false-discovery level: family outliers with Benjamini–Hochberg q below it are candidates
@@ -83,7 +83,7 @@ function seconds(t0: bigint): number {
  * whose account does not add up to the catalogue (screened + not screened) is a defect.
  */
 async function runDetectors(
-  ids: readonly string[], cat: Catalogue, detOpts: DetectorOptions, timing: Record<string, number>, progress?: Progress,
+  ids: readonly string[], cat: Catalogue, detOpts: DetectorOptions, timing: Record<string, number>, threads: number, progress?: Progress,
 ): Promise<{ runs: DetectorRun[]; candidates: Candidate[] }> {
   const runs: DetectorRun[] = [];
   const candidates: Candidate[] = [];
@@ -91,7 +91,7 @@ async function runDetectors(
     const detector = detectorById(id);
     if (!detector) throw new RangeError(`unknown detector ${id}`);
     const t0 = process.hrtime.bigint();
-    const { candidates: found, ...account } = await detector.run(cat, detOpts, { progress });
+    const { candidates: found, ...account } = await detector.run(cat, detOpts, { progress, threads });
     const offered = account.screened + Object.values(account.notScreened).reduce((a, b) => a + b, 0);
     if (offered !== cat.size) {
       throw new Error(`detector ${id} accounted for ${offered} bodies of ${cat.size} (screened ${account.screened})`);
@@ -168,7 +168,7 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
       membership: familyInputs?.membership ?? null,
     },
   };
-  const { runs, candidates } = await runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, progress);
+  const { runs, candidates } = await runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, opts.threads ?? COORBITAL_DEFAULTS.threads, progress);
   const ranked = rankInPlace(candidates, opts.detectors);
   sortRejectsInPlace(loaded.rejects, files);
   t0 = process.hrtime.bigint();
@@ -240,7 +240,7 @@ export function registerScan(program: Command): void {
       COORBITAL_DEFAULTS.windowYears, String(COORBITAL_DEFAULTS.windowYears), parsePositiveInteger))
     .addOption(withDefault('--coorbital-budget <s>', 'CPU-seconds of N-body confirmation, as a body count at a fixed nominal cost (outputs do not depend on machine speed)',
       COORBITAL_DEFAULTS.budgetCpuSeconds, String(COORBITAL_DEFAULTS.budgetCpuSeconds), parseNonNegativeNumber))
-    .addOption(withDefault('--threads <n>', 'worker threads for co-orbital predictions and N-body work (outputs identical for any number)',
+    .addOption(withDefault('--threads <n>', 'worker threads for co-orbital predictions, N-body work and the families\' QRL levels and neighbour searches (outputs identical for any number)',
       COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
     .option('--families <file>', 'family membership list (CSV/TSV: designation and family columns) whose labels name the families found')
     .addOption(withDefault('--family-fap <p>', 'family outliers: considered below this false-alarm probability',

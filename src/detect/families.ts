@@ -14,15 +14,19 @@
  *      lists the bodies with falseAlarmProb below the threshold, each with its q-value
  *      (familiesOutliers.ts); the detector's candidates in `scan` are those of them with
  *      q below the false-discovery level. Deterministic for the seed.
+ * The QRL levels (stage 2) and the k-nearest searches (stage 3) run on the scan's threads
+ * (DetectorContext.threads; families/familiesThreads.ts), with the same numbers on any count.
  */
 import { seededRandom } from '../core/random.js';
 import type { Catalogue } from '../clean/types.js';
 import { DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers, type ProperOutliers } from './families/outliers.js';
 import { clusterFamilies, type FamiliesClustering } from './familiesCluster.js';
+import { pick } from './families/qrlRegion.js';
 import { membershipLabels, nameFamilies, type FamilyName } from './familiesNaming.js';
 import type { FamilyMember } from '../io/familyMembership.js';
 import type { FamiliesOptions } from './familiesOptions.js';
 import { familyOutlierCandidates } from './familiesOutliers.js';
+import { SERIAL_FAMILIES_WORK, startFamiliesThreads, type FamiliesWork } from './families/familiesThreads.js';
 import { FAMILIES_NOT_SCREENED, screenFamilies, type FamiliesScreen } from './familiesScreen.js';
 import { benjaminiHochbergQValues } from './tailQValues.js';
 import type { Candidate, Detector, DetectorResult } from './types.js';
@@ -41,22 +45,26 @@ export interface FamiliesAnalysis {
   unmatched: FamilyMember[]; // membership lines no catalogue body matched
 }
 
-/** Everything the detector finds; `wayward families` writes it all. */
-export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions): FamiliesAnalysis {
+/**
+ * Everything the detector finds; `wayward families` writes it all. `work`: the threads the QRL
+ * levels and the outliers' k-nearest searches run on (startFamiliesThreads); the same numbers
+ * on any.
+ */
+export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, work: FamiliesWork = SERIAL_FAMILIES_WORK): FamiliesAnalysis {
   if (!(opts.fapThreshold > 0 && opts.fapThreshold <= 1)) throw new RangeError(`analyseFamilies: fapThreshold must be in (0, 1], got ${opts.fapThreshold}`);
   if (!(opts.fdrLevel > 0 && opts.fdrLevel <= 1)) throw new RangeError(`analyseFamilies: fdrLevel must be in (0, 1], got ${opts.fdrLevel}`);
   if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`analyseFamilies: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
   if (opts.cutoffMPerS !== null && !(opts.cutoffMPerS > 0)) throw new RangeError(`analyseFamilies: cutoff must be positive m/s, got ${opts.cutoffMPerS}`);
   const screen = screenFamilies(cat);
-  const pickCol = (col: Float64Array) => Float64Array.from(screen.screened, (k) => col[k]);
+  const pickCol = (col: Float64Array) => pick(col, screen.screened);
   const a = pickCol(screen.proper.aAu), e = pickCol(screen.proper.e), sinI = pickCol(screen.proper.sinI);
-  const clustering = clusterFamilies(a, e, sinI, opts);
+  const clustering = clusterFamilies(a, e, sinI, opts, work.levels);
   const user = opts.membership ? membershipLabels(cat, opts.membership) : null;
   const names = nameFamilies(clustering.table, clustering.familyRegion, screen.screened, opts.published, user ? user.label : null);
   const k = DEFAULT_PROPER_OUTLIER_OPTIONS.k;
   const occupying = occupyingUnreliable(screen, a, e, sinI);
   const space = withOccupying(screen, a, e, sinI, clustering.labels, occupying);
-  const outliers = a.length > k ? properOutliers(space.a, space.e, space.sinI, seededRandom(opts.seed), DEFAULT_PROPER_OUTLIER_OPTIONS, space.scored) : null;
+  const outliers = a.length > k ? properOutliers(space.a, space.e, space.sinI, seededRandom(opts.seed), DEFAULT_PROPER_OUTLIER_OPTIONS, space.scored, work.search) : null;
   const tested = Uint8Array.from(space.labels, (l, j) => (j < a.length && l < 0 ? 1 : 0));
   const qValue = outliers ? benjaminiHochbergQValues(outliers.falseAlarmProb, tested) : null;
   const candidates = outliers && qValue
@@ -130,7 +138,13 @@ export const familiesDetector: Detector = {
   notScreenedReasons: FAMILIES_NOT_SCREENED,
   async run(cat, all, ctx): Promise<DetectorResult> {
     ctx?.progress?.start('families');
-    const r = analyseFamilies(cat, all.families);
+    const threads = await startFamiliesThreads(ctx?.threads ?? 1);
+    let r: FamiliesAnalysis;
+    try {
+      r = analyseFamilies(cat, all.families, threads);
+    } finally {
+      await threads.close();
+    }
     ctx?.progress?.end();
     return { candidates: r.fdrCandidates, screened: r.screen.screened.length, notScreened: { ...r.screen.notScreened } };
   },

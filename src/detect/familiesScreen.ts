@@ -64,7 +64,11 @@ export function screenFamilies(cat: Catalogue): FamiliesScreen {
   for (const epoch of epochs) {
     const rows = byEpoch.get(epoch)!;
     const model = planetarySecularModel(epoch);
-    const pickCol = (col: Float64Array) => Float64Array.from(rows, (k) => col[k]);
+    const pickCol = (col: Float64Array) => {
+      const picked = new Float64Array(rows.length); // a plain loop: Float64Array.from with a map function took 1 s on a million rows
+      for (let m = 0; m < rows.length; m++) picked[m] = col[rows[m]];
+      return picked;
+    };
     const out = newProperColumns(rows.length);
     properElementsColumns(model, { a: pickCol(cat.a), e: pickCol(cat.e), i: pickCol(cat.i), node: pickCol(cat.node), peri: pickCol(cat.peri) }, out);
     rows.forEach((k, m) => {

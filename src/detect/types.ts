@@ -52,6 +52,7 @@ export interface DetectorResult extends ScreeningAccount {
 /** What a run may use besides the catalogue and options. */
 export interface DetectorContext {
   progress?: Progress;
+  threads?: number; // worker threads a detector may use besides the options' own (outputs identical for any number); default 1
 }
 
 /** Options of the Tisserand screen (see detect/tisserand.ts for the sourced defaults). */

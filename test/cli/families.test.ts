@@ -111,6 +111,22 @@ describe('wayward families on a synthetic belt', () => {
     for (const f of OUTPUTS) expect(readFileSync(join(again, f)), f).toEqual(readFileSync(join(out, f)));
   });
 
+  it('writes the same bytes on 1 and on 2 threads, in the command and in scan', () => {
+    const one = join(dir, 'threads-1'), two = join(dir, 'threads-2');
+    expect(runCli(['families', file, '--families', labels, '--threads', '1', '--out', one]).status).toBe(0);
+    expect(runCli(['families', file, '--families', labels, '--threads', '2', '--out', two]).status).toBe(0);
+    for (const f of OUTPUTS) expect(readFileSync(join(two, f)), f).toEqual(readFileSync(join(one, f)));
+    const scanOne = join(dir, 'scan-threads-1'), scanTwo = join(dir, 'scan-threads-2');
+    for (const [t, o] of [['1', scanOne], ['2', scanTwo]]) {
+      const r = runCli(['scan', file, '--detectors', 'tisserand,families', '--families', labels, '--threads', t, '--reproducible', '--out', o]);
+      expect(r.status, r.stderr).toBe(0);
+    }
+    for (const f of ['candidates.jsonl', 'candidates.csv', 'rejects.csv', 'summary.json', 'report.md']) {
+      expect(readFileSync(join(scanTwo, f)), f).toEqual(readFileSync(join(scanOne, f)));
+    }
+    expect(readFileSync(join(scanOne, 'candidates.jsonl'), 'utf8')).toContain('family-outlier');
+  });
+
   it('stops with exit 1 and the file named when the membership list cannot be read', () => {
     const r = runCli(['families', file, '--families', join(dir, 'missing.csv'), '--out', join(dir, 'none')]);
     expect(r.status).toBe(1);

@@ -24,12 +24,8 @@ export function kNearestAll(grid: KNearestGrid, k: number): KNearestResult {
   checkK(k, grid.count - 1);
   const distance = new Float64Array(grid.count * k);
   const index = new Int32Array(grid.count * k);
-  const xyz = grid.sortedXyz;
-  for (let p = 0; p < grid.count; p++) {
-    const j = grid.order[p];
-    searchOne(grid, xyz[3 * p], xyz[3 * p + 1], xyz[3 * p + 2], j, k, distance, index, j * k);
-  }
-  return finish(k, distance, index);
+  kNearestSortedRange(grid, k, grid.count, 0, grid.count, distance, index);
+  return finishKNearest(k, distance, index);
 }
 
 /**
@@ -39,13 +35,30 @@ export function kNearestAll(grid: KNearestGrid, k: number): KNearestResult {
  */
 export function kNearestOfFirst(grid: KNearestGrid, inputXyz: Float64Array, m: number, k: number): KNearestResult {
   checkK(k, grid.count - 1);
-  if (!Number.isInteger(m) || m < 0 || m > grid.count || inputXyz.length !== 3 * grid.count) {
-    throw new RangeError(`kNearestOfFirst: m must be a whole number up to ${grid.count} with the grid's ${grid.count} input points, got m = ${m} and ${inputXyz.length / 3} points`);
-  }
+  checkOfFirst(grid, inputXyz, m);
   const distance = new Float64Array(m * k);
   const index = new Int32Array(m * k);
-  for (let j = 0; j < m; j++) searchOne(grid, inputXyz[3 * j], inputXyz[3 * j + 1], inputXyz[3 * j + 2], j, k, distance, index, j * k);
-  return finish(k, distance, index);
+  kNearestSortedRange(grid, k, m, 0, grid.count, distance, index);
+  return finishKNearest(k, distance, index);
+}
+
+/**
+ * The rows of the grid points at sorted positions pFirst … pEnd − 1 (half-open) whose input
+ * index is below m, as kNearestAll gives them but with squared distances (finishKNearest takes
+ * the roots): row j at d2[j·k …], idx[j·k …]. Queries go in grid order, so neighbouring queries
+ * read the same cells (a catalogue's input order is random in space). Each row depends on the
+ * grid and its point alone, so any split of the positions gives the same rows: worker threads
+ * share the positions this way (familiesThreads.ts).
+ */
+export function kNearestSortedRange(
+  grid: KNearestGrid, k: number, m: number, pFirst: number, pEnd: number, d2: Float64Array, idx: Int32Array,
+): void {
+  const xyz = grid.sortedXyz;
+  const order = grid.order;
+  for (let p = pFirst; p < pEnd; p++) {
+    const j = order[p];
+    if (j < m) searchOne(grid, xyz[3 * p], xyz[3 * p + 1], xyz[3 * p + 2], j, k, d2, idx, j * k);
+  }
 }
 
 /** The k nearest grid points of arbitrary query points (interleaved xyz). Needs k ≤ grid points. */
@@ -55,17 +68,24 @@ export function kNearestOf(grid: KNearestGrid, queryXyz: Float64Array, k: number
   const distance = new Float64Array(m * k);
   const index = new Int32Array(m * k);
   for (let q = 0; q < m; q++) searchOne(grid, queryXyz[3 * q], queryXyz[3 * q + 1], queryXyz[3 * q + 2], -1, k, distance, index, q * k);
-  return finish(k, distance, index);
+  return finishKNearest(k, distance, index);
 }
 
-function checkK(k: number, available: number): void {
+/** RangeError unless m is a whole number of the grid's points and inputXyz the grid's input. */
+export function checkOfFirst(grid: KNearestGrid, inputXyz: Float64Array, m: number): void {
+  if (!Number.isInteger(m) || m < 0 || m > grid.count || inputXyz.length !== 3 * grid.count) {
+    throw new RangeError(`kNearestOfFirst: m must be a whole number up to ${grid.count} with the grid's ${grid.count} input points, got m = ${m} and ${inputXyz.length / 3} points`);
+  }
+}
+
+export function checkK(k: number, available: number): void {
   if (!Number.isInteger(k) || k < 1 || k > available) {
     throw new RangeError(`k nearest: k must be an integer from 1 to ${available}, got ${k}`);
   }
 }
 
-/** Squared distances were kept during the search; return distances. */
-function finish(k: number, d2: Float64Array, index: Int32Array): KNearestResult {
+/** Squared distances were kept during the search; return distances (in place). */
+export function finishKNearest(k: number, d2: Float64Array, index: Int32Array): KNearestResult {
   for (let t = 0; t < d2.length; t++) d2[t] = Math.sqrt(d2[t]);
   return { k, distance: d2, index };
 }

@@ -23,6 +23,7 @@ import type { Random } from '../../core/random.js';
 import { upperTailFraction } from '../empiricalTail.js';
 import { fitUpperTail, upperTailProbabilities, type UpperTailFitResult } from '../tailExtrapolation.js';
 import type { OutlierBackground } from './outlierBackground.js';
+import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 import { nullReplicateScores } from './outlierNullReplicate.js';
 import type { IsolationOptions } from './outlierScore.js';
 
@@ -51,7 +52,7 @@ function tailStart(poolSize: number): number {
 
 export function calibrateIsolation(
   bg: OutlierBackground, catalogueSize: number, opts: IsolationOptions, replicates: number, random: Random,
-  scoredPerReplicate: number = catalogueSize,
+  scoredPerReplicate: number = catalogueSize, search: KNearestSearch = SERIAL_KNEAREST,
 ): OutlierCalibration {
   if (!Number.isInteger(replicates) || replicates < 1) throw new RangeError(`calibrateIsolation: replicates must be a positive integer, got ${replicates}`);
   if (!Number.isInteger(scoredPerReplicate) || scoredPerReplicate < 1) {
@@ -60,7 +61,7 @@ export function calibrateIsolation(
   const scored = Math.min(scoredPerReplicate, catalogueSize);
   const parts: Float64Array[] = [];
   for (let r = 0; r < replicates; r++) {
-    parts.push(nullReplicateScores(bg, catalogueSize, opts, scored, random));
+    parts.push(nullReplicateScores(bg, catalogueSize, opts, scored, random, search));
   }
   const pooled = concatenated(parts);
   pooled.sort();

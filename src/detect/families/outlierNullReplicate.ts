@@ -6,17 +6,21 @@
  * a scored parent are scored: the first `scored` of those in draw order (independent draws, so a
  * random sample of them), the others still occupy space for the neighbour search and the coarse
  * background, as the observed bodies set apart do. Without marks: the first `scored` bodies.
- * Data in, data out (the generator is advanced by the draws), for a caller on any thread.
+ * Data in, data out (the generator is advanced by the draws), for a caller on any thread;
+ * `search`: which threads the k-nearest searches run on (the same numbers on any).
  */
 import type { Random } from '../../core/random.js';
 import { drawFromBackground, type OutlierBackground } from './outlierBackground.js';
+import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 import { isolationScoresOfFirst, type IsolationOptions } from './outlierScore.js';
 
-export function nullReplicateScores(bg: OutlierBackground, catalogueSize: number, opts: IsolationOptions, scored: number, random: Random): Float64Array {
-  if (bg.scoredParent === null) return isolationScoresOfFirst(drawFromBackground(bg, catalogueSize, random), opts, Math.min(scored, catalogueSize));
+export function nullReplicateScores(bg: OutlierBackground, catalogueSize: number, opts: IsolationOptions, scored: number, random: Random,
+  search: KNearestSearch = SERIAL_KNEAREST,
+): Float64Array {
+  if (bg.scoredParent === null) return isolationScoresOfFirst(drawFromBackground(bg, catalogueSize, random), opts, Math.min(scored, catalogueSize), search);
   const parent = new Int32Array(catalogueSize);
   const drawn = drawFromBackground(bg, catalogueSize, random, parent);
-  return isolationScoresOfFirst(scoredFirst(drawn, parent, bg.scoredParent), opts, Math.min(scored, countScored(parent, bg.scoredParent)));
+  return isolationScoresOfFirst(scoredFirst(drawn, parent, bg.scoredParent), opts, Math.min(scored, countScored(parent, bg.scoredParent)), search);
 }
 
 function countScored(parent: Int32Array, mark: Uint8Array): number {

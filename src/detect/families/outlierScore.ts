@@ -25,7 +25,8 @@
  */
 import { cellSizeForOccupancy } from './kNearestCellSize.js';
 import { buildKNearestGrid } from './kNearestGrid.js';
-import { kNearestAll, kNearestOfFirst, type KNearestResult } from './kNearest.js';
+import type { KNearestResult } from './kNearest.js';
+import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 import { coarseDensity, densityAt, type CoarseDensity } from './outlierDensity.js';
 
 export interface IsolationOptions {
@@ -50,11 +51,11 @@ export interface IsolationScores {
   readonly background: CoarseDensity; // the coarse grid it was read from
 }
 
-/** Scores a catalogue of scaled coordinates (interleaved xyz). Needs more than k bodies. */
-export function isolationScores(xyz: Float64Array, opts: IsolationOptions): IsolationScores {
+/** Scores a catalogue of scaled coordinates (interleaved xyz). Needs more than k bodies. `search`: on which threads (the same rows). */
+export function isolationScores(xyz: Float64Array, opts: IsolationOptions, search: KNearestSearch = SERIAL_KNEAREST): IsolationScores {
   const n = xyz.length / 3;
   const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, opts.gridPerCell, maxCellsFor(n)));
-  const neighbours = kNearestAll(grid, opts.k);
+  const neighbours = search.all(grid, opts.k);
   const background = coarseDensity(xyz, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCellsFor(n)));
   const backgroundDensity = new Float64Array(n);
   const score = scoresFrom(xyz, n, neighbours, background, backgroundDensity);
@@ -67,10 +68,10 @@ export function isolationScores(xyz: Float64Array, opts: IsolationOptions): Isol
  * bit for bit. For null catalogues of independent draws, whose first m bodies are a random
  * sample of them.
  */
-export function isolationScoresOfFirst(xyz: Float64Array, opts: IsolationOptions, m: number): Float64Array {
+export function isolationScoresOfFirst(xyz: Float64Array, opts: IsolationOptions, m: number, search: KNearestSearch = SERIAL_KNEAREST): Float64Array {
   const n = xyz.length / 3;
   const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, opts.gridPerCell, maxCellsFor(n)));
-  const neighbours = kNearestOfFirst(grid, xyz, m, opts.k);
+  const neighbours = search.ofFirst(grid, xyz, m, opts.k);
   const background = coarseDensity(xyz, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCellsFor(n)));
   return scoresFrom(xyz, m, neighbours, background, new Float64Array(m));
 }

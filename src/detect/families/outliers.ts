@@ -23,6 +23,7 @@ import { buildOutlierBackground } from './outlierBackground.js';
 import { calibrateIsolation, nullCataloguePlan, nullFalseAlarmProbs, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
 import type { UpperTailFitResult } from '../tailExtrapolation.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores, type IsolationOptions, type IsolationScores } from './outlierScore.js';
+import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 
 export interface ProperOutlierOptions extends IsolationOptions {
   replicates: number; // at most this many synthetic null catalogues (outlierCalibration.ts nullCataloguePlan)
@@ -67,9 +68,12 @@ export interface ProperOutliers {
 
 /**
  * Scores, background, calibration, null tail fractions and false-alarm probabilities of a
- * catalogue in scaled coordinates; with `scored`, only the marked bodies are scored (NaN elsewhere).
+ * catalogue in scaled coordinates; with `scored`, only the marked bodies are scored (NaN elsewhere);
+ * `search`: on which threads the k-nearest searches run (the same numbers on any).
  */
-export function calibratedIsolation(xyz: Float64Array, random: Random, options: ProperOutlierOptions, scored: Uint8Array | null = null): {
+export function calibratedIsolation(
+  xyz: Float64Array, random: Random, options: ProperOutlierOptions, scored: Uint8Array | null = null, search: KNearestSearch = SERIAL_KNEAREST,
+): {
   scores: IsolationScores; calibration: OutlierCalibration; nullTailFraction: Float64Array; falseAlarmProb: Float64Array; falseAlarmFrom: Uint8Array;
 } {
   const n = xyz.length / 3;
@@ -78,10 +82,10 @@ export function calibratedIsolation(xyz: Float64Array, random: Random, options: 
   if (scored !== null && scored.length !== n) throw new RangeError(`calibratedIsolation: ${scored.length} scored marks for ${n} bodies`);
   const nScored = scored === null ? n : scored.reduce((s, v) => s + (v !== 0 ? 1 : 0), 0);
   if (nScored < 1) throw new RangeError('calibratedIsolation: no body is marked to be scored');
-  const scores = isolationScores(xyz, options);
+  const scores = isolationScores(xyz, options, search);
   const background = buildOutlierBackground(xyz, scores, options.weightCap, scored);
   const plan = nullCataloguePlan(nScored, options.replicates, options.nullScoresWanted ?? DEFAULT_NULL_SCORES_WANTED);
-  const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate);
+  const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate, search);
   const nullTailFraction = nullTailFractions(scores.score, calibration);
   const fap = nullFalseAlarmProbs(scores.score, calibration);
   if (scored !== null) {
@@ -93,11 +97,12 @@ export function calibratedIsolation(xyz: Float64Array, random: Random, options: 
 export function properOutliers(
   aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, random: Random,
   options: ProperOutlierOptions = DEFAULT_PROPER_OUTLIER_OPTIONS, scored: Uint8Array | null = null,
+  search: KNearestSearch = SERIAL_KNEAREST,
 ): ProperOutliers {
   const xyz = scaledProperCoordinates(aAu, e, sinI);
   const n = aAu.length;
   const k = options.k;
-  const { scores, calibration, nullTailFraction, falseAlarmProb, falseAlarmFrom } = calibratedIsolation(xyz, random, options, scored);
+  const { scores, calibration, nullTailFraction, falseAlarmProb, falseAlarmFrom } = calibratedIsolation(xyz, random, options, scored, search);
   const neighbourDistanceMps = new Float64Array(n * k);
   const nearestDistanceMps = new Float64Array(n);
   const kthDistanceMps = new Float64Array(n);

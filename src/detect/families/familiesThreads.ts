@@ -1,0 +1,165 @@
+/**
+ * The families stage's heavy pieces shared with worker threads (familiesWorker.ts), behind the
+ * same synchronous calls as their serial forms, so the callers run unchanged:
+ *   - the k-nearest search of the outliers (kNearestSearch.ts: all points, the first m);
+ *   - the levels of the QRL backgrounds (qrlCutoff.ts LevelRunner).
+ * A job copies its inputs into shared memory and is handed to every worker; the calling thread
+ * claims pieces alongside them from one shared counter, then blocks on a shared counter
+ * (Atomics.wait) until every worker is done. Each piece depends on its own inputs alone (a
+ * row on the grid and its point; a level on its background), so the results are the serial
+ * ones bit for bit, whichever thread computed them and in whatever order.
+ */
+import { MessageChannel, receiveMessageOnPort, type MessagePort, type Worker } from 'node:worker_threads';
+import { startSiblingWorker } from '../../core/moduleWorker.js';
+import { checkK, checkOfFirst, finishKNearest, type KNearestResult } from './kNearest.js';
+import type { KNearestGrid } from './kNearestGrid.js';
+import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
+import type { VelocitySpace } from './metricVelocity.js';
+import { SERIAL_LEVELS, type LevelRunner } from './qrlCutoff.js';
+import {
+  CONTROL_SLOTS, FAILED, runClaims, WORKER_CLAIMS, WORKERS_DONE, type FamiliesJob, type FamiliesWorkerData,
+} from './familiesWorker.js';
+
+/**
+ * Sorted positions per k-nearest claim, at most: at 3–5 µs a query (1.5 million bodies, 4 a
+ * cell) a claim takes 10–20 ms, long against an atomic add, short enough that the threads end
+ * together; a small grid is cut into about 8 claims a thread, none under 64 positions (our choice).
+ */
+export const KNEAREST_CHUNK_POSITIONS = 4096;
+const CLAIMS_PER_THREAD = 8;
+const MIN_CHUNK_POSITIONS = 64;
+
+/** How long one wait lasts before the workers are checked for having stopped (ms; our choice). */
+const WAIT_SLICE_MS = 1000;
+
+export interface FamiliesThreadOptions {
+  chunkPositions?: number; // sorted positions per k-nearest claim; default from the grid's size (above)
+  callerClaims?: boolean; // the calling thread takes claims too (default true; false: the workers do all, for tests)
+}
+
+/** The work of the families stage that threads may share. */
+export interface FamiliesWork {
+  readonly search: KNearestSearch;
+  readonly levels: LevelRunner;
+}
+
+export const SERIAL_FAMILIES_WORK: FamiliesWork = { search: SERIAL_KNEAREST, levels: SERIAL_LEVELS };
+
+export interface FamiliesThreads extends FamiliesWork {
+  readonly threads: number; // this thread and threads − 1 workers
+  workerClaims(): number; // pieces the workers took in the jobs so far (the rest: this thread)
+  close(): Promise<void>; // stops the workers
+}
+
+/** The families' work on `threads` threads (this one included); 1: serial, no worker. */
+export async function startFamiliesThreads(threads: number, options: FamiliesThreadOptions = {}): Promise<FamiliesThreads> {
+  if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`startFamiliesThreads: threads must be a positive integer, got ${threads}`);
+  const fixedChunk = options.chunkPositions;
+  if (fixedChunk !== undefined && !(Number.isInteger(fixedChunk) && fixedChunk >= 1)) throw new RangeError(`startFamiliesThreads: chunkPositions must be a positive integer, got ${fixedChunk}`);
+  if (threads === 1) return { ...SERIAL_FAMILIES_WORK, threads, workerClaims: () => 0, close: async () => {} };
+  const { workers, errorPorts } = await startWorkers(threads - 1);
+  let claimsByWorkers = 0;
+  /** Runs a job on every thread and returns when all are done. */
+  const runJob = (job: FamiliesJob): void => {
+    for (const w of workers) w.postMessage(job);
+    if (options.callerClaims ?? true) runClaims(job);
+    waitForWorkers(job.control, workers);
+    claimsByWorkers += Atomics.load(job.control, WORKER_CLAIMS);
+    if (Atomics.load(job.control, FAILED) !== 0) {
+      const messages = errorPorts.map((p) => receiveMessageOnPort(p)?.message).filter((x) => x !== undefined);
+      throw new Error(`families: a worker thread failed: ${messages.join('; ')}`);
+    }
+  };
+  const kNearest = (grid: KNearestGrid, k: number, m: number): KNearestResult => {
+    const chunk = fixedChunk ?? Math.max(MIN_CHUNK_POSITIONS, Math.min(KNEAREST_CHUNK_POSITIONS, Math.ceil(grid.count / (CLAIMS_PER_THREAD * threads))));
+    const job: FamiliesJob = {
+      kind: 'k-nearest', grid: sharedGrid(grid), k, m, chunk,
+      d2: new Float64Array(new SharedArrayBuffer(8 * m * k)), idx: new Int32Array(new SharedArrayBuffer(4 * m * k)), control: newControl(),
+    };
+    runJob(job);
+    return finishKNearest(k, job.d2, job.idx);
+  };
+  const search: KNearestSearch = {
+    all(grid, k) {
+      checkK(k, grid.count - 1);
+      return kNearest(grid, k, grid.count);
+    },
+    ofFirst(grid, inputXyz, m, k) {
+      checkK(k, grid.count - 1);
+      checkOfFirst(grid, inputXyz, m);
+      return kNearest(grid, k, m);
+    },
+  };
+  const levels: LevelRunner = (spaces, minMembers, resolution) => {
+    const job: FamiliesJob = {
+      kind: 'levels', spaces: spaces.map(sharedSpace), minMembers, resolution,
+      levels: new Float64Array(new SharedArrayBuffer(8 * spaces.length)), control: newControl(),
+    };
+    runJob(job);
+    return Float64Array.from(job.levels);
+  };
+  return {
+    threads, search, levels,
+    workerClaims: () => claimsByWorkers,
+    async close() {
+      await Promise.all(workers.map((w) => w.terminate()));
+      for (const p of errorPorts) p.close();
+    },
+  };
+}
+
+/** Starts the workers, each with a port for its error messages, and waits until each is ready. */
+async function startWorkers(count: number): Promise<{ workers: Worker[]; errorPorts: MessagePort[] }> {
+  const data: FamiliesWorkerData = { familiesWorker: true };
+  const workers: Worker[] = [];
+  const errorPorts: MessagePort[] = [];
+  try {
+    for (let t = 0; t < count; t++) {
+      const w = startSiblingWorker(import.meta.url, 'familiesWorker', data);
+      workers.push(w);
+      const channel = new MessageChannel();
+      errorPorts.push(channel.port1);
+      await new Promise<void>((resolve, reject) => {
+        w.once('message', () => resolve());
+        w.once('error', (e) => reject(new Error(`families worker failed to start: ${e.message}`)));
+        w.postMessage({ errors: channel.port2 }, [channel.port2]);
+      });
+    }
+  } catch (err) {
+    await Promise.all(workers.map((w) => w.terminate()));
+    throw err;
+  }
+  return { workers, errorPorts };
+}
+
+const newControl = (): Int32Array => new Int32Array(new SharedArrayBuffer(4 * CONTROL_SLOTS));
+
+/** Blocks until every worker has counted itself done; throws if one has stopped running. */
+function waitForWorkers(control: Int32Array, workers: readonly Worker[]): void {
+  for (;;) {
+    const done = Atomics.load(control, WORKERS_DONE);
+    if (done >= workers.length) return;
+    if (Atomics.wait(control, WORKERS_DONE, done, WAIT_SLICE_MS) === 'timed-out' && workers.some((w) => w.threadId === -1)) {
+      throw new Error('families: a worker thread stopped before finishing its share');
+    }
+  }
+}
+
+function sharedCopy(a: Float64Array): Float64Array {
+  const s = new Float64Array(new SharedArrayBuffer(a.byteLength));
+  s.set(a);
+  return s;
+}
+
+/** The grid with its per-point arrays copied into shared memory. */
+function sharedGrid(g: KNearestGrid): KNearestGrid {
+  const cellStart = new Uint32Array(new SharedArrayBuffer(g.cellStart.byteLength));
+  cellStart.set(g.cellStart);
+  const order = new Uint32Array(new SharedArrayBuffer(g.order.byteLength));
+  order.set(g.order);
+  return { count: g.count, cellSize: g.cellSize, origin: g.origin, dims: g.dims, cellStart, order, sortedXyz: sharedCopy(g.sortedXyz) };
+}
+
+function sharedSpace(s: VelocitySpace): VelocitySpace {
+  return { xMPerS: sharedCopy(s.xMPerS), yMPerS: sharedCopy(s.yMPerS), zMPerS: sharedCopy(s.zMPerS), aRefAu: s.aRefAu };
+}

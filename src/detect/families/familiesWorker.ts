@@ -1,0 +1,82 @@
+/**
+ * Worker-thread side of the families stage's shared work (familiesThreads.ts). A job lives in
+ * shared memory; every thread on it, the calling one included, claims pieces from one shared
+ * counter and runs them with the same pure function a single thread runs:
+ *   - 'k-nearest': chunks of grid positions, filled by kNearestSortedRange (kNearest.ts);
+ *   - 'levels': one QRL background each, its level by levelOrNaN (qrlCutoff.ts).
+ * A worker counts itself done when no piece is left.
+ */
+import { parentPort, workerData, type MessagePort } from 'node:worker_threads';
+import { kNearestSortedRange } from './kNearest.js';
+import type { KNearestGrid } from './kNearestGrid.js';
+import type { VelocitySpace } from './metricVelocity.js';
+import { levelOrNaN } from './qrlCutoff.js';
+
+/** Marks this module's workerData (the module is also imported by the main thread). */
+export interface FamiliesWorkerData { familiesWorker: true }
+
+/** Slots of the shared control array. */
+export const NEXT_CLAIM = 0; // next piece to claim
+export const WORKERS_DONE = 1; // workers finished with the job
+export const FAILED = 2; // 1 when a worker failed (its message is on its error port)
+export const WORKER_CLAIMS = 3; // pieces the workers took
+export const CONTROL_SLOTS = 4;
+
+/** k nearest of the grid points at input indices below m, in chunks of sorted positions. */
+export interface KNearestJob {
+  kind: 'k-nearest';
+  grid: KNearestGrid; // every array on shared memory
+  k: number;
+  m: number;
+  chunk: number; // sorted positions per claim
+  d2: Float64Array; // shared output rows, squared distances
+  idx: Int32Array; // shared output rows, input indices
+  control: Int32Array;
+}
+
+/** The QRL level of each space, one space a claim. */
+export interface LevelsJob {
+  kind: 'levels';
+  spaces: VelocitySpace[]; // coordinates on shared memory
+  minMembers: number;
+  resolution: number;
+  levels: Float64Array; // shared output, one per space
+  control: Int32Array;
+}
+
+export type FamiliesJob = KNearestJob | LevelsJob;
+
+/** Claims pieces of the job until none is left, filling their outputs; returns how many it took. */
+export function runClaims(job: FamiliesJob): number {
+  const pieces = job.kind === 'levels' ? job.spaces.length : Math.ceil(job.grid.count / job.chunk);
+  for (let claims = 0; ; claims++) {
+    const piece = Atomics.add(job.control, NEXT_CLAIM, 1);
+    if (piece >= pieces) return claims;
+    if (job.kind === 'levels') {
+      job.levels[piece] = levelOrNaN(job.spaces[piece], job.minMembers, job.resolution);
+    } else {
+      const first = piece * job.chunk;
+      kNearestSortedRange(job.grid, job.k, job.m, first, Math.min(job.grid.count, first + job.chunk), job.d2, job.idx);
+    }
+  }
+}
+
+if (workerData !== null && typeof workerData === 'object' && 'familiesWorker' in workerData && parentPort !== null) {
+  const port = parentPort;
+  let errors: MessagePort | null = null; // the first message hands the port errors are reported on
+  port.on('message', (msg: FamiliesJob | { errors: MessagePort }) => {
+    if ('errors' in msg) {
+      errors = msg.errors;
+      port.postMessage('ready');
+      return;
+    }
+    try {
+      Atomics.add(msg.control, WORKER_CLAIMS, runClaims(msg));
+    } catch (err) {
+      errors?.postMessage(err instanceof Error ? err.message : String(err));
+      Atomics.store(msg.control, FAILED, 1);
+    }
+    Atomics.add(msg.control, WORKERS_DONE, 1);
+    Atomics.notify(msg.control, WORKERS_DONE);
+  });
+}
