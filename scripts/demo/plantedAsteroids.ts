@@ -86,7 +86,7 @@ export function planAsteroidPlants(random: Random, coorbitals: readonly Coorbita
     out.push({ ...p, coorbital: c });
   }
   for (const o of outliers) {
-    const note = `main-belt body isolated in proper elements: nearest drawn body ${o.nearestMPerS.toFixed(0)} m/s, 8th nearest ${o.eighthMPerS.toFixed(0)} m/s (families-truth.csv)`;
+    const note = `main-belt body at the centre of an empty pocket in proper elements (radius ${o.pocket.radiusMPerS} m/s, ${o.expectedInPocket.toFixed(0)} background bodies expected there): nearest drawn body ${o.nearestMPerS.toFixed(0)} m/s, 8th nearest ${o.eighthMPerS.toFixed(0)} m/s (families-truth.csv)`;
     out.push({ ...finish(random, 'family-outlier', 'families', false, { ...o.el }, note), outlier: o });
   }
   return out;

@@ -1,129 +1,85 @@
 /**
- * Planted isolated bodies for the families detector: main-belt bodies placed, in proper
- * elements, in the emptiest places of the drawn catalogue, inside boxes where the families
- * stage trusts the secular theory with a margin (away from mean-motion bands, from the
- * Mars-crossing edge, from the e and sin i limits of reliability.ts, and from the demo's
- * own T_J rule in the outer belt).
+ * Planted isolated bodies for the families detector: one main-belt body at the centre of each
+ * empty pocket the background is drawn around (mainBeltBackground.ts POCKETS): a ball in the
+ * families metric (Zappalà et al. 1990, outlierMetric.ts) inside the populated, trusted part of
+ * the belt, where the smooth background density predicts tens of bodies and the generator
+ * leaves none. A body stands out against the whole catalogue only there: in a sparse region
+ * the smooth null model itself makes such gaps.
  *
- * By construction against the drawn bodies (naturalTrusted.ts: every natural body the stage
- * will trust, family members included): candidates uniform in the boxes (their own seeded
- * stream) are kept when the nearest drawn body is at least MIN_NEAREST_MPS away in the
- * families metric (Zappalà et al. 1990, outlierMetric.ts); they are ranked by how many
- * background bodies the generator's own smooth density would put within the distance of
- * the 8th nearest drawn body (the emptiest places against the background first; k = 8 as in
- * the stage's isolation score, which is not used here), and taken greedily at least
- * MIN_APART_MPS from each other. Their osculating elements come from properToOsculating.ts
- * like every other main-belt body; H uniform 14–17 (our choice). All keep T_J ≥ 3.105 so they
- * do not also fall on the Tisserand list.
+ * For each pocket: the expected count, the background bodies drawn times the probability of
+ * one smooth draw landing in the ball (pocketProbability), and the count actually carved (the
+ * background draws the pocket turned away, counted in the look-ahead of naturalTrusted.ts).
+ * The distances from the planted body to the nearest and 8th-nearest drawn body the stage will
+ * trust (every natural body, family members and other classes included) are measured; a body
+ * of another class or a family member inside the pocket is not carved, so a nearest body
+ * closer than MIN_NEAREST_FRACTION of the radius stops the generator. Osculating elements come
+ * from properToOsculating.ts like every other main-belt body (drawn again, from this file's
+ * own seeded stream, until the stage trusts them and T_J ≥ 3.105 so they do not also fall on the
+ * Tisserand list); H uniform 14–17 (our choice).
+ *
+ * Measured on the default seed (test/cli/familiesDemo.test.ts): all six below q = 0.05 at
+ * q 0.047, false-alarm probabilities 2.0–2.8e-5; the margin is thin and holds for this seed and
+ * these pockets (mainBeltBackground.ts), not by construction: another seed or detector setting
+ * can move q over 0.05.
  */
 import { buildKNearestGrid } from '../../src/detect/families/kNearestGrid.js';
 import { cellSizeForOccupancy } from '../../src/detect/families/kNearestCellSize.js';
 import { kNearestOf } from '../../src/detect/families/kNearest.js';
 import { orbitalSpeedMPerS } from '../../src/detect/families/metricVelocity.js';
-import { SCALED_A_WEIGHT, SCALED_E_WEIGHT, SCALED_SIN_I_WEIGHT } from '../../src/detect/families/outlierMetric.js';
+import { scaledProperCoordinates } from '../../src/detect/families/outlierMetric.js';
+import { POCKETS, pocketProbability, type Pocket } from './mainBeltBackground.js';
 import type { TrustedBodies } from './naturalTrusted.js';
 import { roundAsteroidElements } from './orbitRows.js';
 import { properToOsculating, type ProperPlant } from './properToOsculating.js';
 import type { Random } from './random.js';
-import { pickWeighted, uniform } from './random.js';
+import { uniform } from './random.js';
 import type { DemoSecularField, StageProper } from './secularForced.js';
-import { backgroundDensity } from './mainBeltBackground.js';
 import { tisserandJupiter } from './tisserand.js';
 import { emptyElements, type DemoElements } from './types.js';
 
-/** Planted isolated bodies (our choice: within the 10–20 a 20 000-body demo can hold apart). */
-export const OUTLIER_COUNT = 15;
-/** Least distance to any drawn body, m/s (our choice: several times the families' spread). */
-export const MIN_NEAREST_MPS = 600;
-/** Least distance between two planted isolated bodies, m/s (our choice). */
-export const MIN_APART_MPS = 1000;
-const CANDIDATES = 40_000;
+/** Planted isolated bodies: one per pocket. */
+export const OUTLIER_COUNT = POCKETS.length;
+/** The nearest drawn body must be at least this fraction of the pocket radius away (our choice: the short-period scatter is ~10 m/s). */
+export const MIN_NEAREST_FRACTION = 0.9;
 const K = 8;
 const MIN_TJ = 3.105;
-
-/**
- * Proper-element boxes [aMin, aMax, eMin, eMax, sinIMin, sinIMax] (our choice, see the file
- * comment): each at least 0.015 au inside a trusted zone, with the osculating e and sin i
- * (proper plus forced: e_f ≈ 0.04, sin i_f ≈ 0.015–0.021 there) below the 0.3 limits.
- */
-export const OUTLIER_BOXES: readonly (readonly number[])[] = [
-  [2.28, 2.4, 0.03, 0.16, 0.03, 0.27], // inner belt, between the 7:2 and Mars's 1:2; q stays above 1.75 au
-  [2.545, 2.785, 0.03, 0.24, 0.03, 0.265], // middle belt, between the 3:1 and 5:2
-  [2.865, 2.93, 0.03, 0.24, 0.03, 0.265], // between the 5:2 and 7:3
-];
+const MAX_TRIES = 100;
 
 export interface OutlierPlant {
-  proper: ProperPlant; // planted proper elements
+  proper: ProperPlant; // planted proper elements (the pocket's centre)
   el: DemoElements; // osculating, rounded as written
   nearestMPerS: number; // to the nearest drawn body
   eighthMPerS: number; // to the 8th nearest drawn body
+  pocket: Pocket; // the pocket it sits in
+  expectedInPocket: number; // background bodies the smooth law would put in the pocket
+  carvedFromPocket: number; // background draws the pocket turned away
 }
 
-function boxVolume(b: readonly number[]): number {
-  return (Math.log(b[1] / b[0])) * (b[3] - b[2]) * (b[5] - b[4]);
-}
-
-interface Candidate { proper: ProperPlant; xyz: number[]; nearest: number; eighth: number; expected: number }
-
-function drawCandidates(random: Random, trusted: TrustedBodies): Candidate[] {
-  const weights = OUTLIER_BOXES.map(boxVolume);
-  const out: Candidate[] = [];
-  const query = new Float64Array(3 * CANDIDATES);
-  for (let c = 0; c < CANDIDATES; c++) {
-    const b = OUTLIER_BOXES[pickWeighted(random, weights)];
-    const proper = { aAu: b[0] * Math.exp(uniform(random, 0, Math.log(b[1] / b[0]))), e: uniform(random, b[2], b[3]), sinI: uniform(random, b[4], b[5]) };
-    const xyz = [SCALED_A_WEIGHT * Math.log(proper.aAu), SCALED_E_WEIGHT * proper.e, SCALED_SIN_I_WEIGHT * proper.sinI];
-    query.set(xyz, 3 * c);
-    out.push({ proper, xyz, nearest: NaN, eighth: NaN, expected: NaN });
-  }
-  const grid = buildKNearestGrid(trusted.xyz, cellSizeForOccupancy(trusted.xyz, 4, 1 << 20));
-  const nn = kNearestOf(grid, query, K);
-  out.forEach((c, j) => {
-    const v = orbitalSpeedMPerS(c.proper.aAu);
-    c.nearest = nn.distance[j * K] * v;
-    c.eighth = nn.distance[j * K + K - 1] * v;
-    c.expected = expectedWithin(c.proper, nn.distance[j * K + K - 1]);
-  });
-  return out;
-}
-
-/**
- * How many background bodies the generator's own density (mainBeltBackground.ts) puts, per
- * background body drawn, in the ball of scaled radius r about a place: density × ball volume,
- * the volume taken to (a, e, sin i) by the Jacobian of the scaled coordinates,
- * da de d(sin i) = a / (√(5/4) · √2 · √2) dz³. Only its ranking is used.
- */
-function expectedWithin(p: ProperPlant, rScaled: number): number {
-  const jacobian = p.aAu / (SCALED_A_WEIGHT * SCALED_E_WEIGHT * SCALED_SIN_I_WEIGHT);
-  return backgroundDensity(p.aAu, p.e, p.sinI) * jacobian * (4 / 3) * Math.PI * rScaled ** 3;
-}
-
-function apartMPerS(x: Candidate, y: Candidate): number {
-  return Math.hypot(x.xyz[0] - y.xyz[0], x.xyz[1] - y.xyz[1], x.xyz[2] - y.xyz[2]) * orbitalSpeedMPerS(x.proper.aAu);
-}
-
-/** The planted isolated bodies, most isolated first. Throws when fewer than OUTLIER_COUNT fit. */
+/** The planted isolated bodies, one per pocket in POCKETS order. Throws when a pocket holds a drawn body. */
 export function chooseOutliers(random: Random, field: DemoSecularField, trusted: TrustedBodies): OutlierPlant[] {
   if (trusted.count <= K) throw new RangeError(`chooseOutliers: need more than ${K} trusted bodies, got ${trusted.count}`);
-  const ranked = drawCandidates(random, trusted)
-    .filter((c) => c.nearest >= MIN_NEAREST_MPS)
-    .sort((x, y) => y.eighth - x.eighth || x.proper.aAu - y.proper.aAu);
-  const chosen: Candidate[] = [];
-  const out: OutlierPlant[] = [];
+  const centres = scaledProperCoordinates(POCKETS.map((p) => p.aAu), POCKETS.map((p) => p.e), POCKETS.map((p) => p.sinI));
+  const grid = buildKNearestGrid(trusted.xyz, cellSizeForOccupancy(trusted.xyz, 4, 1 << 20));
+  const nn = kNearestOf(grid, centres, K);
   const stage: StageProper = { aAu: NaN, e: NaN, sinI: NaN, code: 0 };
-  for (const c of ranked) {
-    if (out.length === OUTLIER_COUNT) break;
-    if (chosen.some((o) => apartMPerS(c, o) < MIN_APART_MPS)) continue;
+  return POCKETS.map((pocket, j) => {
+    const v = orbitalSpeedMPerS(pocket.aAu);
+    const nearestMPerS = nn.distance[j * K] * v;
+    if (nearestMPerS < MIN_NEAREST_FRACTION * pocket.radiusMPerS) {
+      throw new Error(`chooseOutliers: a drawn body lies ${nearestMPerS.toFixed(0)} m/s from the centre of pocket ${j + 1} (radius ${pocket.radiusMPerS} m/s)`);
+    }
+    const proper = { aAu: pocket.aAu, e: pocket.e, sinI: pocket.sinI };
     const el = emptyElements();
-    if (!properToOsculating(random, field, c.proper, el)) continue;
-    el.H = uniform(random, 14, 17);
-    roundAsteroidElements(el);
-    if (field.properOf(el, stage).code !== 0 || tisserandJupiter(el.aAu, el.e, el.iDeg) < MIN_TJ) continue;
-    chosen.push(c);
-    out.push({ proper: c.proper, el, nearestMPerS: c.nearest, eighthMPerS: c.eighth });
-  }
-  if (out.length < OUTLIER_COUNT) {
-    throw new Error(`chooseOutliers: only ${out.length} of ${OUTLIER_COUNT} places found ${MIN_NEAREST_MPS} m/s from every drawn body and ${MIN_APART_MPS} m/s apart`);
-  }
-  return out;
+    for (let t = 0; ; t++) {
+      if (t === MAX_TRIES) throw new Error(`chooseOutliers: no trusted orbit with T_J ≥ ${MIN_TJ} at the centre of pocket ${j + 1} in ${MAX_TRIES} tries`);
+      if (!properToOsculating(random, field, proper, el)) continue;
+      el.H = uniform(random, 14, 17);
+      roundAsteroidElements(el);
+      if (field.properOf(el, stage).code === 0 && tisserandJupiter(el.aAu, el.e, el.iDeg) >= MIN_TJ) break;
+    }
+    return {
+      proper, el, nearestMPerS, eighthMPerS: nn.distance[j * K + K - 1] * v, pocket,
+      expectedInPocket: trusted.backgroundBodies * pocketProbability(pocket), carvedFromPocket: trusted.carved[j],
+    };
+  });
 }

@@ -73,6 +73,7 @@ export function emptyNaturalPlant(): NaturalPlant {
 export interface PopulationContext {
   jupiterLambdaDeg: number;
   field: DemoSecularField; // the planets' secular field at the epoch
+  carved?: number[]; // per pocket of mainBeltBackground.ts, background draws it turned away (counted when given)
 }
 
 function clearPlant(plant: NaturalPlant): void {
@@ -86,7 +87,7 @@ function sampleOnce(random: Random, cls: AsteroidClass, ctx: PopulationContext, 
   switch (cls) {
     case 'main-belt':
       plant.role = 'background';
-      sampleBackgroundProper(random, plant.proper);
+      sampleBackgroundProper(random, plant.proper, ctx.carved);
       return properToOsculating(random, ctx.field, plant.proper, out);
     case 'family': {
       plant.role = 'family member';

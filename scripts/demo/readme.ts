@@ -11,7 +11,7 @@ import { COORBITAL_PLAN } from './coorbitalPlan.js';
 import type { CoorbitalTruthRow } from './coorbitalTruthTable.js';
 import { DEMO_FAMILIES } from './families.js';
 import { BACKGROUND_E_SCALE, BACKGROUND_SIN_I_SCALE } from './mainBeltBackground.js';
-import { MIN_APART_MPS, MIN_NEAREST_MPS } from './plantedOutliers.js';
+import { MIN_NEAREST_FRACTION } from './plantedOutliers.js';
 import { SHORT_PERIOD_MPS } from './properToOsculating.js';
 import { YARKOVSKY_AU_PER_MYR_1KM } from './yarkovsky.js';
 
@@ -85,17 +85,22 @@ function familyTable(result: DemoResult): string {
     `${f.trueAnomalyDeg} | ${f.argLatitudeDeg} | ${f.albedo} | ${f.ageMyr} | ${result.familiesTruthCounts[`family member ${f.id}`] ?? 0} |`).join('\n');
 }
 
+function pocketTable(result: DemoResult): string {
+  return result.outliers.map((o, k) => `| ${k + 1} | ${o.proper.aAu.toFixed(3)} | ${o.proper.e.toFixed(3)} | ${o.proper.sinI.toFixed(3)} | ${o.pocket.radiusMPerS} | ` +
+    `${o.expectedInPocket.toFixed(0)} | ${o.carvedFromPocket} | ${o.nearestMPerS.toFixed(0)} |`).join('\n');
+}
+
 function familiesSection(result: DemoResult): string {
   const o = result.outliers;
-  const nearest = o.length ? Math.min(...o.map((x) => x.nearestMPerS)) : NaN;
-  const eighth = o.length ? Math.min(...o.map((x) => x.eighthMPerS)) : NaN;
+  const carved = o.reduce((s, x) => s + x.carvedFromPocket, 0);
   return `**Families, background and isolated bodies** (the families detector; \`families-truth.csv\`, one row per
 body planted in proper elements, ${result.familiesTruthRows} rows: role, planted family, the proper a, e, sin i as
 planted, H, and for members the diameter, ejection speed and Yarkovsky drift, for isolated bodies the
-distances to the nearest and 8th-nearest drawn body). Everything here is invented: the families, their
-names and places are the demo's own. The main-belt background is one smooth density in proper elements
-(a from three overlapping normal laws about 2.36, 2.76 and 3.08 au, e and sin i from Rayleigh laws of scale
-${BACKGROUND_E_SCALE} and ${BACKGROUND_SIN_I_SCALE}); no gap is carved. Bodies that fall in a mean-motion band, near a secular
+distances to the nearest and 8th-nearest drawn body and their pocket's radius, expected and carved counts).
+Everything here is invented: the families, their names and places are the demo's own. The main-belt
+background is one smooth density in proper elements (a from three overlapping normal laws about 2.36, 2.76
+and 3.08 au, e and sin i from Rayleigh laws of scale ${BACKGROUND_E_SCALE} and ${BACKGROUND_SIN_I_SCALE}), with ${o.length} empty pockets
+carved in it (below); no Kirkwood gap is carved. Bodies that fall in a mean-motion band, near a secular
 resonance, across Mars's orbit or beyond the theory's e and sin i limits are drawn like the others and
 set apart by the families stage itself (\`unreliable.csv\`): the holes they leave are the stage's, with hard
 edges, and the sparse side of such an edge is where the background's false alarms gather.
@@ -117,11 +122,21 @@ vectors at the body's a, and a small scatter standing in for the short-period te
 sin i, each ${SHORT_PERIOD_MPS} m/s in the families metric, about ${(SHORT_PERIOD_MPS * Math.sqrt(3)).toFixed(0)} m/s in all). Real short-period terms are larger
 (up to ~0.01 au in a and ~0.01 in e in the outer belt), so real families are looser than these.
 
-**${o.length} isolated bodies** (class \`family-outlier\` in truth.csv, role \`outlier\` in families-truth.csv) are
-placed in proper elements in the emptiest places, against every natural body the families stage will
-trust (drawn ahead of writing), inside boxes where the theory is trusted with a margin: each at least
-${MIN_NEAREST_MPS} m/s from every drawn body (here at least ${nearest.toFixed(0)} m/s; the 8th nearest at least ${eighth.toFixed(0)} m/s) and
-${MIN_APART_MPS} m/s from each other. The sparse high-inclination edge of the background is where such places are.`;
+**${o.length} isolated bodies** (class \`family-outlier\` in truth.csv, role \`outlier\` in families-truth.csv) sit
+each at the centre of an empty pocket: a ball in the families metric inside the populated belt where a
+drawn background body is drawn again (${carved} background draws were turned away in all, against
+${result.familiesTruthCounts.background ?? 0} background bodies kept: the pockets are a large part of the belt's core). The smooth law
+would put the expected count of background bodies in each; the detector sees an empty ball where its
+smooth background predicts hundreds, which is what makes a body stand out against the whole catalogue
+(in a sparse region the null model makes such gaps by itself). The centres are where the theory is
+trusted, away from the planted families; the balls are wide (the detector's coarse background reads
+the belt's core at a quarter to a third of its density, and the null's upper tail needs a score near
+3.5 for a false-alarm probability near 2e-5), so they reach across mean-motion bands. The nearest drawn
+body must be at least ${MIN_NEAREST_FRACTION} of the radius away (families and other classes are not carved).
+
+| pocket | a (au) | e | sin i | radius (m/s) | expected | carved | nearest body (m/s) |
+|---|---|---|---|---|---|---|---|
+${pocketTable(result)}`;
 }
 
 export function writeDemoReadme(path: string, opts: DemoOptions, result: DemoResult): void {
