@@ -4,3 +4,7 @@ export * from './geodeticSite.js';
 export * from './observerPosition.js';
 export * from './observerPlace.js';
 export * from './astrometricPlace.js';
+export * from './gaussPolynomial.js';
+export * from './gaussMethod.js';
+export * from './preliminaryOrbit.js';
+export * from './chooseThree.js';
