@@ -289,7 +289,7 @@ async function stages(file: string, seed: number, planted: readonly string[], po
       const [scores, scoreS] = timed(() => isolationScores(xyz, options, threads.search));
       const [tails, nullS] = timed(() => {
         const bg = buildOutlierBackground(xyz, scores, options.weightCap);
-        const cal = calibrateIsolation(bg, n, options, plan.replicates, seededRandom(seed), plan.scoredPerReplicate, threads.search);
+        const cal = calibrateIsolation(bg, n, options, plan.replicates, seededRandom(seed), plan.scoredPerReplicate, threads.search, threads.nullReplicates);
         return nullTailFractions(scores.score, cal);
       });
       times.push(clusterS + scoreS + nullS);
