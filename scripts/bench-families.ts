@@ -2,22 +2,25 @@
  * Families benchmark: `npx tsx scripts/bench-families.ts [--rows N] [--plants N] [--seed N]
  * [--no-reference] [--no-budget-free] [--sdss] [--build]` (npm run bench:families). Prints figures
  * only; asserts nothing (the machine is shared: figures vary run to run, so the load average
- * is printed at the start and end of every part).
+ * is printed at the start and end of every part, and `uptime` at the start and the end).
  *
- * 1. End to end: a dump of `--rows` natural bodies (default 1 500 000; the demo population:
- *    main-belt background with the demo families and the other classes) plus `--plants`
- *    planted family outliers, in the one-line orbit export format, generated with the seed
- *    (scripts/bench/familiesDump.ts; invented data). `wayward scan --detectors
- *    tisserand,coorbital,families` of the built CLI, as a child process under /usr/bin/time,
- *    on 1 and on 2 threads: wall and CPU time, peak RSS (/usr/bin/time and the scan's own
- *    summary.json), the scan's per-stage timing, the ratio, whether the candidates are the
- *    same bytes, and how many plants came out as family outliers. Unless --no-budget-free,
- *    also the 2-thread scan with the co-orbital N-body confirmation switched off
- *    (--coorbital-budget 0), to show what the confirmation costs.
+ * 1. End to end: a main-belt dump of `--rows` natural bodies (default 1 500 000: the demo's
+ *    main-belt background and families in proper elements, turned osculating) plus `--plants`
+ *    isolated bodies, each at the centre of an empty pocket carved in it, in the one-line orbit
+ *    export format, generated with the seed (scripts/bench/familiesDump.ts; invented data).
+ *    `wayward scan --detectors tisserand,coorbital,families` (every detector) of the built CLI,
+ *    as a child process under /usr/bin/time, on 1 and on 2 threads: wall and CPU time, peak RSS
+ *    (/usr/bin/time and the scan's own summary.json), the scan's per-stage timing, the ratio,
+ *    whether the candidates are the same bytes, and how many plants the scan listed. Unless
+ *    --no-budget-free, also the 2-thread scan with the co-orbital N-body confirmation switched
+ *    off (--coorbital-budget 0), to show what the confirmation costs.
  * 2. The families stages in this process on the same file: ingest, screen and proper
  *    elements (and what became of the plants: screened, or set apart with a reason),
  *    clustering (QRL per region and HCM), outlier scoring and null calibration on 1 and 2
- *    threads (and whether their numbers are the same bits).
+ *    threads (and whether their numbers are the same bits); then the whole families analysis
+ *    once on 2 threads (the scan's numbers), and what became of each plant: its isolation
+ *    score, nearest and 8th-nearest distances, false-alarm probability, q-value, and whether the
+ *    scan listed it.
  * 3. scikit-learn's DBSCAN (Debian python3-sklearn, scripts/bench/dbscanSklearn.py) on the same
  *    proper elements, region by region in the same velocity space (reference a the region's
  *    mean a) at the region's cutoff, min_samples = 2, clusters under N_min then turned to
@@ -48,10 +51,14 @@ import { quasiRandomLevel } from '../src/detect/families/qrlCutoff.js';
 import { BELT_REGIONS, pick, regionMembers } from '../src/detect/families/qrlRegion.js';
 import { clusterFamilies, type FamiliesClustering } from '../src/detect/familiesCluster.js';
 import { FAMILIES_DEFAULTS } from '../src/detect/familiesOptions.js';
+import { analyseFamilies } from '../src/detect/families.js';
 import { screenFamilies } from '../src/detect/familiesScreen.js';
 import { adjustedRandIndex } from '../test/helpers/partition.js';
 import { distinctBodies, readProperElements } from '../test/helpers/properElements.js';
 import { writeFamiliesDump } from './bench/familiesDump.js';
+import type { Pocket } from './bench/familiesPockets.js';
+import type { Catalogue } from '../src/clean/types.js';
+import type { FamiliesAnalysis } from '../src/detect/families.js';
 import { DEFAULT_SEED } from './demo/scenario.js';
 
 const ROOT = resolve(import.meta.dirname, '..');
@@ -127,16 +134,26 @@ function printScan(label: string, s: ScanRun): void {
 
 const fileHash = (path: string): string => createHash('sha256').update(readFileSync(path)).digest('hex');
 
-/** Planted designations among the family outliers of a scan's candidates.jsonl. */
-function plantsFound(outDir: string, planted: readonly string[]): number {
-  const want = new Set(planted);
-  let found = 0;
+/** Designations the families detector listed in a scan's candidates.jsonl. */
+function familiesListed(outDir: string): Set<string> {
+  const listed = new Set<string>();
   for (const line of readFileSync(join(outDir, 'candidates.jsonl'), 'utf8').split('\n')) {
     if (line === '') continue;
     const c = JSON.parse(line) as { designation: string; detector: string };
-    if (c.detector === 'families' && want.has(c.designation)) found++;
+    if (c.detector === 'families') listed.add(c.designation);
   }
-  return found;
+  return listed;
+}
+
+const plantsListed = (outDir: string, planted: readonly string[]): number => {
+  const listed = familiesListed(outDir);
+  return planted.filter((d) => listed.has(d)).length;
+};
+
+/** `uptime`'s line, or the load averages when there is no uptime. */
+function uptime(): string {
+  const r = spawnSync('uptime', { encoding: 'utf8' });
+  return r.status === 0 ? r.stdout.trim() : `load average ${load()}`;
 }
 
 function hashArrays(arrays: readonly ArrayBufferView[]): string {
@@ -219,7 +236,7 @@ function sdss(seed: number, reference: boolean): void {
 
 
 /** Part 1: the scan end to end, 1 and 2 threads, and without the N-body confirmation. */
-function endToEnd(file: string, dir: string, planted: readonly string[], budgetFree: boolean): void {
+function endToEnd(file: string, dir: string, planted: readonly string[], budgetFree: boolean): boolean {
   console.log(`1. wayward scan --detectors ${DETECTORS}, child process (load average ${load()})`);
   const one = runScan(file, join(dir, 'scan-1'), 1);
   printScan('1 thread ', one);
@@ -230,17 +247,18 @@ function endToEnd(file: string, dir: string, planted: readonly string[], budgetF
     console.log(`  ratio 1 thread / 2 threads: ${(one.seconds / two.seconds).toFixed(2)} (families stage ${(one.summary!.timing.familiesSeconds / two.summary!.timing.familiesSeconds).toFixed(2)}); candidates the same bytes: ${same ? 'yes' : 'NO'}`);
     const peakMb = two.maxRssKb / 1024;
     console.log(`  target: whole scan < ${TARGET_SECONDS} s on 2 threads: ${verdict(two.seconds < TARGET_SECONDS)} (${two.seconds.toFixed(2)} s); peak RSS < ${TARGET_PEAK_RSS_MB} MB: ${verdict(Math.max(peakMb, one.maxRssKb / 1024) < TARGET_PEAK_RSS_MB)}`);
-    console.log(`  planted family outliers among the families' candidates: ${plantsFound(join(dir, 'scan-2'), planted)} of ${planted.length}`);
+    console.log(`  planted isolated bodies the scan listed (families candidates): ${plantsListed(join(dir, 'scan-2'), planted)} of ${planted.length}`);
   }
   if (budgetFree) {
     const free = runScan(file, join(dir, 'scan-2-no-confirmation'), 2, ['--coorbital-budget', '0']);
     printScan('2 threads, --coorbital-budget 0 (no N-body confirmation)', free);
   }
   console.log(`  load average at the end ${load()}`);
+  return two.status === 0;
 }
 
 /** Part 2: the families stages in this process; returns the proper elements and clustering for part 3. */
-async function stages(file: string, seed: number, planted: readonly string[]): Promise<{ a: Float64Array; e: Float64Array; sinI: Float64Array; clustering: FamiliesClustering }> {
+async function stages(file: string, seed: number, planted: readonly string[], pockets: readonly Pocket[], scanDir: string | null): Promise<{ a: Float64Array; e: Float64Array; sinI: Float64Array; clustering: FamiliesClustering }> {
   console.log(`2. families stages in this process (load average ${load()})`);
   const [loaded, ingestS] = await timedAsync(() => loadCatalogue([file], {}));
   const cat = loaded.catalogue;
@@ -255,7 +273,7 @@ async function stages(file: string, seed: number, planted: readonly string[]): P
     const why = screen.reason[k] === '' ? 'screened' : screen.reason[k];
     plantReasons.set(why, (plantReasons.get(why) ?? 0) + 1);
   }
-  console.log(`  the ${planted.length} planted family outliers: ${[...plantReasons].map(([why, count]) => `${count} ${why}`).join(', ')}`);
+  console.log(`  the ${planted.length} planted isolated bodies: ${[...plantReasons].map(([why, count]) => `${count} ${why}`).join(', ')}`);
   const options = DEFAULT_PROPER_OUTLIER_OPTIONS;
   const xyz = scaledProperCoordinates(a, e, sinI);
   const n = a.length;
@@ -271,7 +289,7 @@ async function stages(file: string, seed: number, planted: readonly string[]): P
       const [scores, scoreS] = timed(() => isolationScores(xyz, options, threads.search));
       const [tails, nullS] = timed(() => {
         const bg = buildOutlierBackground(xyz, scores, options.weightCap);
-        const cal = calibrateIsolation(bg, n, options, plan.replicates, seededRandom(seed), plan.scoredPerReplicate, threads.search);
+        const cal = calibrateIsolation(bg, n, options, plan.replicates, seededRandom(seed), plan.scoredPerReplicate, threads.search, threads.nullReplicates);
         return nullTailFractions(scores.score, cal);
       });
       times.push(clusterS + scoreS + nullS);
@@ -283,7 +301,43 @@ async function stages(file: string, seed: number, planted: readonly string[]): P
     }
   }
   console.log(`  clustering + outliers, 1 thread / 2 threads: ${(times[0] / times[1]).toFixed(2)}; the same bits: ${hashes[0] === hashes[1] ? 'yes' : 'NO'} (load average ${load()})`);
+  await plantsFate(cat, planted, pockets, seed, scanDir);
   return { a, e, sinI, clustering: clustering! };
+}
+
+/** What became of each planted isolated body in the whole families analysis (2 threads: the scan's numbers). */
+async function plantsFate(cat: Catalogue, planted: readonly string[], pockets: readonly Pocket[], seed: number, scanDir: string | null): Promise<void> {
+  const threads = await startFamiliesThreads(2);
+  let r: FamiliesAnalysis;
+  let analysisS: number;
+  try {
+    [r, analysisS] = timed(() => analyseFamilies(cat, { ...FAMILIES_DEFAULTS, seed }, threads));
+  } finally {
+    await threads.close();
+  }
+  const listed = scanDir !== null ? familiesListed(scanDir) : null;
+  const row = new Map<string, number>();
+  for (let k = 0; k < cat.size; k++) row.set(cat.designation[k], k);
+  const position = new Int32Array(cat.size).fill(-1);
+  r.screen.screened.forEach((k, j) => { position[k] = j; });
+  const o = r.outliers;
+  console.log(`  the planted isolated bodies in the whole families analysis (2 threads, ${analysisS.toFixed(1)} s; ${fmt(r.tested)} bodies tested, ${r.candidates.length} with false-alarm probability < ${FAMILIES_DEFAULTS.fapThreshold}, ${r.fdrCandidates.length} with q < ${FAMILIES_DEFAULTS.fdrLevel}):`);
+  console.log('    designation      pocket m/s  nearest m/s  8th m/s  score   false-alarm prob  q-value    listed by scan');
+  let counted = 0, listedCount = 0;
+  planted.forEach((d, m) => {
+    const k = row.get(d) ?? -1;
+    const j = k >= 0 ? position[k] : -1;
+    const isListed = listed ? listed.has(d) : r.fdrCandidates.some((c) => c.designation === d);
+    if (isListed) listedCount++;
+    const label = isListed ? 'yes' : 'no';
+    if (j < 0 || o === null || r.qValue === null) {
+      console.log(`    ${d.padEnd(16)} ${pockets[m].radiusMPerS.toFixed(0).padStart(10)}  not screened (${k >= 0 ? r.screen.reason[k] : 'not in the catalogue'})  listed: ${label}`);
+      return;
+    }
+    counted++;
+    console.log(`    ${d.padEnd(16)} ${pockets[m].radiusMPerS.toFixed(0).padStart(10)} ${o.nearestDistanceMps[j].toFixed(0).padStart(12)} ${o.kthDistanceMps[j].toFixed(0).padStart(8)} ${o.score[j].toFixed(2).padStart(6)}   ${o.falseAlarmProb[j].toExponential(2).padStart(16)}  ${r.qValue[j].toExponential(2).padStart(9)}  ${label}`);
+  });
+  console.log(`  plants scored ${counted} of ${planted.length}; listed by the scan ${listedCount} of ${planted.length}${listed ? '' : ' (no scan output: from the analysis\'s own q < level)'}`);
 }
 
 /** Part 3: scikit-learn's DBSCAN against HCM, region by region, on the screened proper elements. */
@@ -329,7 +383,7 @@ function minMembersOnly(labels: Int32Array, minMembers: number): Int32Array {
 async function main(): Promise<void> {
   const o = new Command('bench-families')
     .option('--rows <n>', 'natural bodies in the generated dump', integerAtLeast(1000), 1_500_000)
-    .option('--plants <n>', 'planted family outliers added to it', integerAtLeast(0), 60)
+    .option('--plants <n>', 'isolated bodies planted in emptied pockets', integerAtLeast(0), 60)
     .option('--seed <n>', 'seed of the dump, the QRL backgrounds and the null catalogues', integerAtLeast(0), DEFAULT_SEED)
     .option('--no-reference', 'skip the scikit-learn DBSCAN runs')
     .option('--no-budget-free', 'skip the scan without co-orbital N-body confirmation')
@@ -338,19 +392,21 @@ async function main(): Promise<void> {
     .parse(process.argv)
     .opts<{ rows: number; plants: number; seed: number; reference: boolean; budgetFree: boolean; sdss?: boolean; build: boolean }>();
   ensureBuilt(o.build);
-  console.log(`families benchmark, load average at the start ${load()}`);
+  console.log(`families benchmark; uptime at the start: ${uptime()}`);
   const dir = mkdtempSync(join(tmpdir(), 'wayward-bench-families-'));
   try {
     const [dump, genS] = await timedAsync(() => writeFamiliesDump(join(dir, 'dump'), o.rows, o.plants, o.seed));
-    console.log(`dump: ${fmt(dump.rows)} rows (${fmt(o.rows)} natural + ${o.plants} planted family outliers), seed ${o.seed}, generated in ${genS.toFixed(1)} s (not measured below)`);
-    endToEnd(dump.file, dir, dump.planted, o.budgetFree);
-    const s = await stages(dump.file, FAMILIES_DEFAULTS.seed, dump.planted);
+    const radii = dump.pockets.map((p) => p.radiusMPerS).sort((x, y) => x - y);
+    console.log(`dump: ${fmt(dump.rows)} rows (${fmt(o.rows)} natural main-belt bodies + ${o.plants} isolated bodies each at the centre of an emptied pocket, radii ${radii.length ? `${radii[0].toFixed(0)}–${radii[radii.length - 1].toFixed(0)}` : '-'} m/s; ${fmt(dump.redrawn)} draws fell in a pocket and were drawn again), seed ${o.seed}, generated in ${genS.toFixed(1)} s (not measured below)`);
+    const scanned = endToEnd(dump.file, dir, dump.planted, o.budgetFree);
+    const s = await stages(dump.file, FAMILIES_DEFAULTS.seed, dump.planted, dump.pockets, scanned ? join(dir, 'scan-2') : null);
     if (o.reference) againstSklearn(s.a, s.e, s.sinI, s.clustering, FAMILIES_DEFAULTS.minMembers);
     else console.log('3. scikit-learn reference skipped (--no-reference)');
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
   if (o.sdss) sdss(o.seed, o.reference && hasSklearn());
+  console.log(`uptime at the end: ${uptime()}`);
 }
 
 await main();

@@ -64,7 +64,7 @@ export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, work: Fam
   const k = DEFAULT_PROPER_OUTLIER_OPTIONS.k;
   const occupying = occupyingUnreliable(screen, a, e, sinI);
   const space = withOccupying(screen, a, e, sinI, clustering.labels, occupying);
-  const outliers = a.length > k ? properOutliers(space.a, space.e, space.sinI, seededRandom(opts.seed), DEFAULT_PROPER_OUTLIER_OPTIONS, space.scored, work.search) : null;
+  const outliers = a.length > k ? properOutliers(space.a, space.e, space.sinI, seededRandom(opts.seed), DEFAULT_PROPER_OUTLIER_OPTIONS, space.scored, work.search, work.nullReplicates) : null;
   const tested = Uint8Array.from(space.labels, (l, j) => (j < a.length && l < 0 ? 1 : 0));
   const qValue = outliers ? benjaminiHochbergQValues(outliers.falseAlarmProb, tested) : null;
   const candidates = outliers && qValue

@@ -2,12 +2,18 @@
  * The families stage's heavy pieces shared with worker threads (familiesWorker.ts), behind the
  * same synchronous calls as their serial forms, so the callers run unchanged:
  *   - the k-nearest search of the outliers (kNearestSearch.ts: all points, the first m);
- *   - the levels of the QRL backgrounds (qrlCutoff.ts LevelRunner).
+ *   - the levels of the QRL backgrounds (qrlCutoff.ts LevelRunner);
+ *   - the null catalogues of the outliers' calibration, each drawn and scored whole by one
+ *     thread (outlierNullReplicate.ts NullReplicateRunner), from its own seeded stream.
  * A job copies its inputs into shared memory and is handed to every worker; the calling thread
  * claims pieces alongside them from one shared counter, then blocks on a shared counter
  * (Atomics.wait) until every worker is done. Each piece depends on its own inputs alone (a
  * row on the grid and its point; a level on its background), so the results are the serial
  * ones bit for bit, whichever thread computed them and in whatever order.
+ *
+ * Two null catalogues on two threads run at once from draw to scores (the draw, the reordering
+ * and the grids are serial work that sharing the k-nearest searches alone left on one thread).
+ * Each thread then holds a catalogue's grid of its own: more memory than one shared search.
  */
 import { MessageChannel, receiveMessageOnPort, type MessagePort, type Worker } from 'node:worker_threads';
 import { startSiblingWorker } from '../../core/moduleWorker.js';
@@ -16,6 +22,8 @@ import type { KNearestGrid } from './kNearestGrid.js';
 import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 import type { VelocitySpace } from './metricVelocity.js';
 import { SERIAL_LEVELS, type LevelRunner } from './qrlCutoff.js';
+import type { OutlierBackground } from './outlierBackground.js';
+import { SERIAL_NULL_REPLICATES, type NullReplicateRunner } from './outlierNullReplicate.js';
 import {
   CONTROL_SLOTS, FAILED, runClaims, WORKER_CLAIMS, WORKERS_DONE, type FamiliesJob, type FamiliesWorkerData,
 } from './familiesWorker.js';
@@ -41,9 +49,10 @@ export interface FamiliesThreadOptions {
 export interface FamiliesWork {
   readonly search: KNearestSearch;
   readonly levels: LevelRunner;
+  readonly nullReplicates: NullReplicateRunner;
 }
 
-export const SERIAL_FAMILIES_WORK: FamiliesWork = { search: SERIAL_KNEAREST, levels: SERIAL_LEVELS };
+export const SERIAL_FAMILIES_WORK: FamiliesWork = { search: SERIAL_KNEAREST, levels: SERIAL_LEVELS, nullReplicates: SERIAL_NULL_REPLICATES };
 
 export interface FamiliesThreads extends FamiliesWork {
   readonly threads: number; // this thread and threads − 1 workers
@@ -98,8 +107,17 @@ export async function startFamiliesThreads(threads: number, options: FamiliesThr
     runJob(job);
     return Float64Array.from(job.levels);
   };
+  const nullReplicates: NullReplicateRunner = (bg, catalogueSize, opts, scored, seeds) => {
+    const job: FamiliesJob = {
+      kind: 'null-replicates', bg: sharedBackground(bg), catalogueSize, opts: { ...opts }, scored, seeds: Uint32Array.from(seeds),
+      scores: new Float64Array(new SharedArrayBuffer(8 * seeds.length * scored)), counts: new Int32Array(new SharedArrayBuffer(4 * seeds.length)),
+      control: newControl(),
+    };
+    runJob(job);
+    return Array.from(seeds, (_, r) => Float64Array.from(job.scores.subarray(r * scored, r * scored + job.counts[r])));
+  };
   return {
-    threads, search, levels,
+    threads, search, levels, nullReplicates,
     workerClaims: () => claimsByWorkers,
     async close() {
       await Promise.all(workers.map((w) => w.terminate()));
@@ -158,6 +176,20 @@ function sharedGrid(g: KNearestGrid): KNearestGrid {
   const order = new Uint32Array(new SharedArrayBuffer(g.order.byteLength));
   order.set(g.order);
   return { count: g.count, cellSize: g.cellSize, origin: g.origin, dims: g.dims, cellStart, order, sortedXyz: sharedCopy(g.sortedXyz) };
+}
+
+function sharedOf<T extends Float64Array | Uint32Array | Uint8Array>(a: T): T {
+  const s = new (a.constructor as { new (b: SharedArrayBuffer): T })(new SharedArrayBuffer(a.byteLength));
+  s.set(a as never);
+  return s;
+}
+
+/** The background with its arrays copied into shared memory. */
+function sharedBackground(bg: OutlierBackground): OutlierBackground {
+  return {
+    xyz: sharedOf(bg.xyz), radius: sharedOf(bg.radius), cumulative: sharedOf(bg.cumulative), weightCap: bg.weightCap,
+    weightedBodies: bg.weightedBodies, guide: sharedOf(bg.guide), scoredParent: bg.scoredParent === null ? null : sharedOf(bg.scoredParent),
+  };
 }
 
 function sharedSpace(s: VelocitySpace): VelocitySpace {

@@ -3,7 +3,9 @@
  * shared memory; every thread on it, the calling one included, claims pieces from one shared
  * counter and runs them with the same pure function a single thread runs:
  *   - 'k-nearest': chunks of grid positions, filled by kNearestSortedRange (kNearest.ts);
- *   - 'levels': one QRL background each, its level by levelOrNaN (qrlCutoff.ts).
+ *   - 'levels': one QRL background each, its level by levelOrNaN (qrlCutoff.ts);
+ *   - 'null-replicates': one null catalogue each, drawn from its own seeded stream and scored by
+ *     nullReplicateScores (outlierNullReplicate.ts) with this thread's own k-nearest searches.
  * A worker counts itself done when no piece is left.
  */
 import { parentPort, workerData, type MessagePort } from 'node:worker_threads';
@@ -11,6 +13,10 @@ import { kNearestSortedRange } from './kNearest.js';
 import type { KNearestGrid } from './kNearestGrid.js';
 import type { VelocitySpace } from './metricVelocity.js';
 import { levelOrNaN } from './qrlCutoff.js';
+import { seededRandom } from '../../core/random.js';
+import type { OutlierBackground } from './outlierBackground.js';
+import { nullReplicateScores } from './outlierNullReplicate.js';
+import type { IsolationOptions } from './outlierScore.js';
 
 /** Marks this module's workerData (the module is also imported by the main thread). */
 export interface FamiliesWorkerData { familiesWorker: true }
@@ -44,16 +50,33 @@ export interface LevelsJob {
   control: Int32Array;
 }
 
-export type FamiliesJob = KNearestJob | LevelsJob;
+/** Null catalogues, one a claim: catalogue r's scores into scores[r·scored …], their number into counts[r]. */
+export interface NullReplicatesJob {
+  kind: 'null-replicates';
+  bg: OutlierBackground; // every array on shared memory
+  catalogueSize: number;
+  opts: IsolationOptions;
+  scored: number; // at most this many scores a catalogue
+  seeds: Uint32Array;
+  scores: Float64Array; // shared output, replicates × scored
+  counts: Int32Array; // shared output, scores of each catalogue
+  control: Int32Array;
+}
+
+export type FamiliesJob = KNearestJob | LevelsJob | NullReplicatesJob;
 
 /** Claims pieces of the job until none is left, filling their outputs; returns how many it took. */
 export function runClaims(job: FamiliesJob): number {
-  const pieces = job.kind === 'levels' ? job.spaces.length : Math.ceil(job.grid.count / job.chunk);
+  const pieces = job.kind === 'levels' ? job.spaces.length : job.kind === 'null-replicates' ? job.seeds.length : Math.ceil(job.grid.count / job.chunk);
   for (let claims = 0; ; claims++) {
     const piece = Atomics.add(job.control, NEXT_CLAIM, 1);
     if (piece >= pieces) return claims;
     if (job.kind === 'levels') {
       job.levels[piece] = levelOrNaN(job.spaces[piece], job.minMembers, job.resolution);
+    } else if (job.kind === 'null-replicates') {
+      const scores = nullReplicateScores(job.bg, job.catalogueSize, job.opts, job.scored, seededRandom(job.seeds[piece]));
+      job.scores.set(scores, piece * job.scored);
+      job.counts[piece] = scores.length;
     } else {
       const first = piece * job.chunk;
       kNearestSortedRange(job.grid, job.k, job.m, first, Math.min(job.grid.count, first + job.chunk), job.d2, job.idx);

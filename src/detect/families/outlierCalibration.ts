@@ -24,7 +24,7 @@ import { upperTailFraction } from '../empiricalTail.js';
 import { fitUpperTail, upperTailProbabilities, type UpperTailFitResult } from '../tailExtrapolation.js';
 import type { OutlierBackground } from './outlierBackground.js';
 import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
-import { nullReplicateScores } from './outlierNullReplicate.js';
+import { SERIAL_NULL_REPLICATES, type NullReplicateRunner } from './outlierNullReplicate.js';
 import type { IsolationOptions } from './outlierScore.js';
 
 export interface OutlierCalibration {
@@ -52,24 +52,32 @@ function tailStart(poolSize: number): number {
 
 export function calibrateIsolation(
   bg: OutlierBackground, catalogueSize: number, opts: IsolationOptions, replicates: number, random: Random,
-  scoredPerReplicate: number = catalogueSize, search: KNearestSearch = SERIAL_KNEAREST,
+  scoredPerReplicate: number = catalogueSize, search: KNearestSearch = SERIAL_KNEAREST, runner: NullReplicateRunner = SERIAL_NULL_REPLICATES,
 ): OutlierCalibration {
   if (!Number.isInteger(replicates) || replicates < 1) throw new RangeError(`calibrateIsolation: replicates must be a positive integer, got ${replicates}`);
   if (!Number.isInteger(scoredPerReplicate) || scoredPerReplicate < 1) {
     throw new RangeError(`calibrateIsolation: bodies scored per replicate must be a positive integer, got ${scoredPerReplicate}`);
   }
   const scored = Math.min(scoredPerReplicate, catalogueSize);
-  const parts: Float64Array[] = [];
-  for (let r = 0; r < replicates; r++) {
-    parts.push(nullReplicateScores(bg, catalogueSize, opts, scored, random, search));
-  }
-  const pooled = concatenated(parts);
+  const seeds = replicateSeeds(random, replicates);
+  const pooled = concatenated(runner(bg, catalogueSize, opts, scored, seeds, search));
   pooled.sort();
   return {
     nullScoresSorted: pooled, replicates, catalogueSize, scoredPerReplicate: scored,
     nullModel: nullModelSentence(bg, catalogueSize, opts, replicates, scored),
     tail: fitUpperTail(pooled, tailStart(pooled.length)),
   };
+}
+
+/**
+ * Seed of each null catalogue's own stream: the r-th 32-bit number drawn from the injected
+ * generator. The catalogues are then independent of the order (and thread) they are drawn in,
+ * and the whole calibration still follows from the one seed.
+ */
+export function replicateSeeds(random: Random, replicates: number): Uint32Array {
+  const seeds = new Uint32Array(replicates);
+  for (let r = 0; r < replicates; r++) seeds[r] = Math.floor(random() * 0x1_0000_0000);
+  return seeds;
 }
 
 function concatenated(parts: readonly Float64Array[]): Float64Array {

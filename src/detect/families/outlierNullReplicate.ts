@@ -8,8 +8,12 @@
  * background, as the observed bodies set apart do. Without marks: the first `scored` bodies.
  * Data in, data out (the generator is advanced by the draws), for a caller on any thread;
  * `search`: which threads the k-nearest searches run on (the same numbers on any).
+ *
+ * A calibration's catalogues (NullReplicateRunner): catalogue r is drawn from its own stream,
+ * seeded by seeds[r], so the catalogues can be drawn and scored on different threads at once
+ * (familiesThreads.ts) with the numbers of the serial runner below, bit for bit.
  */
-import type { Random } from '../../core/random.js';
+import { seededRandom, type Random } from '../../core/random.js';
 import { drawFromBackground, type OutlierBackground } from './outlierBackground.js';
 import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 import { isolationScoresOfFirst, type IsolationOptions } from './outlierScore.js';
@@ -22,6 +26,15 @@ export function nullReplicateScores(bg: OutlierBackground, catalogueSize: number
   const drawn = drawFromBackground(bg, catalogueSize, random, parent);
   return isolationScoresOfFirst(scoredFirst(drawn, parent, bg.scoredParent), opts, Math.min(scored, countScored(parent, bg.scoredParent)), search);
 }
+
+/** Scores of each null catalogue r (seeded by seeds[r]), in order; `search` for the serial runner's k-nearest searches. */
+export type NullReplicateRunner = (
+  bg: OutlierBackground, catalogueSize: number, opts: IsolationOptions, scored: number, seeds: Uint32Array, search: KNearestSearch,
+) => Float64Array[];
+
+/** The catalogues one after another on this thread (each one's k-nearest searches on `search`). */
+export const SERIAL_NULL_REPLICATES: NullReplicateRunner = (bg, catalogueSize, opts, scored, seeds, search) =>
+  Array.from(seeds, (seed) => nullReplicateScores(bg, catalogueSize, opts, scored, seededRandom(seed), search));
 
 function countScored(parent: Int32Array, mark: Uint8Array): number {
   let m = 0;

@@ -24,6 +24,7 @@ import { calibrateIsolation, nullCataloguePlan, nullFalseAlarmProbs, nullTailFra
 import type { UpperTailFitResult } from '../tailExtrapolation.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores, type IsolationOptions, type IsolationScores } from './outlierScore.js';
 import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
+import { SERIAL_NULL_REPLICATES, type NullReplicateRunner } from './outlierNullReplicate.js';
 
 export interface ProperOutlierOptions extends IsolationOptions {
   replicates: number; // at most this many synthetic null catalogues (outlierCalibration.ts nullCataloguePlan)
@@ -69,10 +70,12 @@ export interface ProperOutliers {
 /**
  * Scores, background, calibration, null tail fractions and false-alarm probabilities of a
  * catalogue in scaled coordinates; with `scored`, only the marked bodies are scored (NaN elsewhere);
- * `search`: on which threads the k-nearest searches run (the same numbers on any).
+ * `search`: on which threads the k-nearest searches run, `runner`: the null catalogues (the same
+ * numbers on any).
  */
 export function calibratedIsolation(
   xyz: Float64Array, random: Random, options: ProperOutlierOptions, scored: Uint8Array | null = null, search: KNearestSearch = SERIAL_KNEAREST,
+  runner: NullReplicateRunner = SERIAL_NULL_REPLICATES,
 ): {
   scores: IsolationScores; calibration: OutlierCalibration; nullTailFraction: Float64Array; falseAlarmProb: Float64Array; falseAlarmFrom: Uint8Array;
 } {
@@ -85,7 +88,7 @@ export function calibratedIsolation(
   const scores = isolationScores(xyz, options, search);
   const background = buildOutlierBackground(xyz, scores, options.weightCap, scored);
   const plan = nullCataloguePlan(nScored, options.replicates, options.nullScoresWanted ?? DEFAULT_NULL_SCORES_WANTED);
-  const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate, search);
+  const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate, search, runner);
   const nullTailFraction = nullTailFractions(scores.score, calibration);
   const fap = nullFalseAlarmProbs(scores.score, calibration);
   if (scored !== null) {
@@ -97,12 +100,12 @@ export function calibratedIsolation(
 export function properOutliers(
   aAu: ArrayLike<number>, e: ArrayLike<number>, sinI: ArrayLike<number>, random: Random,
   options: ProperOutlierOptions = DEFAULT_PROPER_OUTLIER_OPTIONS, scored: Uint8Array | null = null,
-  search: KNearestSearch = SERIAL_KNEAREST,
+  search: KNearestSearch = SERIAL_KNEAREST, runner: NullReplicateRunner = SERIAL_NULL_REPLICATES,
 ): ProperOutliers {
   const xyz = scaledProperCoordinates(aAu, e, sinI);
   const n = aAu.length;
   const k = options.k;
-  const { scores, calibration, nullTailFraction, falseAlarmProb, falseAlarmFrom } = calibratedIsolation(xyz, random, options, scored, search);
+  const { scores, calibration, nullTailFraction, falseAlarmProb, falseAlarmFrom } = calibratedIsolation(xyz, random, options, scored, search, runner);
   const neighbourDistanceMps = new Float64Array(n * k);
   const nearestDistanceMps = new Float64Array(n);
   const kthDistanceMps = new Float64Array(n);

@@ -84,16 +84,21 @@ describe('the families stage on worker threads', () => {
     }
   });
 
-  it('give the same isolation scores, null tail fractions and false-alarm probabilities as one thread (synthetic belt, with and without a selection)', () => {
+  it('give the same isolation scores, null tail fractions and false-alarm probabilities as one thread, null catalogues drawn and scored on other threads (synthetic belt, with and without a selection)', () => {
     const { a, e, s } = uniformBelt(3, 6000, 2.2, 1.0);
     const every7th = Uint8Array.from({ length: a.length }, (_, j) => (j % 7 === 0 ? 0 : 1)); // bodies set apart occupy space, unscored
     for (const scored of [null, every7th]) {
       const one = properOutliers(a, e, s, seededRandom(11), DEFAULT_PROPER_OUTLIER_OPTIONS, scored);
-      const more = properOutliers(a, e, s, seededRandom(11), DEFAULT_PROPER_OUTLIER_OPTIONS, scored, workersOnly.search);
-      for (const key of ['score', 'nullTailFraction', 'falseAlarmProb', 'nearestDistanceMps', 'kthDistanceMps', 'neighbourDistanceMps', 'backgroundDensity'] as const) {
-        expect(Buffer.from(more[key].buffer).equals(Buffer.from(one[key].buffer)), key).toBe(true);
+      for (const threads of [workersOnly, shared]) {
+        const claimsBefore = threads.workerClaims();
+        const more = properOutliers(a, e, s, seededRandom(11), DEFAULT_PROPER_OUTLIER_OPTIONS, scored, threads.search, threads.nullReplicates);
+        if (threads === workersOnly) expect(threads.workerClaims() - claimsBefore).toBeGreaterThanOrEqual(DEFAULT_PROPER_OUTLIER_OPTIONS.replicates);
+        for (const key of ['score', 'nullTailFraction', 'falseAlarmProb', 'nearestDistanceMps', 'kthDistanceMps', 'neighbourDistanceMps', 'backgroundDensity'] as const) {
+          expect(Buffer.from(more[key].buffer).equals(Buffer.from(one[key].buffer)), key).toBe(true);
+        }
+        expect(Array.from(more.neighbourIndex)).toEqual(Array.from(one.neighbourIndex));
+        expect(more.nullScores).toBe(one.nullScores);
       }
-      expect(Array.from(more.neighbourIndex)).toEqual(Array.from(one.neighbourIndex));
     }
   });
 

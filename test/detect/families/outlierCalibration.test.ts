@@ -7,7 +7,7 @@ import { countAtLeast } from '../../../src/detect/empiricalTail.js';
 import { scaledProperCoordinates } from '../../../src/detect/families/outlierMetric.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../../src/detect/families/outlierScore.js';
 import { buildOutlierBackground, drawFromBackground } from '../../../src/detect/families/outlierBackground.js';
-import { calibrateIsolation, nullCataloguePlan, nullTailFractions } from '../../../src/detect/families/outlierCalibration.js';
+import { calibrateIsolation, nullCataloguePlan, nullTailFractions, replicateSeeds } from '../../../src/detect/families/outlierCalibration.js';
 import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../../../src/detect/families/outliers.js';
 import { distinctProperElements } from './helpers/properElementsFixture.js';
 import { describeRate, nullRate } from './helpers/nullRate.js';
@@ -53,10 +53,11 @@ describe('null tail fractions of isolation scores', () => {
     expect(sub.scoredPerReplicate).toBe(scored);
     expect(sub.nullScoresSorted.length).toBe(REPLICATES * scored);
     expect(sub.nullModel).toContain(`the first ${scored} bodies of each`);
-    // The same catalogues drawn again, scored in full, their first 20 000 scores kept.
-    const replay = seededRandom(12);
+    // The same catalogues drawn again, each from its own stream (seeded by the r-th number the
+    // generator gives), scored in full, their first 20 000 scores kept.
+    const seeds = replicateSeeds(seededRandom(12), REPLICATES);
     const want = new Float64Array(REPLICATES * scored);
-    for (let r = 0; r < REPLICATES; r++) want.set(isolationScores(drawFromBackground(background, n, replay), OPTS).score.subarray(0, scored), r * scored);
+    for (let r = 0; r < REPLICATES; r++) want.set(isolationScores(drawFromBackground(background, n, seededRandom(seeds[r])), OPTS).score.subarray(0, scored), r * scored);
     want.sort();
     expect(Buffer.from(sub.nullScoresSorted.buffer).equals(Buffer.from(want.buffer))).toBe(true);
     for (const alpha of [0.01, 0.05]) {
