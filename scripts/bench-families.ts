@@ -383,7 +383,7 @@ function minMembersOnly(labels: Int32Array, minMembers: number): Int32Array {
 async function main(): Promise<void> {
   const o = new Command('bench-families')
     .option('--rows <n>', 'natural bodies in the generated dump', integerAtLeast(1000), 1_500_000)
-    .option('--plants <n>', 'isolated bodies planted in emptied pockets', integerAtLeast(0), 60)
+    .option('--plants <n>', 'isolated bodies planted in emptied pockets', integerAtLeast(0), 40)
     .option('--seed <n>', 'seed of the dump, the QRL backgrounds and the null catalogues', integerAtLeast(0), DEFAULT_SEED)
     .option('--no-reference', 'skip the scikit-learn DBSCAN runs')
     .option('--no-budget-free', 'skip the scan without co-orbital N-body confirmation')
