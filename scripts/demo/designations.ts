@@ -20,6 +20,13 @@ export const SECOND_LETTERS = 'ABCDEFGHJKLMNOPQRSTUVWXYZ';
  */
 const PER_HALF_MONTH = 620 * SECOND_LETTERS.length + 62 ** 4;
 
+/**
+ * Bare two-letter designations (cycle count 0) never handed out: they read as common
+ * abbreviations in running text, where a search for the abbreviation would find the demo's
+ * files. The allocator steps over them (our choice).
+ */
+export const SKIPPED_BARE_LETTERS: readonly string[] = ['FO'];
+
 /** Half-month index 0..23 of a calendar date (day 1–15 → first half). */
 export function halfMonthIndex(month: number, day: number): number {
   return (month - 1) * 2 + (day >= 16 ? 1 : 0);
@@ -45,7 +52,8 @@ export class DesignationAllocator {
   /** Next provisional designation of a half month, e.g. '2031 AB123'. */
   provisional(year: number, halfMonth: number): string {
     const slot = this.slot(year, halfMonth);
-    const n = this.provisionalCount[slot];
+    let n = this.provisionalCount[slot];
+    while (n < PER_HALF_MONTH && isSkipped(halfMonth, n)) n++;
     if (n >= PER_HALF_MONTH) {
       throw new RangeError(`DesignationAllocator: provisional designations of ${year} half month ${halfMonth} exhausted`);
     }
@@ -67,6 +75,11 @@ export class DesignationAllocator {
     }
     return y * 24 + halfMonth;
   }
+}
+
+/** Whether the n-th designation of a half month is a skipped bare pair. */
+function isSkipped(halfMonth: number, n: number): boolean {
+  return n < SECOND_LETTERS.length && SKIPPED_BARE_LETTERS.includes(HALF_MONTH_LETTERS[halfMonth] + SECOND_LETTERS[n]);
 }
 
 /** Readable provisional designation of the n-th body (0-based) of a half month. */
