@@ -5,13 +5,16 @@
  * NAME-elements.txt (the truth orbit, one-line orbit export format) and NAME-observations.csv
  * (each observation's truth). Made with the project's own dynamics and observation model
  * (src/fit/synthetic/); deterministic: the same options give the same bytes. Invented data,
- * for tests, benchmarks and demos.
+ * for tests, benchmarks and demos. Exit codes: 2 for a usage error (a bad option, a station
+ * not in the table, a request the generator refuses), 1 when the table cannot be read or not
+ * every observation could be placed.
  */
 import { Command, InvalidArgumentError, Option } from 'commander';
 import { calendarToJd } from '../src/core/time/julian.js';
 import { generateSyntheticAstrometry } from '../src/fit/synthetic/index.js';
 import type { SyntheticStation } from '../src/fit/synthetic/types.js';
 import { readObservatoryCodes } from '../src/io/astrometry/observatoryCodes.js';
+import { UnreadableInputError } from '../src/io/errors.js';
 import { elementsRow } from './synthetic/elementsRow.js';
 import { writeSyntheticFiles, type SyntheticFormat } from './synthetic/syntheticFiles.js';
 
@@ -70,29 +73,49 @@ const program = new Command('make-synthetic-astrometry')
   .addOption(new Option('--format <f>', 'astrometry format').choices(['obs80', 'ades', 'both']).default('both'))
   .option('--out <dir>', 'output directory', 'synthetic-astrometry')
   .option('--name <stem>', 'file stem', 'synthetic')
+  .exitOverride((err) => process.exit(err.code === 'synth.unreadable' ? 1 : err.exitCode === 0 ? 0 : 2))
   .parse();
 
+/** A usage error (exit 2) or an unreadable input (exit 1): one line, no stack. */
+function fail(err: unknown): never {
+  if (err instanceof RangeError || err instanceof TypeError) program.error(`make-synthetic-astrometry: ${err.message}`, { exitCode: 2 });
+  if (err instanceof UnreadableInputError) program.error(`make-synthetic-astrometry: ${err.message}`, { exitCode: 1, code: 'synth.unreadable' });
+  throw err;
+}
+
 const o = program.opts();
-const table = await readObservatoryCodes(o.obscodes);
+const table = await readObservatoryCodes(o.obscodes).catch(fail);
 const stations: SyntheticStation[] = stationSpecs(o.stations).map((s) => {
   const site = table.sites.get(s.code);
   if (site === undefined || !site.fixedSite) program.error(`station ${s.code}: not a fixed site of ${o.obscodes}`, { exitCode: 2 });
   return { site: site!, sigmaArcsec: s.sigma, note2: s.note2, fromJdUtc: s.from, toJdUtc: s.to };
 });
-const el = elementsRow({
-  designation: o.designation, aAu: o.a, e: o.e, iDeg: o.i, nodeDeg: o.node, periDeg: o.peri, meanAnomalyDeg: o.meanAnomaly,
-  epochJdTT: date(o.epoch), H: o.h, reference: 'SYNTHETIC',
-});
-const start = date(o.start);
-const ng: [number, number, number] = [o.a1, o.a2, o.a3];
-const result = generateSyntheticAstrometry(o.designation, {
-  truth: {
-    elements: el.elements, nonGravAuPerDay2: ng.every((v) => v === 0) ? null : ng, nonGravLaw: o.law,
-    areaToMassM2PerKg: o.areaToMass, radiationPressureCoefficient: o.cr, relativity: o.relativity,
-  },
-  stations, startJdUtc: start, endJdUtc: start + 365.25 * o.years, count: o.count, seed: o.seed,
-  outlierRate: o.outliers, outlierArcsec: [3, 20],
-});
+/** The truth row and the observations of the options; RangeError for a request the generator refuses. */
+function generate(): { el: ReturnType<typeof elementsRow>; result: ReturnType<typeof generateSyntheticAstrometry> } {
+  const el = elementsRow({
+    designation: o.designation, aAu: o.a, e: o.e, iDeg: o.i, nodeDeg: o.node, periDeg: o.peri, meanAnomalyDeg: o.meanAnomaly,
+    epochJdTT: date(o.epoch), H: o.h, reference: 'SYNTHETIC',
+  });
+  const start = date(o.start);
+  const ng: [number, number, number] = [o.a1, o.a2, o.a3];
+  const result = generateSyntheticAstrometry(o.designation, {
+    truth: {
+      elements: el.elements, nonGravAuPerDay2: ng.every((v) => v === 0) ? null : ng, nonGravLaw: o.law,
+      areaToMassM2PerKg: o.areaToMass, radiationPressureCoefficient: o.cr, relativity: o.relativity,
+    },
+    stations, startJdUtc: start, endJdUtc: start + 365.25 * o.years, count: o.count, seed: o.seed,
+    outlierRate: o.outliers, outlierArcsec: [3, 20],
+  });
+  return { el, result };
+}
+
+let made: ReturnType<typeof generate>;
+try {
+  made = generate();
+} catch (err) {
+  fail(err);
+}
+const { el, result } = made;
 const files = writeSyntheticFiles({ dir: o.out, name: o.name, format: o.format as SyntheticFormat, elementsLine: el.line, observations: result.observations });
 for (const f of files) console.log(`wrote ${f}`);
 console.log(`${result.observations.length} observations in ${result.tracklets} tracklets, ${result.apparitions} apparitions, ${result.candidateNights} candidate station-nights`);
