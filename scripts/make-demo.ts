@@ -1,6 +1,7 @@
 /**
  * Writes the demo catalogue: `npx tsx scripts/make-demo.ts [--seed N] [--out DIR]
- * [--bodies N] [--comets N] [--population-only] [--no-integrate]`. Deterministic: a seed gives the same bytes.
+ * [--bodies N] [--comets N] [--population-only] [--no-integrate] [--check-body-only]`. Also writes the demo body for
+ * `check` into OUT/check/ (scripts/demo/checkBody.ts) unless --population-only. Deterministic: a seed gives the same bytes.
  */
 import { Command, InvalidArgumentError } from 'commander';
 import { join } from 'node:path';

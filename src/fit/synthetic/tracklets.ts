@@ -84,7 +84,8 @@ export function planTracklets(candidates: readonly CandidateNight[], count: numb
       span -= gaps.pop()!;
     }
     const u = random();
-    if (span > windowDays) continue;
+    const left = remaining - k;
+    if (span > windowDays || (left > 0 && left < cadence.perNightMin)) continue; // no room, or a lone observation would be left
     const start = night.windowStartJdUtc + u * (windowDays - span);
     const times = [start];
     for (const g of gaps) times.push(times[times.length - 1] + g);
