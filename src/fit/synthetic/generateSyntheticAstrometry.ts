@@ -4,7 +4,7 @@
  * 1. The truth orbit is integrated once over the span at 0h TDB of every day (./truthTrajectory.ts:
  *    Sun, eight planets, optional 1PN, A1/A2/A3, radiation pressure); between those days the
  *    body is carried by two-body motion from the nearest day (≤ 0.5 d: enough to decide
- *    visibility, never used for a place).
+ *    visibility and to estimate the light time, never used for a place).
  * 2. Candidate station-nights (./candidateNights.ts) and the tracklets placed on them
  *    (./tracklets.ts), every instant on the written UTC time grid and checked exactly.
  * 3. The place of each observation: the light time estimated from the daily states, the body
