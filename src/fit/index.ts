@@ -8,3 +8,4 @@ export * from './gaussPolynomial.js';
 export * from './gaussMethod.js';
 export * from './preliminaryOrbit.js';
 export * from './chooseThree.js';
+export * from './trajectoryPartials.js';
