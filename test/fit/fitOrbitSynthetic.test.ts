@@ -165,6 +165,19 @@ describe('orbit fit on synthetic observations of a known orbit', () => {
     expect(noRecovery.rejected).toBeGreaterThan(fit.rejected + 10);
   });
 
+  it('an elements start reaches the same orbit as a state start', () => {
+    const el = new Float64Array(6);
+    stateToSemimajorElements(perturbedStart(), GM_SUN_AU3_PER_DAY2, el);
+    const elements = { form: 'semimajor' as const, aAu: el[0], e: el[1], iRad: el[2], nodeRad: el[3], periRad: el[4], meanAnomalyRad: el[5], epochJdTDB: EPOCH };
+    const opts = { sigmas: sigmas(noisy.length), reject: false as const, ephemeris: eph };
+    const fromElements = fitOrbit(noisy, sites, { kind: 'elements', elements }, opts);
+    const fromState = fitOrbit(noisy, sites, { kind: 'state', epochJdTDB: EPOCH, state: perturbedStart() }, opts);
+    expect(fromElements.startedFrom).toBe('elements');
+    for (let i = 0; i < 6; i++) {
+      expect(Math.abs(fromElements.state[i] - fromState.state[i])).toBeLessThan(1e-3 * Math.sqrt(fromState.covariance[7 * i]));
+    }
+  });
+
   it('a state start can grow the arc from a window about the epoch', () => {
     const far = Float64Array.from(truth, (x, i) => x + (i < 3 ? 1e-3 : 0));
     const fit = fitOrbit(noisy, sites, { kind: 'state', epochJdTDB: EPOCH, state: far }, { sigmas: sigmas(noisy.length), ephemeris: eph, growArc: true, reject: false });
@@ -189,6 +202,17 @@ describe('orbit fit with a solve-for parameter', () => {
   });
 });
 
+/** The OrbitFitError `run` throws (the test fails when it throws none or another). */
+function fitError(run: () => unknown): OrbitFitError {
+  try {
+    run();
+  } catch (e) {
+    expect(e).toBeInstanceOf(OrbitFitError);
+    return e as OrbitFitError;
+  }
+  throw new Error('expected an OrbitFitError, none thrown');
+}
+
 describe('orbit fit failures carry their numbers', () => {
   it('too few observations', () => {
     expect(() => fitOrbit(noisy.slice(0, 2), sites, { kind: 'state', epochJdTDB: EPOCH, state: truth }, { sigmas: sigmas(2), ephemeris: eph }))
@@ -196,30 +220,18 @@ describe('orbit fit failures carry their numbers', () => {
   });
   it('a singular normal matrix: four copies of one observation', () => {
     const four = [noisy[10], noisy[10], noisy[10], noisy[10]];
-    try {
-      fitOrbit(four, sites, { kind: 'state', epochJdTDB: EPOCH, state: truth }, { sigmas: sigmas(4), ephemeris: eph, reject: false });
-      expect.unreachable();
-    } catch (e) {
-      expect(e).toBeInstanceOf(OrbitFitError);
-      const f = e as OrbitFitError;
-      expect(f.reason).toBe('singular');
-      expect(f.condition).toBeGreaterThan(1e13);
-      expect(f.iterations).toBe(1);
-      expect(Number.isFinite(f.lastChi2)).toBe(true);
-    }
+    const f = fitError(() => fitOrbit(four, sites, { kind: 'state', epochJdTDB: EPOCH, state: truth }, { sigmas: sigmas(4), ephemeris: eph, reject: false }));
+    expect(f.reason).toBe('singular');
+    expect(f.condition).toBeGreaterThan(1e13);
+    expect(f.iterations).toBe(1);
+    expect(Number.isFinite(f.lastChi2)).toBe(true);
   });
   it('no convergence within the iterations allowed: diverged, with iterations and last χ²', () => {
     const far = Float64Array.from(truth, (x, i) => x + (i < 3 ? 0.05 : 0));
-    try {
-      fitOrbit(noisy, sites, { kind: 'state', epochJdTDB: EPOCH, state: far }, { sigmas: sigmas(noisy.length), ephemeris: eph, maxIterations: 1, reject: false });
-      expect.unreachable();
-    } catch (e) {
-      expect(e).toBeInstanceOf(OrbitFitError);
-      const f = e as OrbitFitError;
-      expect(f.reason).toBe('diverged');
-      expect(f.iterations).toBe(1);
-      expect(f.lastChi2).toBeGreaterThan(1e3);
-      expect(f.message).toMatch(/1 iterations, last χ² /);
-    }
+    const f = fitError(() => fitOrbit(noisy, sites, { kind: 'state', epochJdTDB: EPOCH, state: far }, { sigmas: sigmas(noisy.length), ephemeris: eph, maxIterations: 1, reject: false }));
+    expect(f.reason).toBe('diverged');
+    expect(f.iterations).toBe(1);
+    expect(f.lastChi2).toBeGreaterThan(1e3);
+    expect(f.message).toMatch(/1 iterations, last χ² /);
   });
 });
