@@ -16,9 +16,9 @@
  * dynamical ecliptic and equinox of J2000 of Bretagnon & Francou 1988 (A&A 202, 309), which
  * is turned by about 0.07″ in longitude from the IAU 2006 ecliptic (measured against ERFA
  * epv00, test/fit/observerPosition.test.ts). The rotation from VSOP87's frame to the FK5
- * (J2000) equator is the one Meeus gives for VSOP87 rectangular coordinates (Astronomical
- * Algorithms, 2nd ed., 1998, ch. 26, "Rectangular Coordinates of the Sun"; chapter and
- * coefficients from memory), after Bretagnon & Francou:
+ * (J2000) equator is the one the documentation distributed with the VSOP87 series gives for
+ * its rectangular coordinates (Bretagnon & Francou; the same coefficients are printed in
+ * Meeus, Astronomical Algorithms, 2nd ed., 1998, ch. 26, chapter from memory):
  *   X = X′ + 0.000000440360 Y′ − 0.000000190919 Z′
  *   Y = −0.000000479966 X′ + 0.917482137087 Y′ − 0.397776982902 Z′
  *   Z = 0.397776982902 Y′ + 0.917482137087 Z′
@@ -73,7 +73,7 @@ export const IAU2006_ECLIPTIC_TO_ICRF_MATRIX: readonly number[] = Object.freeze(
 
 /**
  * VSOP87's ecliptic and equinox of J2000 → FK5 equator and equinox of J2000, row-major
- * (Bretagnon & Francou 1988 as given by Meeus 1998, ch. 26; from memory, see the file comment).
+ * (the VSOP87 series' documentation, Bretagnon & Francou; see the file comment).
  */
 export const VSOP87_TO_FK5_MATRIX: readonly number[] = Object.freeze([
   1, 0.000000440360, -0.000000190919,

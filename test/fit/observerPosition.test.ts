@@ -76,7 +76,7 @@ describe('observer heliocentric state vs erfa (epv00 Earth + c2t06a site, UT1 = 
   });
   // The Earth (the project's VSOP87B 'earth') against epv00 (fitted to DE405, about 5 km from
   // it; from memory): the distance from the Sun agrees within 1.6 km (measured). Direction:
-  // turned to the ICRF through VSOP87 → FK5 (Bretagnon & Francou 1988 as Meeus gives it,
+  // turned to the ICRF through VSOP87 → FK5 (the VSOP87 documentation's rotation,
   // frameBias.ts), measured 0.012–0.026″ at the fixture's dates; through the IAU 2006
   // ecliptic of J2000 and the frame bias instead it was 0.064–0.073″ (52 km at 1 au), and no
   // rotation at all does better than 0.0057″ here (a rotation fitted to these dates; the rest
