@@ -55,21 +55,17 @@ export function plainNumberAt(bytes: Uint8Array, from: number, to: number): numb
     sign = c0 === 45 ? -1 : 1;
     k++;
   }
+  const first = k; // first digit or the point
   let mantissa = 0;
-  let digits = 0;
-  let decimals = -1;
+  let point = -1;
   for (; k < last; k++) {
-    const c = bytes[k];
-    if (c >= 48 && c <= 57) {
-      mantissa = mantissa * 10 + (c - 48);
-      digits++;
-      if (decimals >= 0) decimals++;
-    } else if (c === 46 && decimals < 0) {
-      decimals = 0;
-    } else {
-      return NOT_PLAIN;
-    }
+    const d = bytes[k] - 48;
+    if (d >= 0 && d <= 9) mantissa = mantissa * 10 + d;
+    else if (d === -2 && point < 0) point = k; // '.'
+    else return NOT_PLAIN;
   }
+  const digits = point < 0 ? last - first : last - first - 1;
+  const decimals = point < 0 ? 0 : last - point - 1;
   if (digits === 0) return NaN;
   if (digits > 15 || decimals > 22) return NOT_PLAIN;
   return decimals > 0 ? (sign * mantissa) / POW10[decimals] : sign * mantissa;
