@@ -106,13 +106,16 @@ export class CatalogueBuilder {
     this.rejects.push({ kind: 'parse', file, line, reason, text });
   }
 
-  /** Offer a parsed row. Returns true if it is now in the catalogue. */
-  add(row: OrbitRow, file: string, line: number, text: string): boolean {
+  /**
+   * Offer a parsed row with its raw text, or a function that gives it (called only when the
+   * row is rejected, during this call). Returns true if it is now in the catalogue.
+   */
+  add(row: OrbitRow, file: string, line: number, text: string | (() => string)): boolean {
     this.read++;
     const reason = invalidReason(row, this.validity);
     if (reason !== null) {
       this.rejectedByFile[this.fileNumber(file)]++;
-      this.rejects.push({ kind: 'invalid', file, line, reason, text });
+      this.rejects.push({ kind: 'invalid', file, line, reason, text: typeof text === 'string' ? text : text() });
       return false;
     }
     // Claim the next slot under this body's key, unless a row of the same body holds one.
@@ -127,7 +130,7 @@ export class CatalogueBuilder {
     return true;
   }
 
-  private settleDuplicate(slot: number, row: OrbitRow, file: string, line: number, text: string): boolean {
+  private settleDuplicate(slot: number, row: OrbitRow, file: string, line: number, text: string | (() => string)): boolean {
     let reject: Reject;
     let prefix: string;
     const kept = row.epochJdTT > this.cols.epochJdTT[slot];
@@ -145,7 +148,7 @@ export class CatalogueBuilder {
     } else {
       this.rejectedByFile[this.fileNumber(file)]++;
       prefix = `duplicate designation ${row.designation}: epoch not newer than`;
-      reject = { kind: 'duplicate', file, line, text, reason: '' };
+      reject = { kind: 'duplicate', file, line, text: typeof text === 'string' ? text : text(), reason: '' };
     }
     reject.reason = this.keptReason(prefix, slot);
     this.rejects.push(reject);

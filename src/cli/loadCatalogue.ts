@@ -55,7 +55,7 @@ export async function loadCatalogue(paths: readonly string[], opts: LoadOptions 
       const info = await readOrbitFile(
         path,
         { format: opts.format, columns: opts.columns, csvKind: opts.csvKind },
-        (row: OrbitRow, line: number, text: string) => builder.add(row, path, line, text),
+        (row: OrbitRow, line: number, text: () => string) => builder.add(row, path, line, text),
         (err) => builder.rejectUnparsed(path, err.line, err.reason, err.text),
       );
       files.push({

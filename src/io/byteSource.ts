@@ -2,14 +2,14 @@
  * The bytes of one input: a file path or '-' for standard input, gzip read transparently
  * when the first two bytes are the gzip magic 1f 8b (RFC 1952 §2.3.1; the extension is not
  * looked at). Yields decoded chunks; hashes the raw bytes as read (SHA-256, FIPS 180-4) so
- * a run can name exactly what it read. Problems with the whole input (missing, a directory,
+ * a run can name exactly what it read; a large file on a worker thread (./sha256Thread.ts). Problems with the whole input (missing, a directory,
  * unreadable, corrupt gzip, binary content) → UnreadableInputError `FILE: reason`.
  */
-import { createHash, type Hash } from 'node:crypto';
 import { promises as fsp } from 'node:fs';
 import { Readable } from 'node:stream';
 import { createGunzip } from 'node:zlib';
 import { UnreadableInputError } from './errors.js';
+import { sha256Of, type Sha256Stream } from './sha256Thread.js';
 
 /** Read size; 1 MiB keeps the per-chunk overhead small against the per-line work. */
 const CHUNK_BYTES = 1 << 20;
@@ -39,22 +39,24 @@ export function fileErrorReason(err: unknown): string {
 }
 
 /**
- * The raw chunks of `path` ('-' = stdin), checked up front so errors name the file. A file
- * stream is returned as a Readable so that an early exit can destroy it (closing the file).
+ * The raw chunks of `path` ('-' = stdin) and its size (NaN for stdin), checked up front so
+ * errors name the file. A file stream is returned as a Readable so that an early exit can
+ * destroy it (closing the file).
  */
-async function rawStream(path: string): Promise<Readable> {
-  if (path === '-') return process.stdin;
+async function rawStream(path: string): Promise<{ stream: Readable; bytes: number }> {
+  if (path === '-') return { stream: process.stdin, bytes: NaN };
   try {
     const st = await fsp.stat(path);
     if (st.isDirectory()) throw Object.assign(new Error('directory'), { code: 'EISDIR' });
     const fh = await fsp.open(path, 'r'); // surfaces EACCES now rather than mid-stream
-    return fh.createReadStream({ highWaterMark: CHUNK_BYTES }); // closes the handle at the end
+    // closes the handle at the end
+    return { stream: fh.createReadStream({ highWaterMark: CHUNK_BYTES }), bytes: st.size };
   } catch (err) {
     throw new UnreadableInputError(path, fileErrorReason(err));
   }
 }
 
-async function* hashed(source: AsyncIterable<Buffer>, hash: Hash, info: ByteSourceInfo, path: string): AsyncGenerator<Buffer> {
+async function* hashed(source: AsyncIterable<Buffer>, hash: Sha256Stream, info: ByteSourceInfo, path: string): AsyncGenerator<Buffer> {
   try {
     for await (const chunk of source) {
       hash.update(chunk);
@@ -94,9 +96,10 @@ function checkNotBinary(chunk: Buffer, path: string): void {
  * `hashed`, its descriptor open until garbage collection.
  */
 export async function* openByteSource(path: string, info: ByteSourceInfo): AsyncGenerator<Buffer> {
-  const hash = createHash('sha256');
-  const source = await rawStream(path);
+  const { stream: source, bytes } = await rawStream(path);
+  const hash = sha256Of(bytes);
   const raw = hashed(source, hash, info, path);
+  let drained = false;
   try {
     const first = await raw.next();
     if (!first.done) {
@@ -115,9 +118,11 @@ export async function* openByteSource(path: string, info: ByteSourceInfo): Async
         yield chunk;
       }
     }
+    drained = true;
   } finally {
     // never stdin: it belongs to the process; destroying a drained file stream is a no-op
     if (source !== process.stdin) source.destroy();
+    if (!drained) hash.abandon();
   }
-  info.sha256 = hash.digest('hex');
+  info.sha256 = await hash.digest();
 }

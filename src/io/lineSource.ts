@@ -4,7 +4,8 @@
  * `Buffer.indexOf` finds each terminator (memchr speed) and each line's bytes are decoded on
  * their own (bytes after the last terminator of a chunk wait for the next one, so a
  * multi-byte character is never split). No per-line object is made: the caller's callback
- * gets (text, lineNo). Speed: scripts/bench/parse.ts.
+ * gets (text, lineNo), or with `forEachLineBytes` the line's byte range in the chunk and
+ * no string at all. Speed: scripts/bench/parse.ts.
  *
  * Line endings: LF, CRLF (the CR is dropped) and CR alone (old Mac files). The kind is
  * decided by the first terminator in the file: LF or CRLF → split on LF, a lone CR → on CR.
@@ -49,10 +50,17 @@ function lineTerminator(buf: Buffer): number {
   return cr + 1 < buf.length ? 13 : -1;
 }
 
-/** Calls `onLine(text, lineNo)` for every line of `path` ('-' = stdin), lineNo from 1. */
-export async function forEachLine(
+/**
+ * Calls `onLine(bytes, start, end, lineNo, encoding)` for every line of `path` ('-' = stdin),
+ * lineNo from 1: the line is `bytes[start, end)` without its terminator, and
+ * `bytes.toString(encoding, start, end)` is its text. The buffer is valid only during the
+ * call (it is the chunk being split). `encoding` is 'latin1' (one byte, one character) for
+ * every line of an all-ASCII chunk whatever the encoding asked for, else the one asked for.
+ * For readers that decode fields straight from the bytes.
+ */
+export async function forEachLineBytes(
   path: string,
-  onLine: (text: string, lineNo: number) => void,
+  onLine: (bytes: Buffer, start: number, end: number, lineNo: number, encoding: LineEncoding) => void,
   options: LineSourceOptions = {},
 ): Promise<LineSourceStats> {
   const encoding = options.encoding ?? 'utf8';
@@ -71,16 +79,15 @@ export async function forEachLine(
         continue;
       }
     }
-    // one decoder call per line over the bytes between terminators: after JIT warm-up this
-    // runs at ~10 M lines/s, faster than decoding a whole 1 MiB chunk to one string
-    // (scripts/bench/parse.ts); no string outlives its line, so nothing pins a chunk
-    // an all-ASCII chunk decodes the same either way, and latin1 is the cheaper decoder
-    const enc = encoding === 'utf8' && isAscii(buf) ? 'latin1' : encoding;
+    // one decoder call per line over the bytes between terminators (by the consumer): after
+    // JIT warm-up this runs at ~10 M lines/s, faster than decoding a whole 1 MiB chunk to one
+    // string (scripts/bench/parse.ts); no string outlives its line, so nothing pins a chunk
+    const enc = asciiOr(buf, encoding);
     let start = 0;
     let end = buf.indexOf(terminator, start);
     while (end >= 0) {
       const stop = terminator === 10 && end > start && buf[end - 1] === 13 ? end - 1 : end;
-      onLine(buf.toString(enc, start, stop), ++lineNo);
+      onLine(buf, start, stop, ++lineNo, enc);
       start = end + 1;
       end = buf.indexOf(terminator, start);
     }
@@ -90,8 +97,22 @@ export async function forEachLine(
   }
   if (carry !== null && carry.length > 0) {
     const stop = carry[carry.length - 1] === 13 ? carry.length - 1 : carry.length;
-    onLine(carry.toString(encoding, 0, stop), ++lineNo);
+    onLine(carry, 0, stop, ++lineNo, asciiOr(carry, encoding));
   }
   stats.lines = lineNo;
   return stats;
+}
+
+/** 'latin1' for an all-ASCII buffer read as UTF-8 (the same text, a cheaper decoder). */
+function asciiOr(buf: Buffer, encoding: LineEncoding): LineEncoding {
+  return encoding === 'utf8' && isAscii(buf) ? 'latin1' : encoding;
+}
+
+/** Calls `onLine(text, lineNo)` for every line of `path` ('-' = stdin), lineNo from 1. */
+export function forEachLine(
+  path: string,
+  onLine: (text: string, lineNo: number) => void,
+  options: LineSourceOptions = {},
+): Promise<LineSourceStats> {
+  return forEachLineBytes(path, (bytes, start, end, lineNo, enc) => onLine(bytes.toString(enc, start, end), lineNo), options);
 }

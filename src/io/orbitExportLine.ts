@@ -34,32 +34,42 @@ function readableEnd(line: string): number {
   return line.length > b && line.charCodeAt(b - 1) !== 32 && line.charCodeAt(b) !== 32 ? line.length : b;
 }
 
-/** Designation fields: packed (1–7) and readable (167–194). */
-function readDesignation(line: string, row: OrbitRow, file: string, lineNo: number): void {
-  const packed = fieldText(line, C.packed[0], C.packed[1]);
-  if (packed === '') failAt(file, lineNo, line, C.packed, `blank packed designation (${columnsOf(C.packed)})`);
+/**
+ * Designation, number and name of `row` from the packed (1–7) and readable (167–194) texts,
+ * both trimmed, packed not blank. False when the readable form's number disagrees with the
+ * packed one; PackedFormError when the packed text is in no known form. Shared with the
+ * byte-level reader (./orbitExportBytes.ts), so both make the same strings.
+ */
+export function fillDesignation(packed: string, readable: string, row: OrbitRow): boolean {
   row.packedDesignation = packed;
   row.number = unpackNumber(packed); // the common case first: no readable string to build
-  let unpacked = '';
-  if (Number.isNaN(row.number)) {
-    try {
-      unpacked = unpackDesignation(packed);
-    } catch (err) {
-      if (err instanceof PackedFormError) failAt(file, lineNo, line, C.packed, err.message);
-      throw err;
-    }
-  }
-  const readable = fieldText(line, C.readable[0], readableEnd(line));
+  const unpacked = Number.isNaN(row.number) ? unpackDesignation(packed) : '';
   row.designation = readable !== '' ? readable : unpacked !== '' ? unpacked : `(${row.number})`;
   row.name = '';
   if (Number.isFinite(row.number) && readable !== '') {
     // '(N)' or '(N) Name'
     const close = readable.indexOf(')');
     const n = readable.charCodeAt(0) === 40 && close > 1 ? parseDigits(readable, 1, close) : -1;
-    if (n !== row.number) {
-      failAt(file, lineNo, line, C.readable, `readable designation '${readable}' disagrees with packed ${packed} = (${row.number})`);
-    }
+    if (n !== row.number) return false;
     row.name = readable.slice(close + 1).trim();
+  }
+  return true;
+}
+
+/** Designation fields: packed (1–7) and readable (167–194). */
+function readDesignation(line: string, row: OrbitRow, file: string, lineNo: number): void {
+  const packed = fieldText(line, C.packed[0], C.packed[1]);
+  if (packed === '') failAt(file, lineNo, line, C.packed, `blank packed designation (${columnsOf(C.packed)})`);
+  const readable = fieldText(line, C.readable[0], readableEnd(line));
+  let agrees;
+  try {
+    agrees = fillDesignation(packed, readable, row);
+  } catch (err) {
+    if (err instanceof PackedFormError) failAt(file, lineNo, line, C.packed, err.message);
+    throw err;
+  }
+  if (!agrees) {
+    failAt(file, lineNo, line, C.readable, `readable designation '${readable}' disagrees with packed ${packed} = (${row.number})`);
   }
 }
 

@@ -1,21 +1,26 @@
 /**
  * Reads one orbit input of any known format: streams its lines (./lineSource.ts), finds a
  * header block, detects the format (./detectFormat.ts) unless told, and hands every data row
- * to `onRow` in one reused scratch OrbitRow (copy what you keep) with its line number and
- * raw text (for CSV: the record's lines), or every bad one to
- * `onReject`. Invariant the pipeline builds on: linesRead = rows + rejected, where linesRead
+ * to `onRow` in one reused scratch OrbitRow (copy what you keep) with its line number and a
+ * function that gives its raw text (for CSV: the record's lines), or every bad one to
+ * `onReject`. The text is decoded only when asked for, and only during the call (like the
+ * row, it belongs to the line being read): a kept row needs none. Invariant the pipeline builds on: linesRead = rows + rejected, where linesRead
  * counts data lines (records for CSV); header, blank and separator lines are `skipped`.
  * Fatal problems with the whole file → UnreadableInputError (`FILE: reason`).
  *
  * The first PROBE_LINES lines are held back to decide the header block and the format, then
- * replayed; after that every line goes straight to its parser.
+ * replayed; after that every line goes straight to its parser. Orbit export lines are read
+ * from their bytes (./orbitExportBytes.ts) and decoded for the text parser only when that
+ * reader cannot take them (bad or unusual lines, non-ASCII UTF-8): the same rows, the same
+ * rejects with the same messages.
  */
 import type { BodyKindRule, CsvKindChoice } from './bodyKind.js';
 import type { ColumnMapping } from './columnMap.js';
 import { parseCometExportLine } from './cometExportLine.js';
 import { CsvTableReader } from './csvTable.js';
 import { detectFormat, headerBlockLength } from './detectFormat.js';
-import { forEachLine, type LineEncoding } from './lineSource.js';
+import { forEachLineBytes, type LineEncoding } from './lineSource.js';
+import { OrbitExportBytesReader } from './orbitExportBytes.js';
 import { parseOrbitExportLine } from './orbitExportLine.js';
 import { emptyOrbitRow, InputError, type InputFormat, type OrbitRow } from './types.js';
 
@@ -45,6 +50,8 @@ export interface ReadOrbitSummary {
 }
 
 type Sink = (text: string, lineNo: number) => void;
+/** Receives each good row: the scratch row, its line number, and its raw text on demand. */
+export type OrbitRowSink = (row: OrbitRow, lineNo: number, text: () => string) => void;
 type LineParser = typeof parseOrbitExportLine;
 type Counts = { rows: number; rejected: number; skipped: number };
 
@@ -82,7 +89,7 @@ function fixedWidthSink(
 export async function readOrbitFile(
   path: string,
   options: ReadOrbitOptions,
-  onRow: (row: OrbitRow, lineNo: number, text: string) => void,
+  onRow: OrbitRowSink,
   onReject: (err: InputError) => void,
 ): Promise<ReadOrbitSummary> {
   const row = emptyOrbitRow();
@@ -90,12 +97,21 @@ export async function readOrbitFile(
   let format: InputFormat | undefined = options.format;
   let sink: Sink | null = null;
   let csv: CsvTableReader | null = null;
+  let fast: OrbitExportBytesReader | null = null; // orbit export lines straight from their bytes
   const heldTexts: string[] = [];
   const heldNos: number[] = [];
   const kinds = { asteroid: 0, comet: 0 };
+  // The raw text of the row being handed on: given, or decoded from its bytes when asked for.
+  let rowText: string | null = null;
+  let rowBytes: Buffer | null = null;
+  let rowStart = 0;
+  let rowEnd = 0;
+  let rowEncoding: LineEncoding = 'latin1';
+  const textOfRow = (): string => (rowText ??= rowBytes!.toString(rowEncoding, rowStart, rowEnd));
   const countRow = (r: OrbitRow, lineNo: number, text: string): void => {
     kinds[r.kind]++;
-    onRow(r, lineNo, text);
+    rowText = text;
+    onRow(r, lineNo, textOfRow);
   };
 
   const decide = (): void => {
@@ -108,6 +124,7 @@ export async function readOrbitFile(
     } else {
       const parse = format === 'orbit-export' ? parseOrbitExportLine : parseCometExportLine;
       sink = fixedWidthSink(parse, path, row, counts, countRow, onReject);
+      if (format === 'orbit-export') fast = new OrbitExportBytesReader();
     }
     counts.skipped += header;
     for (let k = header; k < heldTexts.length; k++) sink(heldTexts[k], heldNos[k]);
@@ -115,7 +132,19 @@ export async function readOrbitFile(
     heldNos.length = 0;
   };
 
-  const stats = await forEachLine(path, (text, lineNo) => {
+  const stats = await forEachLineBytes(path, (bytes, start, end, lineNo, encoding) => {
+    if (fast !== null && encoding === 'latin1' && fast.read(bytes, start, end, row)) {
+      counts.rows++;
+      kinds[row.kind]++;
+      rowText = null;
+      rowBytes = bytes;
+      rowStart = start;
+      rowEnd = end;
+      rowEncoding = encoding;
+      onRow(row, lineNo, textOfRow);
+      return;
+    }
+    const text = bytes.toString(encoding, start, end);
     if (sink !== null) return sink(text, lineNo);
     heldTexts.push(text);
     heldNos.push(lineNo);

@@ -43,6 +43,25 @@ describe('CatalogueBuilder', () => {
     expect(b.rejects[0].reason).toBe('duplicate designation 2031 QQ1: older epoch than new.txt:9, which is kept');
   });
 
+  it('a row given with a function for its text asks for it only when it is rejected', () => {
+    const b = new CatalogueBuilder();
+    const asked: number[] = [];
+    const textOf = (line: number) => (): string => {
+      asked.push(line);
+      return `text of line ${line}`;
+    };
+    b.add(asteroidRow({ designation: '2031 QQ1' }), 'f', 1, textOf(1)); // kept
+    b.add(asteroidRow({ designation: '2031 QQ2', e: -0.1 }), 'f', 2, textOf(2)); // invalid
+    b.add(asteroidRow({ designation: '2031 QQ1', epochJdTT: 2_462_000.5 }), 'f', 3, textOf(3)); // older duplicate
+    b.add(asteroidRow({ designation: '2031 QQ1', epochJdTT: 2_464_000.5 }), 'f', 4, textOf(4)); // newer: kept
+    expect(asked).toEqual([2, 3]);
+    expect(b.rejects.map((r) => [r.kind, r.line, r.text])).toEqual([
+      ['invalid', 2, 'text of line 2'],
+      ['duplicate', 3, 'text of line 3'],
+      ['duplicate', 1, '2031 QQ1 (epoch JD 2463000.5)'], // superseded: named, its text not held
+    ]);
+  });
+
   it('duplicate rejects name the row finally kept, not one superseded later', () => {
     const b = new CatalogueBuilder();
     b.add(asteroidRow({ designation: '2031 QQ2', epochJdTT: 2_461_000.5 }), 'f', 1, 'first');

@@ -5,12 +5,14 @@
  * FIPS 180-2 (appendix B.1, "abc"; the empty-message digest), from memory.
  */
 import { spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { afterAll, describe, expect, it } from 'vitest';
 import { forEachLine, UnreadableInputError } from '../../src/io/index.js';
+import { HASH_THREAD_MIN_BYTES, sha256Of } from '../../src/io/sha256Thread.js';
 import { CAN_LIST_OPEN_FILES, closedWithin } from './openFiles.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'wayward-lines-'));
@@ -122,6 +124,26 @@ describe('contents', () => {
     const r = await lines(file('split.txt', `${first}\r\n${second}tail\r\nend`));
     expect(r.texts.map((t) => t.length)).toEqual([chunk - 1, chunk - 2 + 5, 3]);
     expect(r.texts[1].endsWith('étail')).toBe(true);
+  });
+
+  it('an input past HASH_THREAD_MIN_BYTES is hashed on a worker thread: the digest node:crypto gives on the same bytes', async () => {
+    const line = Buffer.from('K31YZ0E 26.94  0.15 K325A 231.48676 (synthetic line)\n', 'latin1');
+    const count = Math.ceil((HASH_THREAD_MIN_BYTES + 12_345) / line.length);
+    const bytes = Buffer.concat(Array.from({ length: count }, () => line));
+    const hash = sha256Of(bytes.length);
+    expect(hash.onThread).toBe(true);
+    expect(sha256Of(HASH_THREAD_MIN_BYTES - 1).onThread).toBe(false);
+    for (let k = 0; k < bytes.length; k += 1 << 20) hash.update(bytes.subarray(k, k + (1 << 20)));
+    const want = createHash('sha256').update(bytes).digest('hex'); // OpenSSL through node:crypto, one thread
+    expect(await hash.digest()).toBe(want);
+    const p = file('large.txt', bytes);
+    const r = await lines(p);
+    expect(r.texts.length).toBe(count);
+    expect(r.sha256).toBe(want);
+    // a read that stops early (the consumer throws) abandons the hash and leaves nothing running
+    const boom = new Error('stop');
+    await expect(forEachLine(p, (_t, n) => { if (n === 1000) throw boom; })).rejects.toBe(boom);
+    expect((await lines(p)).sha256).toBe(r.sha256);
   });
 
   it("reads standard input for '-'", () => {
