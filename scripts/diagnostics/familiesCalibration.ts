@@ -167,17 +167,18 @@ async function main(): Promise<void> {
     .option('--catalogues <n>', 'null catalogues drawn again and scored whole', integerAtLeast(1), 1)
     .option('--file <path>', 'an orbit file instead of the generated dump')
     .option('--weight-cap <x>', 'family down-weighting cap of the null background', Number, DEFAULT_PROPER_OUTLIER_OPTIONS.weightCap)
+    .option('--clump-cap <x>', 'clump weight cap of the score\'s coarse background', Number, DEFAULT_PROPER_OUTLIER_OPTIONS.clumpCap)
     .option('--replicates <n>', 'most null catalogues', integerAtLeast(1), DEFAULT_PROPER_OUTLIER_OPTIONS.replicates)
     .option('--summary-only', 'the rates only, no table')
     .option('--save <dir>', 'keep the generated dump in this folder (for --file next time)')
     .parse(process.argv)
-    .opts<{ rows: number; plants: number; seed: number; catalogues: number; file?: string; weightCap: number; replicates: number; summaryOnly?: boolean; save?: string }>();
+    .opts<{ rows: number; plants: number; seed: number; catalogues: number; file?: string; weightCap: number; clumpCap: number; replicates: number; summaryOnly?: boolean; save?: string }>();
   const dir = mkdtempSync(join(tmpdir(), 'wayward-families-calibration-'));
   try {
     const file = o.file ?? (await writeFamiliesDump(o.save ?? join(dir, 'dump'), o.rows, o.plants, o.seed)).file;
     if (o.save !== undefined) console.log(`dump written to ${file}`);
     const cat = (await loadCatalogue([file], {})).catalogue;
-    const opts: ProperOutlierOptions = { ...DEFAULT_PROPER_OUTLIER_OPTIONS, weightCap: o.weightCap, replicates: o.replicates };
+    const opts: ProperOutlierOptions = { ...DEFAULT_PROPER_OUTLIER_OPTIONS, weightCap: o.weightCap, clumpCap: o.clumpCap, replicates: o.replicates };
     const screen = screenFamilies(cat);
     const a = pick(screen.proper.aAu, screen.screened), e = pick(screen.proper.e, screen.screened), sinI = pick(screen.proper.sinI, screen.screened);
     const nScreened = a.length;
@@ -201,7 +202,7 @@ async function main(): Promise<void> {
       if (qValue[j] < 0.05) q05++;
     }
     const sigma = (p: number) => 100 * Math.sqrt(p * (1 - p) / testedN);
-    console.log(`${cat.size} rows; ${nScreened} screened, ${n - nScreened} set apart occupying space; weight cap ${opts.weightCap}, at most ${opts.replicates} null catalogues; ${testedN} tested: ` +
+    console.log(`${cat.size} rows; ${nScreened} screened, ${n - nScreened} set apart occupying space; weight cap ${opts.weightCap}, clump cap ${opts.clumpCap}, at most ${opts.replicates} null catalogues; ${testedN} tested: ` +
       `${fap01} (${(100 * fap01 / testedN).toFixed(2)}% ± ${sigma(0.01).toFixed(2)}%) at false-alarm probability < 0.01, ${fap05} (${(100 * fap05 / testedN).toFixed(2)}% ± ${sigma(0.05).toFixed(2)}%) < 0.05, ${q05} with q < 0.05`);
     const lowest = [...Array(n).keys()].filter((j) => tested[j]).sort((x, y) => out.falseAlarmProb[x] - out.falseAlarmProb[y]).slice(0, 10);
     console.log(`lowest false-alarm probabilities (score, q): ${lowest.map((j) => `${out.falseAlarmProb[j].toExponential(1)} (${out.score[j].toFixed(2)}, ${qValue[j].toFixed(3)})`).join(', ')}`);
