@@ -20,7 +20,9 @@
  *    threads (and whether their numbers are the same bits); then the whole families analysis
  *    once on 2 threads (the scan's numbers), and what became of each plant: its isolation
  *    score, nearest and 8th-nearest distances, false-alarm probability, q-value, and whether the
- *    scan listed it.
+ *    scan listed it; and the null model's calibration on the dump: of the unplanted bodies tested,
+ *    the fraction below false-alarm probability 0.01 and 0.05 against α with its binomial σ, and
+ *    how many pass q below the false-discovery level.
  * 3. scikit-learn's DBSCAN (Debian python3-sklearn, scripts/bench/dbscanSklearn.py) on the same
  *    proper elements, region by region in the same velocity space (reference a the region's
  *    mean a) at the region's cutoff, min_samples = 2, clusters under N_min then turned to
@@ -338,6 +340,33 @@ async function plantsFate(cat: Catalogue, planted: readonly string[], pockets: r
     console.log(`    ${d.padEnd(16)} ${pockets[m].radiusMPerS.toFixed(0).padStart(10)} ${o.nearestDistanceMps[j].toFixed(0).padStart(12)} ${o.kthDistanceMps[j].toFixed(0).padStart(8)} ${o.score[j].toFixed(2).padStart(6)}   ${o.falseAlarmProb[j].toExponential(2).padStart(16)}  ${r.qValue[j].toExponential(2).padStart(9)}  ${label}`);
   });
   console.log(`  plants scored ${counted} of ${planted.length}; listed by the scan ${listedCount} of ${planted.length}${listed ? '' : ' (no scan output: from the analysis\'s own q < level)'}`);
+  calibration(r, cat, new Set(planted));
+}
+
+/**
+ * The null model's calibration on this dump: of the bodies tested (screened, outside every family)
+ * that were not planted, the fraction at false-alarm probability < 0.01 and < 0.05 against the
+ * nominal α, with the binomial σ √(α(1 − α)/N) (common practice), and how many of them pass
+ * q < the false-discovery level (nominally about none: the dump's natural bodies hold no isolated
+ * body of their own, though pockets of a smooth law can still leave one by chance).
+ */
+function calibration(r: FamiliesAnalysis, cat: Catalogue, planted: ReadonlySet<string>): void {
+  const o = r.outliers;
+  if (o === null || r.qValue === null) return;
+  let tested = 0, q = 0;
+  const below = [0, 0];
+  const alphas = [0.01, 0.05];
+  r.screen.screened.forEach((k, j) => {
+    if (r.clustering.labels[j] >= 0 || planted.has(cat.designation[k])) return;
+    tested++;
+    alphas.forEach((alpha, m) => { if (o.falseAlarmProb[j] < alpha) below[m]++; });
+    if (r.qValue![j] < FAMILIES_DEFAULTS.fdrLevel) q++;
+  });
+  const parts = alphas.map((alpha, m) => {
+    const rate = below[m] / tested, sigma = Math.sqrt((alpha * (1 - alpha)) / tested);
+    return `${fmt(below[m])} (${(100 * rate).toFixed(3)}%) below ${alpha}, nominal ${100 * alpha}% ± ${(100 * sigma).toFixed(3)}% (1σ binomial), ${((rate - alpha) / sigma).toFixed(1)}σ`;
+  });
+  console.log(`  calibration: of ${fmt(tested)} unplanted bodies tested, false-alarm probability ${parts.join('; ')}; ${q} unplanted with q < ${FAMILIES_DEFAULTS.fdrLevel}`);
 }
 
 /** Part 3: scikit-learn's DBSCAN against HCM, region by region, on the screened proper elements. */

@@ -20,6 +20,7 @@
 import { seededRandom } from '../core/random.js';
 import type { Catalogue } from '../clean/types.js';
 import { DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers, type ProperOutliers } from './families/outliers.js';
+import { nullPickClause } from './families/outlierCalibration.js';
 import { clusterFamilies, type FamiliesClustering } from './familiesCluster.js';
 import { pick } from './families/qrlRegion.js';
 import { membershipLabels, nameFamilies, type FamilyName } from './familiesNaming.js';
@@ -130,8 +131,7 @@ export const familiesDetector: Detector = {
   scoreMeaning: `isolation in proper elements: ln(background density / density within the ${K}th-nearest body), scaled coordinates (√(5/4)·ln a, √2·e, √2·sin i)`,
   tailMeaning: 'bodies screened (trusted proper elements) with an isolation score at least as high, the body itself included',
   falseAlarmModel: 'as many bodies as occupy proper-element space (screened, and set apart with untrusted proper elements within the screened ones\' ranges), drawn independently from a smooth background in scaled proper-element space ' +
-    `(each a point uniform in the ball around an observed body as wide as its ${K}th-neighbour distance, that body picked with weight ` +
-    `min(1, ${DEFAULT_PROPER_OUTLIER_OPTIONS.weightCap}·background/${K}-nearest density) so that families do not shape it, e and sin i reflected at 0); ` +
+    `(each a point uniform in the ball around an observed body as wide as its ${K}th-neighbour distance, ${nullPickClause(DEFAULT_PROPER_OUTLIER_OPTIONS.weightCap)}, e and sin i reflected at 0); ` +
     `up to ${DEFAULT_PROPER_OUTLIER_OPTIONS.replicates} such catalogues, seeded, the bodies drawn from a screened body scored as the observed ones; ` +
     'beyond the null sample\'s resolution, a generalized Pareto fit to its upper tail (an extrapolation, flagged fap-extrapolated); ' +
     'candidates are the bodies outside every family with Benjamini–Hochberg q below the false-discovery level over all of them',

@@ -127,6 +127,16 @@ function nullModelSentence(bg: OutlierBackground, n: number, opts: IsolationOpti
   return `Null model: ${n} bodies drawn independently from a smooth background in scaled proper-element space ` +
     `(√(5/4)·ln a, √2·e, √2·sin i): each a point uniform in the ball around an observed body ` +
     `${selected ? '(scored or set apart: every body that occupies space) ' : ''}as wide as its ${opts.k}-th neighbour distance, ` +
-    `that body picked with weight min(1, ${bg.weightCap}·background/k-nearest density) so that families do not shape it, ` +
+    `${nullPickClause(bg.weightCap)}, ` +
     `e and sin i reflected at 0; ${replicates} such catalogues, ${which}.`;
+}
+
+/**
+ * How the null background picks the observed body a draw is placed around, in words: every body
+ * alike (weight cap ∞, families included), or down-weighted by the cap.
+ */
+export function nullPickClause(weightCap: number): string {
+  return weightCap === Infinity
+    ? 'that body picked with equal probability among them, family members included (the null holds the families as the catalogue does)'
+    : `that body picked with weight min(1, ${weightCap}·background/k-nearest density) so that families do not shape it`;
 }

@@ -6,7 +6,10 @@
  * r_k the distance to the body's k-th nearest other body (the local density estimate k / V_k,
  * Loftsgaarden & Quesenberry 1965, Ann. Math. Stat. 36, 1049) and ρ_bg the background density
  * at a coarser scale: the catalogue's own counts in a coarse grid (about `backgroundPerCell`
- * bodies a cell), smoothed over neighbouring cells (outlierDensity.ts). The score is the log of
+ * bodies a cell), smoothed over neighbouring cells (outlierDensity.ts), each body counted at
+ * most `clumpCap` times its coarse surroundings over its own neighbourhood's density, so that a
+ * dense family does not raise the background of the bodies around it (outlierClumpWeights.ts;
+ * Infinity: every body counts 1). The score is the log of
  * how many background bodies the k-nearest ball "should" hold over the k it does: 0 where the
  * body is as crowded as its surroundings, positive where it is emptier. A body in a sparse but
  * smooth region is not raised for the sparseness alone, since ρ_bg falls with it. No
@@ -27,22 +30,28 @@ import { cellSizeForOccupancy } from './kNearestCellSize.js';
 import { buildKNearestGrid } from './kNearestGrid.js';
 import type { KNearestResult } from './kNearest.js';
 import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
-import { coarseDensity, densityAt, type CoarseDensity } from './outlierDensity.js';
+import { clumpWeightedDensity } from './outlierClumpWeights.js';
+import { densityAt, type CoarseDensity } from './outlierDensity.js';
 
 export interface IsolationOptions {
   k: number; // neighbours: the k-th sets the local density
   gridPerCell: number; // mean bodies per occupied cell of the neighbour grid
   backgroundPerCell: number; // mean bodies per occupied cell of the coarse background grid
+  clumpCap: number; // a body counts in the coarse background at most cap·ρ_bg/ρ_fine (outlierClumpWeights.ts); Infinity: every body 1
 }
 
 /**
- * Defaults (common practice for k-nearest density scores: k of order 10; grids chosen from
+ * Defaults (common practice for k-nearest density scores: k of order 10; clump cap 8, measured in
+ * outlierClumpWeights.ts; grids chosen from
  * measured cost, the neighbours found do not depend on them). The k nearest of 1.5 million
  * bodies with cells skipped beyond the k-th distance (kNearest.ts): 4 bodies a cell 3.4–3.7 s,
  * 2 a cell 3.5 s (without the skipping 3.9–4.0 s) at load average 1.8; on a loaded machine
  * (load average 5–7) 4 a cell 4.1–4.9 s, 2 a cell 6.1–6.4 s, 8 a cell 5.1–5.6 s.
  */
-export const DEFAULT_ISOLATION_OPTIONS: Readonly<IsolationOptions> = { k: 8, gridPerCell: 4, backgroundPerCell: 200 };
+export const DEFAULT_ISOLATION_OPTIONS: Readonly<IsolationOptions> = { k: 8, gridPerCell: 4, backgroundPerCell: 200, clumpCap: 8 };
+
+/** Re-estimates of the coarse background with the clump weights (outlierClumpWeights.ts; our choice: the first starts from a background the clumps inflate). */
+export const CLUMP_PASSES = 2;
 
 export interface IsolationScores {
   readonly score: Float64Array; // ln(ρ_bg · V_k / k), per body
@@ -56,7 +65,7 @@ export function isolationScores(xyz: Float64Array, opts: IsolationOptions, searc
   const n = xyz.length / 3;
   const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, opts.gridPerCell, maxCellsFor(n)));
   const neighbours = search.all(grid, opts.k);
-  const background = coarseDensity(xyz, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCellsFor(n)));
+  const background = clumpWeightedDensity(xyz, grid, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCellsFor(n)), opts.clumpCap, CLUMP_PASSES);
   const backgroundDensity = new Float64Array(n);
   const score = scoresFrom(xyz, n, neighbours, background, backgroundDensity);
   return { score, neighbours, backgroundDensity, background };
@@ -72,7 +81,7 @@ export function isolationScoresOfFirst(xyz: Float64Array, opts: IsolationOptions
   const n = xyz.length / 3;
   const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, opts.gridPerCell, maxCellsFor(n)));
   const neighbours = search.ofFirst(grid, xyz, m, opts.k);
-  const background = coarseDensity(xyz, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCellsFor(n)));
+  const background = clumpWeightedDensity(xyz, grid, cellSizeForOccupancy(xyz, opts.backgroundPerCell, maxCellsFor(n)), opts.clumpCap, CLUMP_PASSES);
   return scoresFrom(xyz, m, neighbours, background, new Float64Array(m));
 }
 

@@ -30,6 +30,17 @@ describe('null background', () => {
     expect(down).toBeLessThan(0.5 * clump);
   });
 
+  it('with no cap (∞) weighs every body 1, exact ties (score −∞) included', () => {
+    const tied = Float64Array.from(xyz);
+    // Bodies 0–19 written nine times over (rows 0–179): each has 8 others at distance 0, so r_k = 0.
+    for (let c = 1; c < 9; c++) tied.set(tied.subarray(0, 3 * 20), 3 * 20 * c);
+    const s = isolationScores(tied, DEFAULT_ISOLATION_OPTIONS);
+    expect(s.score[0]).toBe(-Infinity);
+    const bg = buildOutlierBackground(tied, s, Infinity);
+    expect(bg.weightedBodies).toBe(uniform + clump);
+    expect(bg.cumulative[bg.cumulative.length - 1]).toBe(uniform + clump);
+  });
+
   it('never draws a negative e or sin i (reflection at 0)', () => {
     const flat = Float64Array.from(xyz);
     for (let p = 0; p < flat.length; p += 3) flat[p + 2] *= 0.01; // sin i within 0.002 of 0

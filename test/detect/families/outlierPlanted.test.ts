@@ -44,19 +44,23 @@ describe('isolation outliers on the real main belt', () => {
   const s = Float64Array.from([...real.sinI, ...Array.from({ length: PLANTED }, (_, t) => planted[3 * t + 2] / SCALED_SIN_I_WEIGHT)]);
   const result = properOutliers(a, e, s, seededRandom(99));
 
-  it(`${PLANTED} bodies planted in empty regions get null tail fractions below 0.01`, () => {
+  it(`${PLANTED} bodies planted in empty regions get null tail fractions below 0.02, their median below 0.001`, () => {
     expect(planted.length / 3).toBeGreaterThanOrEqual(PLANTED);
-    let worst = 0;
-    for (let t = 0; t < PLANTED; t++) {
-      const j = n + t;
-      worst = Math.max(worst, result.nullTailFraction[j]);
-      expect(result.nullTailFraction[j], `planted ${t}: a=${a[j].toFixed(4)} e=${e[j].toFixed(4)} sin i=${s[j].toFixed(4)}, nearest ${result.nearestDistanceMps[j].toFixed(0)} m/s`).toBeLessThan(0.01);
-    }
     const near = result.nearestDistanceMps.subarray(n);
-    console.log(`planted: null tail fractions ${Array.from(result.nullTailFraction.subarray(n)).sort((x, y) => x - y).map((x) => x.toExponential(1)).join(' ')}; ` +
+    const fractions = result.nullTailFraction.subarray(n);
+    const worst = Math.max(...fractions);
+    console.log(`planted: null tail fractions ${Array.from(fractions).sort((x, y) => x - y).map((x) => x.toExponential(1)).join(' ')}; ` +
       `worst ${worst.toExponential(2)} (smallest possible ${(1 / (result.nullScores + 1)).toExponential(2)}); ` +
       `nearest neighbours ${Math.min(...near).toFixed(0)}–${Math.max(...near).toFixed(0)} m/s`);
-    // Measured: worst 8.8e-3 (a hole just wide enough), median 4.5e-4.
+    for (let t = 0; t < PLANTED; t++) {
+      const j = n + t;
+      expect(result.nullTailFraction[j], `planted ${t}: a=${a[j].toFixed(4)} e=${e[j].toFixed(4)} sin i=${s[j].toFixed(4)}, nearest ${result.nearestDistanceMps[j].toFixed(0)} m/s`).toBeLessThan(0.02);
+    }
+    expect(Array.from(fractions).sort((x, y) => x - y)[PLANTED >> 1]).toBeLessThan(1e-3);
+    // Measured: worst 1.01e-2 (a hole just wide enough: nearest body 275 m/s), median 5.4e-4.
+    // Bound loosened from 0.01 for the worst one: the null now draws the families as the belt
+    // holds them (outlierBackground.ts), and their surroundings, which score high, make its
+    // upper tail a little heavier; with families down-weighted it was 8.8e-3, median 4.5e-4.
   });
 
   it('bodies nearest the centres of the five largest families do not', () => {
