@@ -74,12 +74,12 @@ export function kNearestSortedRange(
     const c = axisCell(qx, grid.origin[0], h, nx) + nx * (axisCell(qy, grid.origin[1], h, ny) + ny * axisCell(qz, grid.origin[2], h, nz));
     const inCell = grid.cellStart[c + 1] - grid.cellStart[c];
     if (inCell <= CROWDED_CELL_POINTS || inCell <= k) {
-      searchOne(grid, qx, qy, qz, j, k, d2, idx, j * k, 0);
+      searchOne(grid, qx, qy, qz, p, k, d2, idx, j * k, 0);
       continue;
     }
     if (c !== treeCell) { tree = new KNearestCellTree(xyz, order, grid.cellStart[c], grid.cellStart[c + 1]); treeCell = c; }
     tree!.fill(qx, qy, qz, j, k, d2, idx, j * k); // the own cell, as shell 0 would read it: k held
-    searchOne(grid, qx, qy, qz, j, k, d2, idx, j * k, k);
+    searchOne(grid, qx, qy, qz, p, k, d2, idx, j * k, k);
   }
 }
 
@@ -113,12 +113,13 @@ export function finishKNearest(k: number, d2: Float64Array, index: Int32Array): 
 }
 
 /**
- * Fills d2[base … base+k) and idx[…] with one query's k nearest (squared distances). `held`: 0,
+ * Fills d2[base … base+k) and idx[…] with one query's k nearest (squared distances), the point at
+ * sorted position `excludeAt` left out (−1: none). `held`: 0,
  * or k when the query's own cell has been read already (those k held there): the shells then
  * start at 1, after the bound of shell 0 is checked.
  */
 function searchOne(
-  g: KNearestGrid, qx: number, qy: number, qz: number, exclude: number, k: number,
+  g: KNearestGrid, qx: number, qy: number, qz: number, excludeAt: number, k: number,
   d2: Float64Array, idx: Int32Array, base: number, held: number,
 ): void {
   const h = g.cellSize;
@@ -148,10 +149,10 @@ function searchOne(
           if (xa > xb) continue;
         }
         if (z === z0 || z === z1 || y === y0 || y === y1) {
-          found = readRun(g, row + xa, row + xb, qx, qy, qz, exclude, k, d2, idx, base, found);
+          found = readRun(g, row + xa, row + xb, qx, qy, qz, excludeAt, k, d2, idx, base, found);
         } else {
-          if (x0 >= 0 && x0 >= xa && x0 <= xb) found = readRun(g, row + x0, row + x0, qx, qy, qz, exclude, k, d2, idx, base, found);
-          if (x1 < nx && x1 >= xa && x1 <= xb) found = readRun(g, row + x1, row + x1, qx, qy, qz, exclude, k, d2, idx, base, found);
+          if (x0 >= 0 && x0 >= xa && x0 <= xb) found = readRun(g, row + x0, row + x0, qx, qy, qz, excludeAt, k, d2, idx, base, found);
+          if (x1 < nx && x1 >= xa && x1 <= xb) found = readRun(g, row + x1, row + x1, qx, qy, qz, excludeAt, k, d2, idx, base, found);
         }
       }
     }
@@ -192,22 +193,23 @@ function gapTo(v: number, lo: number, hi: number, slack: number): number {
 
 /** Reads the points of cells cFirst … cLast (inclusive, contiguous in sorted order); returns how many are held. */
 function readRun(
-  g: KNearestGrid, cFirst: number, cLast: number, qx: number, qy: number, qz: number, exclude: number,
+  g: KNearestGrid, cFirst: number, cLast: number, qx: number, qy: number, qz: number, excludeAt: number,
   k: number, d2: Float64Array, idx: Int32Array, base: number, held: number,
 ): number {
   const xyz = g.sortedXyz;
   const end = g.cellStart[cLast + 1];
+  const order = g.order;
   for (let p = g.cellStart[cFirst]; p < end; p++) {
-    const j = g.order[p];
-    if (j === exclude) continue;
+    if (p === excludeAt) continue;
     const dx = xyz[3 * p] - qx, dy = xyz[3 * p + 1] - qy, dz = xyz[3 * p + 2] - qz;
     const dd = dx * dx + dy * dy + dz * dz;
     let m = held;
     if (m === k) {
       const w = base + k - 1;
-      if (dd > d2[w] || (dd === d2[w] && j > idx[w])) continue;
+      if (dd > d2[w] || (dd === d2[w] && order[p] > idx[w])) continue; // the index is read only for a point that may enter
       m = k - 1;
     } else held++;
+    const j = order[p];
     // insertion: shift larger (distance, index) pairs up one place
     while (m > 0 && (d2[base + m - 1] > dd || (d2[base + m - 1] === dd && idx[base + m - 1] > j))) {
       d2[base + m] = d2[base + m - 1];
