@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { seededRandom } from '../../src/core/random.js';
-import { countsAtLeast } from '../../src/detect/tailCountsAtLeast.js';
+import { countsAtLeast, countsAtLeastUnsorted } from '../../src/detect/tailCountsAtLeast.js';
 import { fitUpperTail, upperTailProbabilities, upperTailProbability } from '../../src/detect/tailExtrapolation.js';
 
 /** #{s ≥ x} by brute force; NaN counts every value, as a binary search on `s < x` does. */
@@ -38,6 +38,19 @@ describe('counts at least as high, through a guide table', () => {
     const queries = Array.from({ length: 400 }, (_, j) => (j % 4 === 0 ? list[Math.floor(r() * list.length)] : 12 * r() - 1));
     const got = countsAtLeast(sorted, queries);
     queries.forEach((x, j) => expect(got[j], `query ${x}`).toBe(brute(list, x)));
+  });
+});
+
+describe('counts at least as high against a sample left unsorted', () => {
+  it('equal a brute-force count, values drawn from the sample and not, ties, infinities and NaN (property-based)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.oneof(value, fc.constant(NaN)), { maxLength: 300 }), fc.array(fc.oneof(value, fc.constant(NaN)), { maxLength: 40 }), fc.array(fc.nat(), { maxLength: 20 }), (sample, others, picks) => {
+        const queries = [...others, ...(sample.length > 0 ? picks.map((t) => sample[t % sample.length]) : [])];
+        const got = countsAtLeastUnsorted(sample, queries);
+        return queries.every((x, j) => got[j] === brute(sample, x));
+      }),
+      { numRuns: 500 },
+    );
   });
 });
 
