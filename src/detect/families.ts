@@ -55,7 +55,7 @@ export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, work: Fam
   if (!(opts.fdrLevel > 0 && opts.fdrLevel <= 1)) throw new RangeError(`analyseFamilies: fdrLevel must be in (0, 1], got ${opts.fdrLevel}`);
   if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`analyseFamilies: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
   if (opts.cutoffMPerS !== null && !(opts.cutoffMPerS > 0)) throw new RangeError(`analyseFamilies: cutoff must be positive m/s, got ${opts.cutoffMPerS}`);
-  const screen = screenFamilies(cat);
+  const screen = screenFamilies(cat, work.proper);
   const pickCol = (col: Float64Array) => pick(col, screen.screened);
   const a = pickCol(screen.proper.aAu), e = pickCol(screen.proper.e), sinI = pickCol(screen.proper.sinI);
   // The clustering and the outliers' scores are independent until the candidates: with threads,

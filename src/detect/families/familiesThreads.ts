@@ -1,6 +1,7 @@
 /**
  * The families stage's heavy pieces shared with worker threads (familiesWorker.ts), behind the
  * same synchronous calls as their serial forms, so the callers run unchanged:
+ *   - the proper elements of the screen (familiesScreen.ts), blocks of rows of one epoch;
  *   - the clustering (familiesCluster.ts), handed whole to one worker at the start and collected
  *     when the outliers are done: the two are independent until the candidates, and the worker
  *     joins the outliers' pieces once it has clustered;
@@ -27,6 +28,7 @@ import type { KNearestGrid } from './kNearestGrid.js';
 import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
 import type { VelocitySpace } from './metricVelocity.js';
 import { SERIAL_LEVELS, type LevelRunner } from './qrlCutoff.js';
+import { SERIAL_PROPER, type ProperRunner } from '../familiesScreen.js';
 import type { OutlierBackground } from './outlierBackground.js';
 import { SERIAL_NULL_REPLICATES, type NullReplicateRunner } from './outlierNullReplicate.js';
 import {
@@ -61,6 +63,7 @@ export interface FamiliesWork {
    * clustering either way.
    */
   readonly clusterAside: (a: Float64Array, e: Float64Array, sinI: Float64Array, opts: ClusteringOptions) => () => FamiliesClustering;
+  readonly proper: ProperRunner;
 }
 
 /** On this thread: the clustering is done at once. */
@@ -69,7 +72,17 @@ const clusterHere = (a: Float64Array, e: Float64Array, sinI: Float64Array, opts:
   return () => c;
 };
 
-export const SERIAL_FAMILIES_WORK: FamiliesWork = { search: SERIAL_KNEAREST, levels: SERIAL_LEVELS, nullReplicates: SERIAL_NULL_REPLICATES, clusterAside: clusterHere };
+export const SERIAL_FAMILIES_WORK: FamiliesWork = {
+  search: SERIAL_KNEAREST, levels: SERIAL_LEVELS, nullReplicates: SERIAL_NULL_REPLICATES, clusterAside: clusterHere, proper: SERIAL_PROPER,
+};
+
+/**
+ * Rows of one epoch from which its proper elements are shared with the workers (our choice: each
+ * thread builds the epoch's model and coefficient table, about 0.1–0.2 s, which a smaller set
+ * does not repay), and claims per thread: a few, each building its own table.
+ */
+export const PROPER_SHARED_MIN_ROWS = 100_000;
+const PROPER_CLAIMS_PER_THREAD = 2;
 
 export interface FamiliesThreads extends FamiliesWork {
   readonly threads: number; // this thread and threads − 1 workers
@@ -97,6 +110,21 @@ export async function startFamiliesThreads(threads: number, options: FamiliesThr
     waitForPieces(job.control, piecesOf(job), workers);
     claimsByWorkers += Atomics.load(job.control, WORKER_CLAIMS);
     failIfFailed(job.control);
+  };
+  const proper: ProperRunner = (epochJdTT, cols, out) => {
+    const n = cols.a.length;
+    if (n < PROPER_SHARED_MIN_ROWS) { SERIAL_PROPER(epochJdTT, cols, out); return; }
+    const job: SharedJob = {
+      kind: 'proper', epochJdTT, chunk: Math.ceil(n / (PROPER_CLAIMS_PER_THREAD * threads)), control: newControl(),
+      cols: { a: sharedCopy(cols.a), e: sharedCopy(cols.e), i: sharedCopy(cols.i), node: sharedCopy(cols.node), peri: sharedCopy(cols.peri) },
+      out: {
+        aAu: sharedCopy(out.aAu), e: sharedCopy(out.e), sinI: sharedCopy(out.sinI), gArcsecPerYear: sharedCopy(out.gArcsecPerYear),
+        sArcsecPerYear: sharedCopy(out.sArcsecPerYear), reliability: sharedOf(out.reliability),
+      },
+    };
+    runJob(job);
+    out.aAu.set(job.out.aAu); out.e.set(job.out.e); out.sinI.set(job.out.sinI);
+    out.gArcsecPerYear.set(job.out.gArcsecPerYear); out.sArcsecPerYear.set(job.out.sArcsecPerYear); out.reliability.set(job.out.reliability);
   };
   const clusterAside = (a: Float64Array, e: Float64Array, sinI: Float64Array, opts: ClusteringOptions): () => FamiliesClustering => {
     const job: ClusterJob = {
@@ -153,7 +181,7 @@ export async function startFamiliesThreads(threads: number, options: FamiliesThr
     return Array.from(seeds, (_, r) => Float64Array.from(job.scores.subarray(r * scored, r * scored + job.counts[r])));
   };
   return {
-    threads, search, levels, nullReplicates, clusterAside,
+    threads, search, levels, nullReplicates, clusterAside, proper,
     workerClaims: () => claimsByWorkers,
     async close() {
       await Promise.all(workers.map((w) => w.terminate()));

@@ -5,7 +5,9 @@
  *   - 'k-nearest': chunks of grid positions, filled by kNearestSortedRange (kNearest.ts);
  *   - 'levels': one QRL background each, its level by levelOrNaN (qrlCutoff.ts);
  *   - 'null-replicates': one null catalogue each, drawn from its own seeded stream and scored by
- *     nullReplicateScores (outlierNullReplicate.ts) with this thread's own k-nearest searches.
+ *     nullReplicateScores (outlierNullReplicate.ts) with this thread's own k-nearest searches;
+ *   - 'proper': blocks of rows of one epoch, their proper elements by properElementsColumns
+ *     (core/secular) with the epoch's model, which each thread builds at its first block.
  * Each finished piece is counted (PIECES_DONE), so the calling thread goes on once the pieces
  * are done, without waiting for a worker still busy with an earlier job to reach this one.
  * One job is a worker's alone: 'cluster', the whole clustering (familiesCluster.ts, its levels
@@ -15,6 +17,9 @@
  */
 import { parentPort, workerData, type MessagePort } from 'node:worker_threads';
 import { clusterFamilies, type ClusteringOptions } from '../familiesCluster.js';
+import { planetarySecularModel } from '../../core/secular/planetarySecularModel.js';
+import { properElementsColumns, type OsculatingColumns, type ProperColumns } from '../../core/secular/properElementsColumns.js';
+import type { SecularModel } from '../../core/secular/types.js';
 import { kNearestSortedRange } from './kNearest.js';
 import type { KNearestGrid } from './kNearestGrid.js';
 import type { VelocitySpace } from './metricVelocity.js';
@@ -70,6 +75,16 @@ export interface NullReplicatesJob {
   control: Int32Array;
 }
 
+/** Proper elements of the rows of one epoch, in blocks of rows (familiesScreen.ts ProperRunner); each thread builds the epoch's model once. */
+export interface ProperJob {
+  kind: 'proper';
+  epochJdTT: number;
+  cols: OsculatingColumns; // on shared memory
+  out: ProperColumns; // shared output
+  chunk: number; // rows per claim
+  control: Int32Array;
+}
+
 /** The whole clustering of the screened bodies on one worker; its result goes out on that worker's result port. */
 export interface ClusterJob {
   kind: 'cluster';
@@ -78,11 +93,12 @@ export interface ClusterJob {
   control: Int32Array;
 }
 
-export type SharedJob = KNearestJob | LevelsJob | NullReplicatesJob;
+export type SharedJob = KNearestJob | LevelsJob | NullReplicatesJob | ProperJob;
 export type FamiliesJob = SharedJob | ClusterJob;
 
 /** Pieces a shared job is cut into. */
 export function piecesOf(job: SharedJob): number {
+  if (job.kind === 'proper') return Math.ceil(job.cols.a.length / job.chunk);
   return job.kind === 'levels' ? job.spaces.length : job.kind === 'null-replicates' ? job.seeds.length : Math.ceil(job.grid.count / job.chunk);
 }
 
@@ -92,10 +108,14 @@ export function piecesOf(job: SharedJob): number {
  */
 export function runClaims(job: SharedJob, byWorker = false): number {
   const pieces = piecesOf(job);
+  let model: SecularModel | null = null; // a proper job's model, built at this thread's first claim
   for (let claims = 0; ; claims++) {
     const piece = Atomics.add(job.control, NEXT_CLAIM, 1);
     if (piece >= pieces) return claims;
-    if (job.kind === 'levels') {
+    if (job.kind === 'proper') {
+      model ??= planetarySecularModel(job.epochJdTT);
+      properElementsColumns(model, job.cols, job.out, piece * job.chunk, Math.min(job.cols.a.length, (piece + 1) * job.chunk));
+    } else if (job.kind === 'levels') {
       job.levels[piece] = levelOrNaN(job.spaces[piece], job.minMembers, job.resolution);
     } else if (job.kind === 'null-replicates') {
       const scores = nullReplicateScores(job.bg, job.catalogueSize, job.opts, job.scored, seededRandom(job.seeds[piece]));
