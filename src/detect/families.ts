@@ -14,8 +14,10 @@
  *      lists the bodies with falseAlarmProb below the threshold, each with its q-value
  *      (familiesOutliers.ts); the detector's candidates in `scan` are those of them with
  *      q below the false-discovery level. Deterministic for the seed.
- * The QRL levels (stage 2) and the k-nearest searches (stage 3) run on the scan's threads
- * (DetectorContext.threads; families/familiesThreads.ts), with the same numbers on any count.
+ * The proper elements (stage 1), the QRL levels (stage 2) and the k-nearest searches and null
+ * catalogues (stage 3) run on the scan's threads (DetectorContext.threads;
+ * families/familiesThreads.ts), with the same numbers on any count; with more than one, stage 2
+ * runs on a worker while this thread scores the outliers (they meet at the candidates).
  */
 import { seededRandom } from '../core/random.js';
 import type { Catalogue } from '../clean/types.js';
@@ -46,9 +48,9 @@ export interface FamiliesAnalysis {
 }
 
 /**
- * Everything the detector finds; `wayward families` writes it all. `work`: the threads the QRL
- * levels and the outliers' k-nearest searches run on (startFamiliesThreads); the same numbers
- * on any.
+ * Everything the detector finds; `wayward families` writes it all. `work`: the threads the proper
+ * elements, the clustering and the outliers' searches run on (startFamiliesThreads); the same
+ * numbers on any.
  */
 export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, work: FamiliesWork = SERIAL_FAMILIES_WORK): FamiliesAnalysis {
   if (!(opts.fapThreshold > 0 && opts.fapThreshold <= 1)) throw new RangeError(`analyseFamilies: fapThreshold must be in (0, 1], got ${opts.fapThreshold}`);
