@@ -28,7 +28,7 @@ export type FamiliesSkipReason = keyof typeof FAMILIES_NOT_SCREENED;
 export function familiesSkipReason(cat: Catalogue, k: number): Exclude<FamiliesSkipReason, 'proper-unreliable'> | '' {
   if (cat.kind[k] === KIND_COMET) return 'comet-catalogue';
   const a = cat.a[k], e = cat.e[k];
-  if ([a, e, cat.i[k], cat.node[k], cat.peri[k], cat.epochJdTT[k]].some((x) => Number.isNaN(x))) return 'elements-missing';
+  if (Number.isNaN(a) || Number.isNaN(e) || Number.isNaN(cat.i[k]) || Number.isNaN(cat.node[k]) || Number.isNaN(cat.peri[k]) || Number.isNaN(cat.epochJdTT[k])) return 'elements-missing';
   if (e >= 1 || a <= 0) return 'unbound';
   if (e >= FAMILIES_E_MAX) return 'high-eccentricity';
   if (a < SECULAR_A_MIN_AU || a > SECULAR_A_MAX_AU) return 'outside-secular-range';
@@ -80,12 +80,13 @@ export function screenFamilies(cat: Catalogue, runProper: ProperRunner = SERIAL_
     };
     const out = newProperColumns(rows.length);
     runProper(epoch, { a: pickCol(cat.a), e: pickCol(cat.e), i: pickCol(cat.i), node: pickCol(cat.node), peri: pickCol(cat.peri) }, out);
-    rows.forEach((k, m) => {
+    for (let m = 0; m < rows.length; m++) {
+      const k = rows[m];
       proper.aAu[k] = out.aAu[m]; proper.e[k] = out.e[m]; proper.sinI[k] = out.sinI[m];
       proper.gArcsecPerYear[k] = out.gArcsecPerYear[m]; proper.sArcsecPerYear[k] = out.sArcsecPerYear[m];
       proper.reliability[k] = out.reliability[m];
       if (out.reliability[m] !== 0) reason[k] = 'proper-unreliable';
-    });
+    }
   }
   let m = 0;
   for (let k = 0; k < n; k++) if (reason[k] === '') m++; else notScreened[reason[k] as FamiliesSkipReason]++;
