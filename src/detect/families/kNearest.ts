@@ -13,6 +13,7 @@
  * On a 1.5 M-row main-belt dump, 7% of the bodies sat in cells of more than 256 (up to 5 287).
  */
 import { KNearestCellTree } from './kNearestCellTree.js';
+import { placePair } from './kNearestHeld.js';
 import { axisCell, type KNearestGrid } from './kNearestGrid.js';
 
 /** Distances (ascending) and input indices of each query's k nearest, row-major (query·k + m). */
@@ -209,15 +210,7 @@ function readRun(
       if (dd > d2[w] || (dd === d2[w] && order[p] > idx[w])) continue; // the index is read only for a point that may enter
       m = k - 1;
     } else held++;
-    const j = order[p];
-    // insertion: shift larger (distance, index) pairs up one place
-    while (m > 0 && (d2[base + m - 1] > dd || (d2[base + m - 1] === dd && idx[base + m - 1] > j))) {
-      d2[base + m] = d2[base + m - 1];
-      idx[base + m] = idx[base + m - 1];
-      m--;
-    }
-    d2[base + m] = dd;
-    idx[base + m] = j;
+    placePair(d2, idx, base, m, dd, order[p]);
   }
   return held;
 }

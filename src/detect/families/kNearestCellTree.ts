@@ -9,6 +9,8 @@
  * visited when its box's squared distance is ≤ the k-th held (not <), so a tie in it is seen;
  * the box distance is a lower bound in floating point too, as rounding is monotone (common practice).
  */
+import { boxDistanceSquared, nodeBox, selectAlongAxis } from './kdTreeSplit.js';
+import { placePair } from './kNearestHeld.js';
 
 /** Points a leaf holds at most (our choice: a few, as a grid cell). */
 const LEAF_POINTS = 8;
@@ -63,22 +65,12 @@ export class KNearestCellTree {
       if (dd > d2[w] || (dd === d2[w] && j > idx[w])) return;
       m = k - 1;
     } else this.held++;
-    while (m > 0 && (d2[base + m - 1] > dd || (d2[base + m - 1] === dd && idx[base + m - 1] > j))) {
-      d2[base + m] = d2[base + m - 1];
-      idx[base + m] = idx[base + m - 1];
-      m--;
-    }
-    d2[base + m] = dd;
-    idx[base + m] = j;
+    placePair(d2, idx, base, m, dd, j);
   }
 
   /** Squared distance from the query to the box of node lo … hi − 1 (0 inside it). */
   private boxDistance(lo: number, hi: number): number {
-    const b = 6 * ((lo + hi) >>> 1), box = this.box;
-    const gx = this.qx < box[b] ? box[b] - this.qx : this.qx > box[b + 3] ? this.qx - box[b + 3] : 0;
-    const gy = this.qy < box[b + 1] ? box[b + 1] - this.qy : this.qy > box[b + 4] ? this.qy - box[b + 4] : 0;
-    const gz = this.qz < box[b + 2] ? box[b + 2] - this.qz : this.qz > box[b + 5] ? this.qz - box[b + 5] : 0;
-    return gx * gx + gy * gy + gz * gz;
+    return boxDistanceSquared(this.box, 6 * ((lo + hi) >>> 1), this.qx, this.qy, this.qz);
   }
 
   /** Whether a node at this squared distance may hold a pair to keep. */
@@ -107,41 +99,10 @@ export class KNearestCellTree {
 
 /** Splits perm[lo … hi) at the median of its widest axis, recursively, storing each node's box. */
 function build(pts: Float64Array, perm: Int32Array, box: Float64Array, lo: number, hi: number): void {
-  const b = 6 * ((lo + hi) >>> 1);
-  let widest = 0, spread = -1;
-  for (let c = 0; c < 3; c++) {
-    let min = Infinity, max = -Infinity;
-    for (let t = lo; t < hi; t++) {
-      const v = pts[3 * perm[t] + c];
-      if (v < min) min = v;
-      if (v > max) max = v;
-    }
-    box[b + c] = min;
-    box[b + 3 + c] = max;
-    if (max - min > spread) { spread = max - min; widest = c; }
-  }
+  const widest = nodeBox(pts, perm, lo, hi, box, 6 * ((lo + hi) >>> 1));
   if (hi - lo <= LEAF_POINTS) return;
   const mid = (lo + hi) >>> 1;
-  select(pts, perm, lo, hi - 1, mid, widest);
+  selectAlongAxis(pts, perm, lo, hi - 1, mid, widest);
   build(pts, perm, box, lo, mid);
   build(pts, perm, box, mid + 1, hi);
-}
-
-/** Reorders perm[left … right] so that perm[k] holds the k-th smallest along `ax` (Hoare's selection). */
-function select(pts: Float64Array, p: Int32Array, left: number, right: number, k: number, ax: number): void {
-  while (right > left) {
-    const pivot = pts[3 * p[(left + right) >>> 1] + ax];
-    let i = left, j = right;
-    while (i <= j) {
-      while (pts[3 * p[i] + ax] < pivot) i++;
-      while (pts[3 * p[j] + ax] > pivot) j--;
-      if (i <= j) {
-        const t = p[i]; p[i] = p[j]; p[j] = t;
-        i++; j--;
-      }
-    }
-    if (k <= j) right = j;
-    else if (k >= i) left = i;
-    else return;
-  }
 }
