@@ -286,6 +286,7 @@ async function stages(file: string, seed: number, planted: readonly string[], po
   for (const count of [1, 2]) {
     const threads = await startFamiliesThreads(count);
     try {
+      const [, properS] = timed(() => screenFamilies(cat, threads.proper));
       const [c, clusterS] = timed(() => clusterFamilies(a, e, sinI, { ...FAMILIES_DEFAULTS, seed }, threads.levels));
       clustering = c;
       const [scores, scoreS] = timed(() => isolationScores(xyz, options, threads.search));
@@ -296,7 +297,7 @@ async function stages(file: string, seed: number, planted: readonly string[], po
       });
       times.push(clusterS + scoreS + nullS);
       hashes.push(hashArrays([Float64Array.from(c.regionCutoffMPerS), c.labels, scores.score, scores.neighbours.distance, scores.neighbours.index, tails]));
-      console.log(`  ${count} thread${count > 1 ? 's' : ' '}: clustering incl. QRL ${clusterS.toFixed(2)} s (cutoffs ${c.regionCutoffMPerS.map((v) => `${v}`).join(', ')} m/s, ${c.table.length} families); ` +
+      console.log(`  ${count} thread${count > 1 ? 's' : ' '}: screen and proper elements ${properS.toFixed(2)} s; clustering incl. QRL ${clusterS.toFixed(2)} s (cutoffs ${c.regionCutoffMPerS.map((v) => `${v}`).join(', ')} m/s, ${c.table.length} families); ` +
         `outlier scoring ${scoreS.toFixed(2)} s; null calibration (${plan.replicates} catalogues, ${fmt(plan.scoredPerReplicate)} scored in each) ${nullS.toFixed(2)} s; pieces taken by workers ${threads.workerClaims()}`);
     } finally {
       await threads.close();

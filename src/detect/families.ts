@@ -14,14 +14,16 @@
  *      lists the bodies with falseAlarmProb below the threshold, each with its q-value
  *      (familiesOutliers.ts); the detector's candidates in `scan` are those of them with
  *      q below the false-discovery level. Deterministic for the seed.
- * The QRL levels (stage 2) and the k-nearest searches (stage 3) run on the scan's threads
- * (DetectorContext.threads; families/familiesThreads.ts), with the same numbers on any count.
+ * The proper elements (stage 1), the QRL levels (stage 2) and the k-nearest searches and null
+ * catalogues (stage 3) run on the scan's threads (DetectorContext.threads;
+ * families/familiesThreads.ts), with the same numbers on any count; with more than one, stage 2
+ * runs on a worker while this thread scores the outliers (they meet at the candidates).
  */
 import { seededRandom } from '../core/random.js';
 import type { Catalogue } from '../clean/types.js';
 import { DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers, type ProperOutliers } from './families/outliers.js';
 import { nullPickClause } from './families/outlierCalibration.js';
-import { clusterFamilies, type FamiliesClustering } from './familiesCluster.js';
+import type { FamiliesClustering } from './familiesCluster.js';
 import { pick } from './families/qrlRegion.js';
 import { membershipLabels, nameFamilies, type FamilyName } from './familiesNaming.js';
 import type { FamilyMember } from '../io/familyMembership.js';
@@ -47,33 +49,40 @@ export interface FamiliesAnalysis {
 }
 
 /**
- * Everything the detector finds; `wayward families` writes it all. `work`: the threads the QRL
- * levels and the outliers' k-nearest searches run on (startFamiliesThreads); the same numbers
- * on any.
+ * Everything the detector finds; `wayward families` writes it all. `work`: the threads the proper
+ * elements, the clustering and the outliers' searches run on (startFamiliesThreads); the same
+ * numbers on any.
  */
 export function analyseFamilies(cat: Catalogue, opts: FamiliesOptions, work: FamiliesWork = SERIAL_FAMILIES_WORK): FamiliesAnalysis {
   if (!(opts.fapThreshold > 0 && opts.fapThreshold <= 1)) throw new RangeError(`analyseFamilies: fapThreshold must be in (0, 1], got ${opts.fapThreshold}`);
   if (!(opts.fdrLevel > 0 && opts.fdrLevel <= 1)) throw new RangeError(`analyseFamilies: fdrLevel must be in (0, 1], got ${opts.fdrLevel}`);
   if (!Number.isInteger(opts.minMembers) || opts.minMembers < 2) throw new RangeError(`analyseFamilies: minMembers must be an integer ≥ 2, got ${opts.minMembers}`);
   if (opts.cutoffMPerS !== null && !(opts.cutoffMPerS > 0)) throw new RangeError(`analyseFamilies: cutoff must be positive m/s, got ${opts.cutoffMPerS}`);
-  const screen = screenFamilies(cat);
+  const screen = screenFamilies(cat, work.proper);
   const pickCol = (col: Float64Array) => pick(col, screen.screened);
   const a = pickCol(screen.proper.aAu), e = pickCol(screen.proper.e), sinI = pickCol(screen.proper.sinI);
-  const clustering = clusterFamilies(a, e, sinI, opts, work.levels);
-  const user = opts.membership ? membershipLabels(cat, opts.membership) : null;
-  const names = nameFamilies(clustering.table, clustering.familyRegion, screen.screened, opts.published, user ? user.label : null);
+  // The clustering and the outliers' scores are independent until the candidates: with threads,
+  // one clusters while the others score (familiesThreads.ts), the same numbers either way.
+  const clustered = work.clusterAside(a, e, sinI, opts);
   const k = DEFAULT_PROPER_OUTLIER_OPTIONS.k;
   const occupying = occupyingUnreliable(screen, a, e, sinI);
-  const space = withOccupying(screen, a, e, sinI, clustering.labels, occupying);
+  const space = withOccupying(screen, a, e, sinI, occupying);
   const outliers = a.length > k ? properOutliers(space.a, space.e, space.sinI, seededRandom(opts.seed), DEFAULT_PROPER_OUTLIER_OPTIONS, space.scored, work.search, work.nullReplicates) : null;
-  const tested = Uint8Array.from(space.labels, (l, j) => (j < a.length && l < 0 ? 1 : 0));
+  const clustering = clustered();
+  const user = opts.membership ? membershipLabels(cat, opts.membership) : null;
+  const names = nameFamilies(clustering.table, clustering.familyRegion, screen.screened, opts.published, user ? user.label : null);
+  const labels = new Int32Array(space.a.length).fill(-1); // the bodies set apart that occupy space: no family
+  labels.set(clustering.labels);
+  const tested = new Uint8Array(labels.length); // a plain loop: Uint8Array.from with a map function took a second on a million rows
+  let testedCount = 0;
+  for (let j = 0; j < a.length; j++) if (labels[j] < 0) { tested[j] = 1; testedCount++; }
   const qValue = outliers ? benjaminiHochbergQValues(outliers.falseAlarmProb, tested) : null;
   const candidates = outliers && qValue
-    ? familyOutlierCandidates(cat, screen.screened, a, e, sinI, space.labels, clustering.table, names, outliers, opts.fapThreshold, { qValue, level: opts.fdrLevel })
+    ? familyOutlierCandidates(cat, screen.screened, a, e, sinI, labels, clustering.table, names, outliers, opts.fapThreshold, { qValue, level: opts.fdrLevel })
     : [];
   const fdrCandidates = candidates.filter((c) => (c.details.q_value as number) < opts.fdrLevel);
   return {
-    screen, a, e, sinI, clustering, names, outliers, occupying, tested: tested.reduce((s, v) => s + v, 0), qValue,
+    screen, a, e, sinI, clustering, names, outliers, occupying, tested: testedCount, qValue,
     candidates, fdrCandidates, unmatched: user ? user.unmatched : [],
   };
 }
@@ -108,19 +117,17 @@ function rangeOf(c: Float64Array): [number, number] {
   return [lo, hi];
 }
 
-/** Proper elements of the screened bodies then the occupying ones, which are marked not scored and labelled −1 (no family). */
-function withOccupying(screen: FamiliesScreen, a: Float64Array, e: Float64Array, sinI: Float64Array, labels: Int32Array, occupying: Int32Array) {
+/** Proper elements of the screened bodies then the occupying ones, which are marked not scored. */
+function withOccupying(screen: FamiliesScreen, a: Float64Array, e: Float64Array, sinI: Float64Array, occupying: Int32Array) {
   const s = a.length, n = s + occupying.length;
   const join = (screened: Float64Array, col: Float64Array) => {
     const out = new Float64Array(n);
     out.set(screened);
-    occupying.forEach((k, m) => { out[s + m] = col[k]; });
+    for (let m = 0; m < occupying.length; m++) out[s + m] = col[occupying[m]];
     return out;
   };
-  const all = new Int32Array(n).fill(-1);
-  all.set(labels);
   const scored = occupying.length > 0 ? new Uint8Array(n).fill(1, 0, s) : null; // null: no selection to see
-  return { a: join(a, screen.proper.aAu), e: join(e, screen.proper.e), sinI: join(sinI, screen.proper.sinI), labels: all, scored };
+  return { a: join(a, screen.proper.aAu), e: join(e, screen.proper.e), sinI: join(sinI, screen.proper.sinI), scored };
 }
 
 const K = DEFAULT_PROPER_OUTLIER_OPTIONS.k;

@@ -20,13 +20,16 @@ export interface FamiliesClustering {
   cutoffFromQrl: boolean;
 }
 
+/** The options the clustering reads. */
+export type ClusteringOptions = Pick<FamiliesOptions, 'cutoffMPerS' | 'minMembers' | 'seed'>;
+
 /**
  * Clusters the screened bodies' proper elements (a, e, sin i, one entry per screened body).
  * The QRL backgrounds of all three regions are drawn first (each region from its own seed, as
  * quasiRandomLevel draws them) and their levels found together by `levels`, serial or on
  * worker threads (familiesThreads.ts): the same cutoffs either way.
  */
-export function clusterFamilies(a: Float64Array, e: Float64Array, sinI: Float64Array, opts: FamiliesOptions, levels: LevelRunner = SERIAL_LEVELS): FamiliesClustering {
+export function clusterFamilies(a: Float64Array, e: Float64Array, sinI: Float64Array, opts: ClusteringOptions, levels: LevelRunner = SERIAL_LEVELS): FamiliesClustering {
   const cut: [number, number, number] = [NaN, NaN, NaN];
   const spaces: VelocitySpace[] = [];
   const spaceRegion: number[] = [];

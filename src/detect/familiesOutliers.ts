@@ -7,12 +7,12 @@
  * screened body.
  */
 import { qualityNames, type Catalogue } from '../clean/types.js';
-import { memberUpperTailFraction } from './empiricalTail.js';
 import type { FamilyRow } from './families/familyTable.js';
 import { orbitalSpeedMPerS } from './families/metricVelocity.js';
 import { FamilyMemberSearch } from './families/nearestMember.js';
 import type { ProperOutliers } from './families/outliers.js';
 import type { FamilyName } from './familiesNaming.js';
+import { countsAtLeastUnsorted } from './tailCountsAtLeast.js';
 import { TAIL_FROM_FIT, TAIL_FROM_FRACTION_BEYOND_FIT } from './tailExtrapolation.js';
 import type { Candidate } from './types.js';
 
@@ -52,11 +52,14 @@ export function familyOutlierCandidates(
   labels: Int32Array, table: readonly FamilyRow[], names: readonly FamilyName[], o: ProperOutliers, threshold: number,
   fdr: { qValue: Float64Array; level: number },
 ): Candidate[] {
-  const sorted = Float64Array.from(o.score.subarray(0, screened.length)).sort();
+  const listed: number[] = [];
+  for (let j = 0; j < screened.length; j++) if (labels[j] < 0 && o.falseAlarmProb[j] < threshold) listed.push(j);
+  // the screened bodies at least as isolated as each listed one (memberUpperTailFraction's count, without sorting every score)
+  const atLeast = countsAtLeastUnsorted(o.score.subarray(0, screened.length), listed.map((j) => o.score[j]));
   const out: Candidate[] = [];
   const members = new FamilyMemberSearch(o.scaledXyz, labels);
-  for (let j = 0; j < screened.length; j++) {
-    if (labels[j] >= 0 || !(o.falseAlarmProb[j] < threshold)) continue;
+  for (let t = 0; t < listed.length; t++) {
+    const j = listed[t];
     const k = screened[j];
     const near = nearestFamily(j, o, labels, members, a);
     const fam = near.family >= 0 ? names[near.family] : undefined;
@@ -71,7 +74,7 @@ export function familyOutlierCandidates(
     out.push({
       designation: cat.designation[k], index: k, detector: 'families', class: 'family-outlier', boundary: false,
       score: fixed(o.score[j], 4),
-      tailFraction: memberUpperTailFraction(sorted, o.score[j]), tailPopulation: screened.length,
+      tailFraction: atLeast[t] / screened.length, tailPopulation: screened.length,
       falseAlarmProb: o.falseAlarmProb[j],
       flags: extrapolated ? [...qualityNames(cat.quality[k]), FAP_EXTRAPOLATED_FLAG] : qualityNames(cat.quality[k]),
       why: `Outside every family and isolated in proper elements (a ${a[j].toFixed(4)} au, e ${e[j].toFixed(4)}, sin i ${sinI[j].toFixed(4)}): ` +

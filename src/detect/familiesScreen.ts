@@ -7,7 +7,7 @@
  * reasons, never clustered nor used in the outliers' calibration.
  */
 import { planetarySecularModel } from '../core/secular/planetarySecularModel.js';
-import { newProperColumns, properElementsColumns, type ProperColumns } from '../core/secular/properElementsColumns.js';
+import { newProperColumns, properElementsColumns, type OsculatingColumns, type ProperColumns } from '../core/secular/properElementsColumns.js';
 import { SECULAR_A_MAX_AU, SECULAR_A_MIN_AU } from '../core/secular/reliability.js';
 import { KIND_COMET, type Catalogue } from '../clean/types.js';
 
@@ -28,7 +28,7 @@ export type FamiliesSkipReason = keyof typeof FAMILIES_NOT_SCREENED;
 export function familiesSkipReason(cat: Catalogue, k: number): Exclude<FamiliesSkipReason, 'proper-unreliable'> | '' {
   if (cat.kind[k] === KIND_COMET) return 'comet-catalogue';
   const a = cat.a[k], e = cat.e[k];
-  if ([a, e, cat.i[k], cat.node[k], cat.peri[k], cat.epochJdTT[k]].some((x) => Number.isNaN(x))) return 'elements-missing';
+  if (Number.isNaN(a) || Number.isNaN(e) || Number.isNaN(cat.i[k]) || Number.isNaN(cat.node[k]) || Number.isNaN(cat.peri[k]) || Number.isNaN(cat.epochJdTT[k])) return 'elements-missing';
   if (e >= 1 || a <= 0) return 'unbound';
   if (e >= FAMILIES_E_MAX) return 'high-eccentricity';
   if (a < SECULAR_A_MIN_AU || a > SECULAR_A_MAX_AU) return 'outside-secular-range';
@@ -44,10 +44,20 @@ export interface FamiliesScreen {
 }
 
 /**
- * Screens the catalogue and computes proper elements with one planetary model per distinct
- * epoch (the osculation epoch JD TT taken as TDB: they differ by under 2 ms, common practice).
+ * Proper elements of the rows of one epoch into `out`, with the planetary model of that epoch:
+ * here (SERIAL_PROPER), or shared with worker threads (families/familiesThreads.ts), the same
+ * numbers (each row is computed alone from the model).
  */
-export function screenFamilies(cat: Catalogue): FamiliesScreen {
+export type ProperRunner = (epochJdTT: number, cols: OsculatingColumns, out: ProperColumns) => void;
+
+export const SERIAL_PROPER: ProperRunner = (epochJdTT, cols, out) => properElementsColumns(planetarySecularModel(epochJdTT), cols, out);
+
+/**
+ * Screens the catalogue and computes proper elements with one planetary model per distinct
+ * epoch (the osculation epoch JD TT taken as TDB: they differ by under 2 ms, common practice);
+ * `runProper`: on which threads.
+ */
+export function screenFamilies(cat: Catalogue, runProper: ProperRunner = SERIAL_PROPER): FamiliesScreen {
   const n = cat.size;
   const reason: (FamiliesSkipReason | '')[] = new Array(n);
   const notScreened = Object.fromEntries(Object.keys(FAMILIES_NOT_SCREENED).map((id) => [id, 0])) as Record<FamiliesSkipReason, number>;
@@ -63,20 +73,20 @@ export function screenFamilies(cat: Catalogue): FamiliesScreen {
   const epochs = [...byEpoch.keys()].sort((x, y) => x - y);
   for (const epoch of epochs) {
     const rows = byEpoch.get(epoch)!;
-    const model = planetarySecularModel(epoch);
     const pickCol = (col: Float64Array) => {
       const picked = new Float64Array(rows.length); // a plain loop: Float64Array.from with a map function took 1 s on a million rows
       for (let m = 0; m < rows.length; m++) picked[m] = col[rows[m]];
       return picked;
     };
     const out = newProperColumns(rows.length);
-    properElementsColumns(model, { a: pickCol(cat.a), e: pickCol(cat.e), i: pickCol(cat.i), node: pickCol(cat.node), peri: pickCol(cat.peri) }, out);
-    rows.forEach((k, m) => {
+    runProper(epoch, { a: pickCol(cat.a), e: pickCol(cat.e), i: pickCol(cat.i), node: pickCol(cat.node), peri: pickCol(cat.peri) }, out);
+    for (let m = 0; m < rows.length; m++) {
+      const k = rows[m];
       proper.aAu[k] = out.aAu[m]; proper.e[k] = out.e[m]; proper.sinI[k] = out.sinI[m];
       proper.gArcsecPerYear[k] = out.gArcsecPerYear[m]; proper.sArcsecPerYear[k] = out.sArcsecPerYear[m];
       proper.reliability[k] = out.reliability[m];
       if (out.reliability[m] !== 0) reason[k] = 'proper-unreliable';
-    });
+    }
   }
   let m = 0;
   for (let k = 0; k < n; k++) if (reason[k] === '') m++; else notScreened[reason[k] as FamiliesSkipReason]++;

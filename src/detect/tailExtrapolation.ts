@@ -25,6 +25,7 @@
  * null sample supports it but the fitted tail shape. Pure functions of data in, data out.
  */
 import { countAtLeast, upperTailFraction } from './empiricalTail.js';
+import { countsAtLeast } from './tailCountsAtLeast.js';
 import { gpdFitPValue } from './tailGoodnessOfFit.js';
 import { fitGpdPwmSorted, gpdSurvival, type GpdParameters } from './tailGpd.js';
 
@@ -112,14 +113,23 @@ export function upperTailProbability(sortedAsc: Float64Array, fit: UpperTailFit 
   return { p: upperTailFraction(sortedAsc, x), from: TAIL_FROM_FRACTION_BEYOND_FIT };
 }
 
-/** upperTailProbability of each value, into new columns. */
+/**
+ * upperTailProbability of each value, into new columns: the same numbers, with the counts of the
+ * sample at least as high found once per value and through a guide table (tailCountsAtLeast.ts).
+ */
 export function upperTailProbabilities(sortedAsc: Float64Array, fit: UpperTailFit | null, xs: ArrayLike<number>): { p: Float64Array; from: Uint8Array } {
+  if (fit !== null && fit.sampleSize !== sortedAsc.length) {
+    throw new RangeError(`upperTailProbabilities: the fit is of a sample of ${fit.sampleSize}, not ${sortedAsc.length}`);
+  }
+  const n = sortedAsc.length;
+  const counts = countsAtLeast(sortedAsc, xs);
   const p = new Float64Array(xs.length);
-  const from = new Uint8Array(xs.length);
+  const from = new Uint8Array(xs.length); // TAIL_FROM_FRACTION (0) unless set below
   for (let j = 0; j < xs.length; j++) {
-    const r = upperTailProbability(sortedAsc, fit, xs[j]);
-    p[j] = r.p;
-    from[j] = r.from;
+    const fraction = (1 + counts[j]) / (n + 1); // upperTailFraction
+    if (fit === null || counts[j] >= TAIL_FIT_BELOW_COUNT) { p[j] = fraction; continue; }
+    const extrapolated = (fit.exceedances / fit.sampleSize) * gpdSurvival(fit.extrapolateWith, xs[j] - fit.thresholdT);
+    if (extrapolated > 0) { p[j] = extrapolated; from[j] = TAIL_FROM_FIT; } else { p[j] = fraction; from[j] = TAIL_FROM_FRACTION_BEYOND_FIT; }
   }
   return { p, from };
 }

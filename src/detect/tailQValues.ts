@@ -11,6 +11,7 @@
  * A q-value is that adjusted level — the smallest Q at which a test would be listed — not the
  * probability that a listed body is real.
  */
+import { ascendingOrderOfNonNegative } from './tailAscendingOrder.js';
 
 /**
  * q-values of p (length m, every entry in [0, 1]); with `tested`, only the marked entries form
@@ -18,15 +19,17 @@
  */
 export function benjaminiHochbergQValues(p: ArrayLike<number>, tested: Uint8Array | null = null): Float64Array {
   if (tested !== null && tested.length !== p.length) throw new RangeError(`benjaminiHochbergQValues: ${tested.length} marks for ${p.length} values`);
-  const idx: number[] = [];
+  let m = 0;
   for (let j = 0; j < p.length; j++) {
     if (tested !== null && tested[j] === 0) continue;
     if (!(p[j] >= 0 && p[j] <= 1)) throw new RangeError(`benjaminiHochbergQValues: entry ${j} is ${p[j]}, not a tail probability in [0, 1]`);
-    idx.push(j);
+    m++;
   }
-  idx.sort((x, y) => p[x] - p[y] || x - y);
+  const positions = new Uint32Array(m);
+  m = 0;
+  for (let j = 0; j < p.length; j++) if (tested === null || tested[j] !== 0) positions[m++] = j;
+  const idx = ascendingOrderOfNonNegative(p, positions); // by p, ties by position
   const q = new Float64Array(p.length).fill(NaN);
-  const m = idx.length;
   let running = 1;
   for (let r = m - 1; r >= 0; r--) {
     const v = (m * p[idx[r]]) / (r + 1);

@@ -13,6 +13,7 @@
  * box distance (per-axis gaps, squared and summed in the same order) is a lower bound of every
  * point's squared distance in floating point too, as rounding is monotone (common practice).
  */
+import { boxDistanceSquared, nodeBox, selectAlongAxis } from './kdTreeSplit.js';
 
 /** Points a leaf holds at most (our choice: a few, as a grid cell). */
 const LEAF_POINTS = 8;
@@ -55,7 +56,7 @@ export class KdTreeNearest {
     const ax = this.fillBox(lo, hi);
     if (hi - lo <= LEAF_POINTS) return;
     const mid = (lo + hi) >>> 1;
-    this.select(lo, hi - 1, mid, ax);
+    selectAlongAxis(this.xyz, this.perm, lo, hi - 1, mid, ax);
     this.axis[mid] = ax;
     this.build(lo, mid);
     this.build(mid + 1, hi);
@@ -63,40 +64,7 @@ export class KdTreeNearest {
 
   /** Stores the node's bounding box; returns the axis along which its points spread most. */
   private fillBox(lo: number, hi: number): number {
-    const b = 6 * ((lo + hi) >>> 1);
-    let widest = 0, spread = -1;
-    for (let c = 0; c < 3; c++) {
-      let min = Infinity, max = -Infinity;
-      for (let t = lo; t < hi; t++) {
-        const v = this.xyz[3 * this.perm[t] + c];
-        if (v < min) min = v;
-        if (v > max) max = v;
-      }
-      this.box[b + c] = min;
-      this.box[b + 3 + c] = max;
-      if (max - min > spread) { spread = max - min; widest = c; }
-    }
-    return widest;
-  }
-
-  /** Reorders perm[left … right] so that perm[k] holds the k-th smallest along `ax`, smaller or equal before it, larger or equal after (Hoare's selection). */
-  private select(left: number, right: number, k: number, ax: number): void {
-    const p = this.perm, xyz = this.xyz;
-    while (right > left) {
-      const pivot = xyz[3 * p[(left + right) >>> 1] + ax];
-      let i = left, j = right;
-      while (i <= j) {
-        while (xyz[3 * p[i] + ax] < pivot) i++;
-        while (xyz[3 * p[j] + ax] > pivot) j--;
-        if (i <= j) {
-          const t = p[i]; p[i] = p[j]; p[j] = t;
-          i++; j--;
-        }
-      }
-      if (k <= j) right = j;
-      else if (k >= i) left = i;
-      else return;
-    }
+    return nodeBox(this.xyz, this.perm, lo, hi, this.box, 6 * ((lo + hi) >>> 1));
   }
 
   private consider(j: number): void {
@@ -108,11 +76,7 @@ export class KdTreeNearest {
 
   /** Squared distance from the query to the box of node perm[lo … hi) (0 inside it). */
   private boxDistance(lo: number, hi: number): number {
-    const b = 6 * ((lo + hi) >>> 1), box = this.box;
-    const gx = this.qx < box[b] ? box[b] - this.qx : this.qx > box[b + 3] ? this.qx - box[b + 3] : 0;
-    const gy = this.qy < box[b + 1] ? box[b + 1] - this.qy : this.qy > box[b + 4] ? this.qy - box[b + 4] : 0;
-    const gz = this.qz < box[b + 2] ? box[b + 2] - this.qz : this.qz > box[b + 5] ? this.qz - box[b + 5] : 0;
-    return gx * gx + gy * gy + gz * gz;
+    return boxDistanceSquared(this.box, 6 * ((lo + hi) >>> 1), this.qx, this.qy, this.qz);
   }
 
   private search(lo: number, hi: number): void {

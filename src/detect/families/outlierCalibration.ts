@@ -20,7 +20,7 @@
  * to the pool's upper tail (tailExtrapolation.ts), fitted once here: `nullFalseAlarmProbs`.
  */
 import type { Random } from '../../core/random.js';
-import { upperTailFraction } from '../empiricalTail.js';
+import { countsAtLeast } from '../tailCountsAtLeast.js';
 import { fitUpperTail, upperTailProbabilities, type UpperTailFitResult } from '../tailExtrapolation.js';
 import type { OutlierBackground } from './outlierBackground.js';
 import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
@@ -114,8 +114,9 @@ export function nullFalseAlarmProbs(scores: Float64Array, cal: OutlierCalibratio
 
 /** Null tail fraction of each score: (1 + #{null ≥ s}) / (n + 1). */
 export function nullTailFractions(scores: Float64Array, cal: OutlierCalibration): Float64Array {
+  const counts = countsAtLeast(cal.nullScoresSorted, scores); // upperTailFraction's counts, through a guide table
   const out = new Float64Array(scores.length);
-  for (let j = 0; j < scores.length; j++) out[j] = upperTailFraction(cal.nullScoresSorted, scores[j]);
+  for (let j = 0; j < scores.length; j++) out[j] = (1 + counts[j]) / (cal.nullScoresSorted.length + 1);
   return out;
 }
 

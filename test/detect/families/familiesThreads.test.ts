@@ -16,6 +16,10 @@ import { startFamiliesThreads, type FamiliesThreads } from '../../../src/detect/
 import { toVelocitySpace } from '../../../src/detect/families/metricVelocity.js';
 import { qrlBackgroundSpaces, SERIAL_LEVELS } from '../../../src/detect/families/qrlCutoff.js';
 import { DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../../../src/detect/families/outliers.js';
+import { clusterFamilies } from '../../../src/detect/familiesCluster.js';
+import { SERIAL_PROPER } from '../../../src/detect/familiesScreen.js';
+import { newProperColumns } from '../../../src/core/secular/properElementsColumns.js';
+import { PROPER_SHARED_MIN_ROWS } from '../../../src/detect/families/familiesThreads.js';
 
 /** Points on a lattice of 1/4 (exact ties, duplicates) and free ones, in a 3 × 2 × 2 box. */
 function points(n: number, seed: number): Float64Array {
@@ -114,6 +118,56 @@ describe('the families stage on worker threads', () => {
     expect(Array.from(workersOnly.levels(spaces, 10, 0.5))).toEqual(Array.from(serial));
     expect(workersOnly.workerClaims() - claimed).toBe(spaces.length);
     expect(Array.from(shared.levels(spaces, 10, 0.5))).toEqual(Array.from(serial));
+  });
+
+  it('cluster on a worker while the calling thread searches: the serial clustering, and the search done meanwhile (synthetic belt with two tight clumps)', () => {
+    const { a, e, s } = uniformBelt(5, 4000, 2.3, 0.9);
+    const r = seededRandom(6);
+    for (let j = 0; j < 300; j++) { // two clumps of 150 within 0.002 in each element (invented)
+      const c = j < 150 ? 0 : 1;
+      a[j] = 2.45 + 0.4 * c + 0.002 * r(); e[j] = 0.1 + 0.002 * r(); s[j] = 0.05 + 0.05 * c + 0.002 * r();
+    }
+    const opts = { cutoffMPerS: null, minMembers: 20, seed: 3 };
+    const serial = clusterFamilies(a, e, s, opts);
+    expect(serial.table.length).toBeGreaterThanOrEqual(2);
+    const xyz = points(5000, 10);
+    const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, 4, 4 * 5000 + 64));
+    const rows = kNearestAll(grid, 8);
+    for (const threads of [workersOnly, shared]) {
+      const claimed = threads.workerClaims();
+      const later = threads.clusterAside(a, e, s, opts);
+      const meanwhile = threads.search.all(grid, 8); // with 2 threads: the calling thread's own, while the worker clusters
+      expect(Buffer.from(meanwhile.distance.buffer).equals(Buffer.from(rows.distance.buffer))).toBe(true);
+      const got = later();
+      expect(threads.workerClaims() - claimed).toBeGreaterThanOrEqual(1); // the clustering, on a worker
+      expect(Array.from(got.labels)).toEqual(Array.from(serial.labels));
+      expect(got.regionCutoffMPerS).toEqual(serial.regionCutoffMPerS);
+      expect(Array.from(got.familyRegion)).toEqual(Array.from(serial.familyRegion));
+      expect(got.table.map((f) => [f.id, Array.from(f.members), f.cutoffMPerS, f.aAu.median])).toEqual(serial.table.map((f) => [f.id, Array.from(f.members), f.cutoffMPerS, f.aAu.median]));
+    }
+  });
+
+  it('give the proper elements of one thread, rows shared in blocks (synthetic osculating main belt, some rows not computable)', () => {
+    const n = PROPER_SHARED_MIN_ROWS + 2345;
+    const r = seededRandom(12);
+    const col = (f: () => number) => Float64Array.from({ length: n }, f);
+    const cols = {
+      a: col(() => 1.5 + 2.2 * r()), e: col(() => (r() < 0.01 ? 1.2 : 0.35 * r())), i: col(() => 0.5 * r()),
+      node: col(() => 2 * Math.PI * r()), peri: col(() => 2 * Math.PI * r()),
+    };
+    const epochJdTT = 2461000.5;
+    const serial = newProperColumns(n);
+    SERIAL_PROPER(epochJdTT, cols, serial);
+    for (const threads of [workersOnly, shared]) {
+      const claimed = threads.workerClaims();
+      const out = newProperColumns(n);
+      threads.proper(epochJdTT, cols, out);
+      if (threads === workersOnly) expect(threads.workerClaims() - claimed).toBeGreaterThanOrEqual(2);
+      for (const key of ['aAu', 'e', 'sinI', 'gArcsecPerYear', 'sArcsecPerYear', 'reliability'] as const) {
+        expect(Buffer.from(out[key].buffer).equals(Buffer.from(serial[key].buffer)), key).toBe(true);
+      }
+    }
+    expect(serial.reliability.some((c) => c !== 0) && serial.reliability.some((c) => c === 0)).toBe(true);
   });
 
   it('refuse a k the points cannot supply and a bad thread count (caller misuse)', async () => {

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { buildKNearestGrid } from '../../../src/detect/families/kNearestGrid.js';
 import { cellSizeForOccupancy } from '../../../src/detect/families/kNearestCellSize.js';
-import { kNearestAll, kNearestOf, kNearestOfFirst } from '../../../src/detect/families/kNearest.js';
+import { CROWDED_CELL_POINTS, kNearestAll, kNearestOf, kNearestOfFirst } from '../../../src/detect/families/kNearest.js';
+import { KNearestCellTree } from '../../../src/detect/families/kNearestCellTree.js';
 import { orbitalSpeedMPerS } from '../../../src/detect/families/metricVelocity.js';
 import { scaledProperCoordinates } from '../../../src/detect/families/outlierMetric.js';
 
@@ -22,7 +23,57 @@ function bruteForce(points: Float64Array, qx: number, qy: number, qz: number, ex
 const coordinate = fc.oneof(fc.integer({ min: 0, max: 6 }).map((v) => v / 4), fc.double({ min: -1, max: 3, noNaN: true }));
 const pointSet = fc.array(fc.tuple(coordinate, coordinate, coordinate), { minLength: 2, maxLength: 120 });
 
+// Crowded: most points in a tight clump (a family core), many of them on a lattice (ties,
+// duplicates), the rest spread; cells sized for many points so that cells hold more than
+// CROWDED_CELL_POINTS and are searched through a k-d tree of their points.
+const clumped = fc.oneof(fc.integer({ min: 0, max: 3 }).map((v) => 1 + v / 64), fc.double({ min: 1, max: 1.05, noNaN: true }));
+const crowdedSet = fc.tuple(
+  fc.array(fc.tuple(clumped, clumped, clumped), { minLength: CROWDED_CELL_POINTS + 2, maxLength: 260 }),
+  fc.array(fc.tuple(coordinate, coordinate, coordinate), { maxLength: 60 }),
+).map(([core, rest]) => [...core, ...rest]);
+
 describe('k nearest neighbours through a grid', () => {
+  it('in crowded cells (k-d tree of the points of the cell) equal brute force exactly, ties by lower index, all points and the first m (property-based)', () => {
+    fc.assert(
+      fc.property(crowdedSet, fc.integer({ min: 1, max: 12 }), fc.integer({ min: 70, max: 400 }), fc.nat(), (pts, k, perCell, mPick) => {
+        const xyz = Float64Array.from(pts.flat());
+        const n = pts.length;
+        const grid = buildKNearestGrid(xyz, cellSizeForOccupancy(xyz, perCell, 4 * n + 64));
+        let crowded = false;
+        for (let c = 0; c + 1 < grid.cellStart.length; c++) if (grid.cellStart[c + 1] - grid.cellStart[c] > CROWDED_CELL_POINTS) crowded = true;
+        expect(crowded).toBe(true);
+        const m = mPick % (n + 1);
+        const all = kNearestAll(grid, k), first = kNearestOfFirst(grid, xyz, m, k);
+        for (let j = 0; j < n; j++) {
+          const want = bruteForce(xyz, xyz[3 * j], xyz[3 * j + 1], xyz[3 * j + 2], j, k);
+          for (let t = 0; t < k; t++) {
+            if (all.distance[j * k + t] !== want[t][0] || all.index[j * k + t] !== want[t][1]) return false;
+            if (j < m && (first.distance[j * k + t] !== want[t][0] || first.index[j * k + t] !== want[t][1])) return false;
+          }
+        }
+        return true;
+      }),
+      { numRuns: 150 },
+    );
+  });
+
+  it('the k-d tree of a crowded cell holds the k smallest (squared distance, index) pairs of its points, the query itself left out (brute force)', () => {
+    fc.assert(
+      fc.property(crowdedSet, fc.integer({ min: 1, max: 12 }), fc.nat(), (pts, k, pick) => {
+        const xyz = Float64Array.from(pts.flat());
+        const n = pts.length;
+        const order = Uint32Array.from({ length: n }, (_, j) => j);
+        const tree = new KNearestCellTree(xyz, order, 0, n);
+        const q = pick % n;
+        const d2 = new Float64Array(k), idx = new Int32Array(k);
+        const held = tree.fill(xyz[3 * q], xyz[3 * q + 1], xyz[3 * q + 2], q, k, d2, idx, 0);
+        const want = bruteForce(xyz, xyz[3 * q], xyz[3 * q + 1], xyz[3 * q + 2], q, k);
+        return held === Math.min(k, n - 1) && want.every(([d, j], t) => Math.sqrt(d2[t]) === d && idx[t] === j);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it('equal brute force exactly, ties by lower index, any cell size (property-based; common practice: brute force is the definition)', () => {
     fc.assert(
       fc.property(pointSet, fc.integer({ min: 1, max: 12 }), fc.double({ min: 0.5, max: 20, noNaN: true }), (pts, kWanted, perCell) => {
