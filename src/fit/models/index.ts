@@ -1,0 +1,2 @@
+export * from './incompleteGamma.js';
+export * from './tailFunctions.js';
