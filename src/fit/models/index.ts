@@ -1,2 +1,3 @@
+export * from './nongravModels.js';
 export * from './incompleteGamma.js';
 export * from './tailFunctions.js';
