@@ -1,3 +1,5 @@
 export * from './nongravModels.js';
 export * from './incompleteGamma.js';
 export * from './tailFunctions.js';
+export * from './informationCriteria.js';
+export * from './modelComparison.js';
