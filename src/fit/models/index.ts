@@ -3,3 +3,6 @@ export * from './incompleteGamma.js';
 export * from './tailFunctions.js';
 export * from './informationCriteria.js';
 export * from './modelComparison.js';
+export * from './stationMeans.js';
+export * from './runsTest.js';
+export * from './leaveOneStationOut.js';
