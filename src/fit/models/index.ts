@@ -6,3 +6,8 @@ export * from './modelComparison.js';
 export * from './stationMeans.js';
 export * from './runsTest.js';
 export * from './leaveOneStationOut.js';
+export * from './transverseDrift.js';
+export * from './diameterFromH.js';
+export * from './bulkDensity.js';
+export * from './yarkovskyPlausibility.js';
+export * from './radiationPressurePlausibility.js';
