@@ -1,8 +1,11 @@
 /**
  * Writes the demo catalogue: `npx tsx scripts/make-demo.ts [--seed N] [--out DIR]
- * [--bodies N] [--comets N] [--population-only] [--no-integrate]`. Deterministic: a seed gives the same bytes.
+ * [--bodies N] [--comets N] [--population-only] [--no-integrate] [--check-body-only]`. Also writes the demo body for
+ * `check` into OUT/check/ (scripts/demo/checkBody.ts) unless --population-only. Deterministic: a seed gives the same bytes.
  */
 import { Command, InvalidArgumentError } from 'commander';
+import { join } from 'node:path';
+import { writeCheckBodyDemo } from './demo/checkBody.js';
 import { generateDemo } from './demo/generate.js';
 import { DEFAULT_BODIES, DEFAULT_COMETS, DEFAULT_SEED } from './demo/scenario.js';
 
@@ -19,10 +22,16 @@ const program = new Command('make-demo')
   .option('--bodies <n>', 'natural rows in the asteroid file', integer, DEFAULT_BODIES)
   .option('--comets <n>', 'natural comets', integer, DEFAULT_COMETS)
   .option('--population-only', 'asteroid file only, nothing planted', false)
+  .option('--check-body-only', 'write only the demo body for check (data/demo/check/)', false)
   .option('--no-integrate', 'do not judge the co-orbital plants by N-body (fast; truth.csv then makes no claim on their state)')
   .parse();
 
-const o = program.opts<{ seed: number; out: string; bodies: number; comets: number; populationOnly: boolean; integrate: boolean }>();
+const o = program.opts<{ seed: number; out: string; bodies: number; comets: number; populationOnly: boolean; integrate: boolean; checkBodyOnly: boolean }>();
+if (!o.populationOnly) {
+  const check = writeCheckBodyDemo(join(o.out, 'check'), o.seed);
+  for (const f of check.files) console.log(`wrote ${f}`);
+  if (o.checkBodyOnly) process.exit(0);
+}
 const result = await generateDemo({
   seed: o.seed, outDir: o.out, bodies: o.bodies, comets: o.comets, populationOnly: o.populationOnly, integrate: o.integrate,
 });

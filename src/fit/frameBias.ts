@@ -8,10 +8,25 @@
  * About 23 mas in all; applying it moves a direction by up to that (17 km at 1 au).
  * Tested against ERFA bp06's bias matrix (test/fit/frameBias.test.ts).
  *
- * The core's ecliptic is the J2000 mean equatorial frame rotated by the IAU 2006 obliquity
- * ε0 (src/core/frames/frames.ts), so
- *   r_ICRF = Bᵀ · R1(−ε0) · r_ecliptic   (the ecliptic of J2000 as IAU 2006 defines it;
- * ERFA ecm06 at J2000 is R1(ε0) · B, the same matrix transposed).
+ * The IAU 2006 ecliptic of J2000 is the J2000 mean equatorial frame rotated by the obliquity
+ * ε0, so  r_ICRF = Bᵀ · R1(−ε0) · r_ecl2006  (ERFA ecm06 at J2000 is R1(ε0) · B, the same
+ * matrix transposed): IAU2006_ECLIPTIC_TO_ICRF_MATRIX.
+ *
+ * The core's planets, and so the bodies integrated among them, are in VSOP87's frame, the
+ * dynamical ecliptic and equinox of J2000 of Bretagnon & Francou 1988 (A&A 202, 309), which
+ * is turned by about 0.07″ in longitude from the IAU 2006 ecliptic (measured against ERFA
+ * epv00, test/fit/observerPosition.test.ts). The rotation from VSOP87's frame to the FK5
+ * (J2000) equator is the one Meeus gives for VSOP87 rectangular coordinates (Astronomical
+ * Algorithms, 2nd ed., 1998, ch. 26, "Rectangular Coordinates of the Sun"; chapter and
+ * coefficients from memory), after Bretagnon & Francou:
+ *   X = X′ + 0.000000440360 Y′ − 0.000000190919 Z′
+ *   Y = −0.000000479966 X′ + 0.917482137087 Y′ − 0.397776982902 Z′
+ *   Z = 0.397776982902 Y′ + 0.917482137087 Z′
+ * i.e. R3(ψ) · R1(−ε) with ε = 84381.4091″ and ψ = 0.0990″ (the FK5 equinox from the
+ * dynamical one, along the equator). The FK5 is taken as the ICRF: the two differ by some
+ * 20 mas in pole and equinox (the Hipparcos tie of the FK5, Mignard & Froeschlé 2000,
+ * A&A 354, 732; from memory), the size of what is left against epv00 (12–26 mas, measured).
+ * The core's ecliptic → ICRF is therefore ECLIPTIC_TO_ICRF_MATRIX = VSOP87_TO_FK5_MATRIX.
  */
 import { OBLIQUITY_J2000_RAD, RAD_PER_ARCSEC } from '../core/constants.js';
 
@@ -53,10 +68,23 @@ export const FRAME_BIAS_MATRIX: readonly number[] = Object.freeze(mul3(mul3(r1(-
 /** Bᵀ: J2000 mean equator → ICRF, row-major. */
 export const J2000_TO_ICRF_MATRIX: readonly number[] = Object.freeze(transpose3(FRAME_BIAS_MATRIX));
 
-/** Bᵀ · R1(−ε0): the core's J2000 ecliptic → ICRF, row-major. */
-export const ECLIPTIC_TO_ICRF_MATRIX: readonly number[] = Object.freeze(mul3(J2000_TO_ICRF_MATRIX, r1(-OBLIQUITY_J2000_RAD)));
+/** Bᵀ · R1(−ε0): the IAU 2006 ecliptic of J2000 → ICRF, row-major. */
+export const IAU2006_ECLIPTIC_TO_ICRF_MATRIX: readonly number[] = Object.freeze(mul3(J2000_TO_ICRF_MATRIX, r1(-OBLIQUITY_J2000_RAD)));
 
-/** Its transpose: ICRF → the core's J2000 ecliptic, row-major. */
+/**
+ * VSOP87's ecliptic and equinox of J2000 → FK5 equator and equinox of J2000, row-major
+ * (Bretagnon & Francou 1988 as given by Meeus 1998, ch. 26; from memory, see the file comment).
+ */
+export const VSOP87_TO_FK5_MATRIX: readonly number[] = Object.freeze([
+  1, 0.000000440360, -0.000000190919,
+  -0.000000479966, 0.917482137087, -0.397776982902,
+  0, 0.397776982902, 0.917482137087,
+]);
+
+/** The core's ecliptic (VSOP87's) → ICRF, row-major: VSOP87 → FK5, the FK5 taken as the ICRF. */
+export const ECLIPTIC_TO_ICRF_MATRIX: readonly number[] = VSOP87_TO_FK5_MATRIX;
+
+/** Its transpose: ICRF → the core's ecliptic, row-major (the matrix is orthogonal to 1e-12). */
 export const ICRF_TO_ECLIPTIC_MATRIX: readonly number[] = Object.freeze(transpose3(ECLIPTIC_TO_ICRF_MATRIX));
 
 /** out[o..o+2] = m · v[i..i+2] (m row-major 3×3); out may be v when o = i. */

@@ -2,7 +2,9 @@
  * Heliocentric position and velocity of the observer at an observation, ICRF equatorial, au
  * and au/day.
  *
- *   r_obs = Bᵀ · (R1(−ε0) · r_Earth,ecliptic + r_site,J2000)     (frameBias.ts)
+ *   r_obs = M · r_Earth,ecliptic + Bᵀ · r_site,J2000     (frameBias.ts)
+ *
+ * M turns the core's (VSOP87's) ecliptic to the ICRF (through the FK5), B is the frame bias.
  *
  * - r_Earth: the geocentre from the project's planetary ephemeris, body 'earth' (VSOP87B
  *   Earth: the geocentre itself, not the Earth–Moon barycentre, which lies about 4 700 km
@@ -18,11 +20,10 @@
  * the core keeps it, a few km; measured in the test) plus the site model's ≤ 0.8 km.
  */
 import { KM_PER_AU, SECONDS_PER_DAY } from '../core/constants.js';
-import { eclipticToEquatorialInPlace } from '../core/frames/frames.js';
 import { observerGeocentricState } from '../core/frames/observer.js';
 import { tdbMinusTtSeconds } from '../core/time/timeScales.js';
 import type { Ephemeris } from '../core/types.js';
-import { J2000_TO_ICRF_MATRIX, rotate3 } from './frameBias.js';
+import { ECLIPTIC_TO_ICRF_MATRIX, J2000_TO_ICRF_MATRIX, rotate3 } from './frameBias.js';
 import { geodeticToParallax } from './geodeticSite.js';
 import type { ObserverPlace, ObserverState } from './types.js';
 
@@ -45,12 +46,11 @@ export function observerHeliocentricState(place: ObserverPlace, jdUtc: number, j
   }
   const jdTDB = jdTTToTDB(jdTT);
   eph.helioState('earth', jdTDB, EARTH, 0);
-  eclipticToEquatorialInPlace(EARTH, 0);
-  eclipticToEquatorialInPlace(EARTH, 3);
   const position = new Float64Array(3);
   const velocity = new Float64Array(3);
+  rotate3(ECLIPTIC_TO_ICRF_MATRIX, EARTH, 0, position, 0);
+  rotate3(ECLIPTIC_TO_ICRF_MATRIX, EARTH, 3, velocity, 0);
   if (place.kind === 'space') {
-    rotate3(J2000_TO_ICRF_MATRIX, EARTH, 0, position, 0);
     for (let k = 0; k < 3; k++) {
       if (!Number.isFinite(place.geocentricKm[k])) {
         throw new RangeError(`observerHeliocentricState: non-finite geocentric position ${place.geocentricKm.join(', ')} km`);
@@ -61,9 +61,12 @@ export function observerHeliocentricState(place: ObserverPlace, jdUtc: number, j
     return { positionIcrfAu: position, velocityIcrfAuPerDay: velocity, jdTDB };
   }
   siteGeocentricJ2000(place, jdUtc, jdTT);
-  for (let k = 0; k < 6; k++) EARTH[k] += SITE[k];
-  rotate3(J2000_TO_ICRF_MATRIX, EARTH, 0, position, 0);
-  rotate3(J2000_TO_ICRF_MATRIX, EARTH, 3, velocity, 0);
+  rotate3(J2000_TO_ICRF_MATRIX, SITE, 0, SITE, 0);
+  rotate3(J2000_TO_ICRF_MATRIX, SITE, 3, SITE, 3);
+  for (let k = 0; k < 3; k++) {
+    position[k] += SITE[k];
+    velocity[k] += SITE[k + 3];
+  }
   return { positionIcrfAu: position, velocityIcrfAuPerDay: velocity, jdTDB };
 }
 

@@ -7,6 +7,7 @@ import { ARCSEC_PER_RAD, C_AU_PER_DAY, GM_SUN_AU3_PER_DAY2, SECONDS_PER_DAY } fr
 import { wrapPi } from '../../src/core/math.js';
 import { propagateTwoBody } from '../../src/core/orbit/universal.js';
 import { computeAstrometricPlace, LIGHT_TIME_TOLERANCE_DAYS } from '../../src/fit/astrometricPlace.js';
+import { IAU2006_ECLIPTIC_TO_ICRF_MATRIX, ICRF_TO_ECLIPTIC_MATRIX, rotate3 } from '../../src/fit/frameBias.js';
 import type { BodyStateEclipticFn } from '../../src/fit/types.js';
 
 const fixture = JSON.parse(readFileSync(new URL('../fixtures/erfa-observation/places.json', import.meta.url), 'utf8'));
@@ -17,12 +18,21 @@ interface PlaceCase {
 }
 const cases: PlaceCase[] = fixture.cases;
 
+/** The fixture's ecliptic (ecm06's, IAU 2006) → the core's (VSOP87's), through the ICRF. */
+function toCoreEcliptic(v: readonly number[]): Float64Array {
+  const icrf = new Float64Array(3), out = new Float64Array(3);
+  rotate3(IAU2006_ECLIPTIC_TO_ICRF_MATRIX, v, 0, icrf, 0);
+  rotate3(ICRF_TO_ECLIPTIC_MATRIX, icrf, 0, out, 0);
+  return out;
+}
+
 function uniformMotion(c: PlaceCase, t0: number): BodyStateEclipticFn {
+  const r = toCoreEcliptic(c.bodyEclipticAu), v = toCoreEcliptic(c.bodyEclipticAuPerDay);
   return (jd, out) => {
     const dt = jd - t0;
     for (let k = 0; k < 3; k++) {
-      out[k] = c.bodyEclipticAu[k] + c.bodyEclipticAuPerDay[k] * dt;
-      out[k + 3] = c.bodyEclipticAuPerDay[k];
+      out[k] = r[k] + v[k] * dt;
+      out[k + 3] = v[k];
     }
   };
 }

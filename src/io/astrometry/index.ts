@@ -14,3 +14,6 @@ export * from './observatoryCodes.js';
 export * from './observationStations.js';
 export * from './astrometryDesignations.js';
 export * from './readAstrometryFile.js';
+export * from './sexagesimalFormat.js';
+export * from './obs80Writer.js';
+export * from './adesPsvWriter.js';

@@ -1,0 +1,7 @@
+export * from './types.js';
+export * from './normalDeviate.js';
+export * from './visibility.js';
+export * from './truthTrajectory.js';
+export * from './candidateNights.js';
+export * from './tracklets.js';
+export * from './generateSyntheticAstrometry.js';
