@@ -44,28 +44,22 @@ export function startAt(fit: OrbitFit): OrbitFitStart {
   return { kind: 'state', epochJdTDB: fit.epochJdTDB, state: fit.state };
 }
 
-function elapsed(t0: number): string {
-  return `${((Date.now() - t0) / 1000).toFixed(1)} s`;
-}
-
 /** Runs the fits (see the file comment). */
 export function runModelFits(input: ModelFitsInput): ModelFits {
   const { observations, sites, sigmas, ephemeris } = input;
   const say = input.onProgress ?? (() => undefined);
   const own: { id: NongravModelId; fit: OrbitFit; nParams: number }[] = [];
   const failures: CheckModelFailure[] = [];
-  let t0 = Date.now();
   say(`fitting gravity only (${observations.length} observations)`);
   const gravity = fitOrbit(observations, sites, input.start, { sigmas, ephemeris });
-  say(`gravity only: χ² ${gravity.chi2.toFixed(1)}, ${gravity.kept} kept, ${gravity.rejected} rejected (${elapsed(t0)})`);
+  say(`gravity only: χ² ${gravity.chi2.toFixed(1)}, ${gravity.kept} kept, ${gravity.rejected} rejected`);
   own.push({ id: 'gravity', fit: gravity, nParams: 6 });
   for (const id of input.models) {
     const model = NONGRAV_MODELS[id];
-    t0 = Date.now();
     say(`fitting ${id} (${model.params.map((p) => p.name).join(', ')})`);
     try {
       const fit = fitOrbit(observations, sites, startAt(gravity), { ...fitOptionsOf(model), sigmas, ephemeris });
-      say(`${id}: χ² ${fit.chi2.toFixed(1)}, ${fit.kept} kept, ${fit.rejected} rejected (${elapsed(t0)})`);
+      say(`${id}: χ² ${fit.chi2.toFixed(1)}, ${fit.kept} kept, ${fit.rejected} rejected`);
       own.push({ id, fit, nParams: 6 + model.params.length });
     } catch (e) {
       if (!(e instanceof OrbitFitError)) throw e;
@@ -82,7 +76,6 @@ export function runModelFits(input: ModelFitsInput): ModelFits {
     const model = NONGRAV_MODELS[o.id];
     let fit = o.fit;
     if (!keepsExactly(fit, inSet)) {
-      t0 = Date.now();
       say(`refitting ${o.id} on the comparison set`);
       try {
         fit = fitOrbit(observations, sites, startAt(o.fit), { ...fitOptionsOf(model), params: o.fit.params, sigmas: setSigmas, ephemeris, reject: false });
@@ -92,7 +85,6 @@ export function runModelFits(input: ModelFitsInput): ModelFits {
         failures.push({ id: o.id, message: `on the comparison set: ${e.message}` });
         continue;
       }
-      say(`${o.id} on the comparison set: done (${elapsed(t0)})`);
     }
     fits.push(summarise(o.id, model, fit, o.fit.rejected, sigmas, inSet));
   }
@@ -110,11 +102,10 @@ function retryFailures(input: ModelFitsInput, own: { id: NongravModelId; fit: Or
   if (best.id === 'gravity') return;
   for (const failed of [...failures]) {
     const model = NONGRAV_MODELS[failed.id];
-    const t0 = Date.now();
     say(`fitting ${failed.id} again, from the ${best.id} solution`);
     try {
       const fit = fitOrbit(input.observations, input.sites, startAt(best.fit), { ...fitOptionsOf(model), sigmas: input.sigmas, ephemeris: input.ephemeris });
-      say(`${failed.id}: χ² ${fit.chi2.toFixed(1)}, ${fit.kept} kept, ${fit.rejected} rejected (${elapsed(t0)})`);
+      say(`${failed.id}: χ² ${fit.chi2.toFixed(1)}, ${fit.kept} kept, ${fit.rejected} rejected`);
       own.push({ id: failed.id, fit, nParams: 6 + model.params.length });
       failures.splice(failures.indexOf(failed), 1);
     } catch (e) {
