@@ -1,6 +1,7 @@
 /** The wayward command-line program: every command registered on one commander program. */
 import { Command } from 'commander';
 import { packageVersion } from './packageInfo.js';
+import { registerCheck } from './check.js';
 import { registerCoorbitals } from './coorbitals.js';
 import { registerFamilies } from './families.js';
 import { registerPropagate } from './propagate.js';
@@ -18,5 +19,6 @@ export function buildProgram(): Command {
   registerPropagate(program);
   registerCoorbitals(program);
   registerFamilies(program);
+  registerCheck(program);
   return program;
 }
