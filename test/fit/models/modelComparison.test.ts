@@ -80,6 +80,13 @@ describe('compareModels: the preferred model', () => {
     expect(compareModels([gravity, thermal(380), comet]).preferred).toBe('thermal');
     expect(compareModels([gravity, thermal(380), { ...comet, chiSquare: 360 }]).preferred).toBe('comet');
   });
+  it('breaks a BIC tie by the smaller number of parameters', () => {
+    // Both reach BIC 380 + 7 ln 400 exactly: the two-parameter model with Δχ² larger by ln 400.
+    const tied: ModelFitSummary = { id: 'comet', chiSquare: 380 - Math.log(400), nResiduals: N, nParams: 8, params: [] };
+    const c = compareModels([gravity, tied, thermal(380)]);
+    expect(c.rows[1].bic).toBe(c.rows[2].bic);
+    expect(c.preferred).toBe('thermal');
+  });
   it('never prefers a fit that did not converge', () => {
     const c = compareModels([gravity, { ...thermal(300), converged: false }]);
     expect(c.preferred).toBe('gravity');

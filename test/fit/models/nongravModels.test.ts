@@ -34,6 +34,8 @@ describe('the model catalogue', () => {
     expect(withNormalComponent(NONGRAV_MODELS.comet).params.map((p) => p.name)).toEqual(['A1', 'A2', 'A3']);
     expect(NONGRAV_MODELS.srp.params.map((p) => [p.name, p.unit])).toEqual([['areaToMass', 'm²/kg']]);
     expect(NONGRAV_MODELS.srp.params[0].meaning).toMatch(/C_R = 1 assumed/);
+    expect(withNormalComponent(withNormalComponent(NONGRAV_MODELS.comet)).params).toHaveLength(3);
+    expect(nongravModel('srp')).toBe(NONGRAV_MODELS.srp);
     expect(() => nongravModel('drag')).toThrow(TypeError);
     expect(() => withNormalComponent(NONGRAV_MODELS.thermal)).toThrow(RangeError);
   });

@@ -62,6 +62,13 @@ describe('runsTest: edge cases', () => {
     expect(r.z).toBeNaN();
     expect(r.pFewRunsExact).toBeNaN();
   });
+  it('sums the exact tail up to n = 200 signs and leaves it NaN beyond', () => {
+    const signs = (n: number) => Array.from({ length: n }, (_, i) => (Math.floor(i / 10) % 2 === 0 ? 1 : -1));
+    expect(runsTest(signs(200)).pFewRunsExact).toBeGreaterThanOrEqual(0);
+    expect(runsTest(signs(200)).pFewRunsExact).toBeLessThan(1e-6);
+    expect(runsTest(signs(201)).pFewRunsExact).toBeNaN();
+    expect(runsTest(signs(201)).pFewRunsNormal).toBeLessThan(1e-6);
+  });
   it('refuses NaN residuals', () => {
     expect(() => runsTest([1, NaN, -1])).toThrow(RangeError);
   });

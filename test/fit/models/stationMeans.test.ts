@@ -52,6 +52,17 @@ describe('stationMeans', () => {
     expect(t05.ra.z).toBeGreaterThan(4.5);
     expect(t05.pValueAllStations).toBeCloseTo(Math.min(1, 4 * t05.pValue), 14);
   });
+  it('follows the threshold given', () => {
+    // One station, mean 0.1″ over an error of 0.05″: z = 2, χ² = 4, p = exp(−2) = 0.135.
+    const res = {
+      station: ['A', 'A', 'A', 'A'], raCosDecArcsec: [0.1, 0.1, 0.1, 0.1], decArcsec: [0, 0, 0, 0],
+      sigmaRaArcsec: [0.1, 0.1, 0.1, 0.1], sigmaDecArcsec: [0.1, 0.1, 0.1, 0.1],
+    };
+    expect(stationMeans(res).stations[0].pValue).toBeCloseTo(Math.exp(-2), 14);
+    expect(stationMeans(res).stations[0].biased).toBe(false);
+    expect(stationMeans(res, 0.2).stations[0].biased).toBe(true);
+    expect(() => stationMeans(res, 0)).toThrow(RangeError);
+  });
   it('counts the observations it cannot use', () => {
     const r = stationMeans({
       station: ['A', 'A', 'A'], raCosDecArcsec: [0.1, NaN, 0.2], decArcsec: [0, 0, 0],
