@@ -94,11 +94,14 @@ export async function runCheckCommand(designation: string, opts: CheckCliOptions
       throw e;
     }
     const run: CheckRun = { account: a, result, models: ['gravity', ...opts.models] };
+    say('fits and guards done');
     if (stage !== null) {
       await writeFileAtomic(stage.path('fit.json'), checkJsonText(run));
       await writeFileAtomic(stage.path('residuals.csv'), residualsCsvText(run));
+      say('fit.json and residuals.csv staged; drawing plots');
       await writeCheckPlots(stage, result.observations, result.fits);
       await stage.commit();
+      say(`outputs written to ${opts.out}`);
     }
     return run;
   } catch (err) {
