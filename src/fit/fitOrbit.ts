@@ -242,18 +242,24 @@ function evaluate(ctx: FitContext, p: Float64Array, active: readonly number[], k
     throw e;
   }
   const residuals = new Float64Array(2 * active.length);
-  let chi2 = 0;
   active.forEach((k, a) => {
     const dec = ctx.prep.decRad[k];
-    const r0 = wrapPi(ctx.prep.raRad[k] - pred.raRad[a]) * Math.cos(dec);
-    const r1 = dec - pred.decRad[a];
-    residuals[2 * a] = r0; residuals[2 * a + 1] = r1;
-    if (kept[k]) {
-      const w = ctx.prep.weights;
-      chi2 += r0 * r0 * w[3 * k] + 2 * r0 * r1 * w[3 * k + 1] + r1 * r1 * w[3 * k + 2];
-    }
+    residuals[2 * a] = wrapPi(ctx.prep.raRad[k] - pred.raRad[a]) * Math.cos(dec);
+    residuals[2 * a + 1] = dec - pred.decRad[a];
   });
-  return { pred, residuals, chi2 };
+  return { pred, residuals, chi2: keptChi2(ctx, active, kept, residuals) };
+}
+
+/** χ² over the kept of the active observations, from their residuals (same order of sums as always). */
+function keptChi2(ctx: FitContext, active: readonly number[], kept: readonly boolean[], residuals: Float64Array): number {
+  const w = ctx.prep.weights;
+  let chi2 = 0;
+  active.forEach((k, a) => {
+    if (!kept[k]) return;
+    const r0 = residuals[2 * a], r1 = residuals[2 * a + 1];
+    chi2 += r0 * r0 * w[3 * k] + 2 * r0 * r1 * w[3 * k + 1] + r1 * r1 * w[3 * k + 2];
+  });
+  return chi2;
 }
 
 /** Per-window arrays of weights/σ² for the active observations. */
@@ -270,13 +276,17 @@ function fitWindow(ctx: FitContext, p: Float64Array, active: readonly number[], 
   const w = sub(ctx.prep.weights, active, 3);
   const s2 = sub(ctx.prep.sigma2, active, 3);
   const minKept = Math.max(3, Math.ceil(m / 2) + 1);
+  // Places and residuals of p over `active` from the previous round: a rejection round changes
+  // only which observations count, so the next round starts from them without integrating again.
+  let previous: Evaluation | null = null;
   for (let round = 0; ; round++) {
     const keptActive = active.map((k) => kept[k]);
     const nKept = keptActive.filter(Boolean).length;
     if (nKept < 3 || 2 * nKept <= m) {
       throw new OrbitFitError('too-few-observations', `${nKept} observations kept in a window of ${active.length} for ${m} unknowns`, ctx.iterations, ctx.lastChi2, ctx.condition);
     }
-    const { covariance, evaluation } = converge(ctx, p, active, kept, keptActive, w, maxIterations);
+    const { covariance, evaluation } = converge(ctx, p, active, kept, keptActive, w, maxIterations, previous);
+    previous = evaluation;
     if (reject === null || round >= MAX_REJECTION_ROUNDS) return { covariance, evaluation };
     const chi = observationChi2(evaluation.pred.design, evaluation.residuals, s2, keptActive, covariance, m);
     let changed = false;
@@ -296,9 +306,9 @@ function fitWindow(ctx: FitContext, p: Float64Array, active: readonly number[], 
 
 /** Gauss–Newton iterations with step halving until convergence (see the file comment). */
 function converge(ctx: FitContext, p: Float64Array, active: readonly number[], kept: readonly boolean[], keptActive: readonly boolean[],
-  w: Float64Array, maxIterations: number): { covariance: Float64Array; evaluation: Evaluation } {
+  w: Float64Array, maxIterations: number, atP: Evaluation | null = null): { covariance: Float64Array; evaluation: Evaluation } {
   const m = ctx.m;
-  let cur = evaluate(ctx, p, active, kept);
+  let cur = atP === null ? evaluate(ctx, p, active, kept) : { pred: atP.pred, residuals: atP.residuals, chi2: keptChi2(ctx, active, kept, atP.residuals) };
   for (let it = 0; it < maxIterations; it++) {
     ctx.iterations++;
     ctx.lastChi2 = cur.chi2;
