@@ -25,7 +25,7 @@ const PER_HALF_MONTH = 620 * SECOND_LETTERS.length + 62 ** 4;
  * abbreviations in running text, where a search for the abbreviation would find the demo's
  * files. The allocator steps over them (our choice).
  */
-export const SKIPPED_BARE_LETTERS: readonly string[] = ['FO'];
+export const SKIPPED_BARE_PAIRS: readonly (readonly [halfMonthLetter: string, secondLetter: string])[] = [['F', 'O']];
 
 /** Half-month index 0..23 of a calendar date (day 1–15 → first half). */
 export function halfMonthIndex(month: number, day: number): number {
@@ -79,7 +79,7 @@ export class DesignationAllocator {
 
 /** Whether the n-th designation of a half month is a skipped bare pair. */
 function isSkipped(halfMonth: number, n: number): boolean {
-  return n < SECOND_LETTERS.length && SKIPPED_BARE_LETTERS.includes(HALF_MONTH_LETTERS[halfMonth] + SECOND_LETTERS[n]);
+  return n < SECOND_LETTERS.length && SKIPPED_BARE_PAIRS.some(([h, l]) => h === HALF_MONTH_LETTERS[halfMonth] && l === SECOND_LETTERS[n]);
 }
 
 /** Readable provisional designation of the n-th body (0-based) of a half month. */
