@@ -5,7 +5,7 @@
  */
 
 export type { Random } from '../../src/core/random.js';
-import { seededRandom, type Random } from '../../src/core/random.js';
+import { normalDeviate, seededRandom, type Random } from '../../src/core/random.js';
 
 /** The demo's generator: the project's seeded mulberry32 (src/core/random.ts). */
 export function mulberry32(seed: number): Random {
@@ -22,15 +22,8 @@ export function uniformInt(random: Random, lo: number, hi: number): number {
   return lo + Math.floor((hi - lo + 1) * random());
 }
 
-/**
- * Standard normal deviate by the Box–Muller transform (Box & Muller 1958, Ann. Math.
- * Stat. 29, 610). One deviate per call (the second is discarded: no hidden state).
- */
-export function normal(random: Random, mean = 0, sigma = 1): number {
-  const u1 = 1 - random(); // (0, 1]: log is finite
-  const u2 = random();
-  return mean + sigma * Math.sqrt(-2 * Math.log(u1)) * Math.cos(2 * Math.PI * u2);
-}
+/** Normal deviate (Box–Muller): the project's own, src/core/random.ts. */
+export const normal = normalDeviate;
 
 /** Rayleigh deviate with scale sigma (inverse CDF: sigma·sqrt(−2 ln U)). */
 export function rayleigh(random: Random, sigma: number): number {

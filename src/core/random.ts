@@ -30,3 +30,14 @@ export function uniformArray(random: Random, n: number, lo = 0, hi = 1): Float64
   for (let k = 0; k < n; k++) out[k] = lo + (hi - lo) * random();
   return out;
 }
+
+/**
+ * Normal deviate with the given mean and σ by the Box–Muller transform (Box & Muller 1958,
+ * Ann. Math. Stat. 29, 610). Two uniforms a call, one deviate (the second is discarded: no
+ * hidden state between calls). With the defaults, the standard normal deviate itself.
+ */
+export function normalDeviate(random: Random, mean = 0, sigma = 1): number {
+  const u1 = 1 - random(); // (0, 1]: the logarithm is finite
+  const u2 = random();
+  return mean + sigma * Math.sqrt(-2 * Math.log(u1)) * Math.cos(2 * Math.PI * u2);
+}

@@ -24,14 +24,13 @@ import { GM_SUN_AU3_PER_DAY2, MJD_OFFSET, RAD_PER_ARCSEC } from '../../core/cons
 import { wrapTwoPi } from '../../core/math.js';
 import { propagateTwoBody } from '../../core/orbit/universal.js';
 import { planetaryEphemerisOver } from '../../core/propagate/propagateOrbit.js';
-import { seededRandom, type Random } from '../../core/random.js';
+import { normalDeviate, seededRandom, type Random } from '../../core/random.js';
 import { FIRST_LEAP_MJD_UTC } from '../../core/time/leapSeconds.js';
 import type { Ephemeris } from '../../core/types.js';
 import type { AstrometryObservation } from '../../io/astrometry/types.js';
 import { computeAstrometricPlace } from '../astrometricPlace.js';
 import { jdTTToTDB, observerHeliocentricState } from '../observerPosition.js';
 import { findCandidateNights, ttMinusUtcDays, type BodyPositionFn, type CandidateNight } from './candidateNights.js';
-import { normalDeviate } from './normalDeviate.js';
 import { planTracklets, type PlannedTracklet } from './tracklets.js';
 import { truthStates } from './truthTrajectory.js';
 import type { CadenceRules, SyntheticObservation, SyntheticRequest, SyntheticResult, SyntheticStation } from './types.js';

@@ -1,5 +1,4 @@
 export * from './types.js';
-export * from './normalDeviate.js';
 export * from './visibility.js';
 export * from './truthTrajectory.js';
 export * from './candidateNights.js';
