@@ -25,6 +25,11 @@
  * changes (at most 20 rounds). Rejection stops short of leaving fewer than max(3, m/2 + 1)
  * observations kept.
  *
+ * Excluded observations (options.exclude, e.g. those outside a comparison set or one station's):
+ * left out of everything above — χ², the normal equations, the start, the windows, rejection and
+ * recovery — and reported as 'excluded' with their residuals at the solution, computed by one
+ * more integration after the fit.
+ *
  * Start: a state, elements, or Gauss's method (preliminaryOrbit.ts on chooseThree.ts's three
  * observations, arcs of at most 60, 30 and 15 days in turn, each root in the order the
  * preliminary orbit ranks them) — the next is tried when a fit from one fails. From three
@@ -63,6 +68,7 @@ const FIRST_WINDOW_DAYS = 30;
 /** The observations as the iterations use them (usable ones only). */
 interface Prepared {
   index: number[]; // into the caller's array
+  excluded: boolean[]; // the caller left it out (options.exclude)
   observers: ObserverState[];
   raRad: Float64Array;
   decRad: Float64Array;
@@ -88,16 +94,19 @@ export function fitOrbit(observations: readonly AstrometryObservation[], sites: 
   const m = partialColumns(solveFor);
   const sigmas = opts.sigmas ?? observationSigmas(observations, sites);
   if (sigmas.length !== observations.length) throw new RangeError(`fitOrbit: ${sigmas.length} σ for ${observations.length} observations`);
+  const excluded = excludedMask(opts.exclude, observations.length);
   const usable: number[] = [];
   observations.forEach((o, i) => { if (Number.isFinite(o.timeJdTT) && Number.isFinite(o.timeJdUtc)) usable.push(i); });
-  if (usable.length < 3 || 2 * usable.length <= m) {
-    throw new OrbitFitError('too-few-observations', `${usable.length} usable observations for ${m} unknowns`, 0, NaN, NaN);
+  const included = usable.filter((i) => !excluded[i]);
+  if (included.length < 3 || 2 * included.length <= m) {
+    const left = included.length === usable.length ? '' : ` (${usable.length - included.length} more excluded)`;
+    throw new OrbitFitError('too-few-observations', `${included.length} usable observations${left} for ${m} unknowns`, 0, NaN, NaN);
   }
   const times = usable.map((i) => observations[i].timeJdTT);
-  const starts = startCandidates(observations, usable, sites, start, opts);
+  const starts = startCandidates(observations, included, sites, start, opts);
   const lo = Math.min(...times, ...starts.map((s) => s.epochJdTDB)), hi = Math.max(...times, ...starts.map((s) => s.epochJdTDB));
   const eph = opts.ephemeris ?? planetaryEphemerisOver(lo - 1, hi + 1);
-  const prep = prepare(observations, usable, sites, sigmas, eph);
+  const prep = prepare(observations, usable, excluded, sites, sigmas, eph);
   const failures: string[] = [];
   let lastError: OrbitFitError | null = null;
   for (const s of starts) {
@@ -112,6 +121,16 @@ export function fitOrbit(observations: readonly AstrometryObservation[], sites: 
   if (starts.length === 0) throw new OrbitFitError('no-start', 'Gauss’s method gave no valid solution on any arc tried', 0, NaN, NaN);
   if (starts.length === 1) throw lastError!;
   throw new OrbitFitError(lastError!.reason, `every start failed — ${failures.join(' | ')}`, lastError!.iterations, lastError!.lastChi2, lastError!.condition);
+}
+
+/** True per observation the caller excluded; RangeError for an index that is not one of them. */
+function excludedMask(exclude: readonly number[] | undefined, n: number): boolean[] {
+  const mask = new Array<boolean>(n).fill(false);
+  for (const i of exclude ?? []) {
+    if (!Number.isInteger(i) || i < 0 || i >= n) throw new RangeError(`fitOrbit: excluded index ${i} is not one of the ${n} observations`);
+    mask[i] = true;
+  }
+  return mask;
 }
 
 interface StartCandidate { epochJdTDB: number; state: Float64Array; label: string; grow: boolean; arcDays: number }
@@ -158,8 +177,8 @@ function startCandidates(observations: readonly AstrometryObservation[], usable:
 }
 
 /** Observer states and σ of the usable observations. */
-function prepare(observations: readonly AstrometryObservation[], usable: readonly number[], sites: ReadonlyMap<string, ObservatorySite>,
-  sigmas: readonly ObservationSigma[], eph: Ephemeris): Prepared {
+function prepare(observations: readonly AstrometryObservation[], usable: readonly number[], excluded: readonly boolean[],
+  sites: ReadonlyMap<string, ObservatorySite>, sigmas: readonly ObservationSigma[], eph: Ephemeris): Prepared {
   const n = usable.length;
   const sigma2 = new Float64Array(3 * n), weights = new Float64Array(3 * n);
   const raRad = new Float64Array(n), decRad = new Float64Array(n);
@@ -174,7 +193,7 @@ function prepare(observations: readonly AstrometryObservation[], usable: readonl
     weights.set(inverse2(a, b, d), 3 * k);
     return observerHeliocentricState(observerPlaceOf(o, sites), o.timeJdUtc, o.timeJdTT, eph);
   });
-  return { index: [...usable], observers, raRad, decRad, sigma2, weights, sigmas: usable.map((i) => sigmas[i]) };
+  return { index: [...usable], excluded: usable.map((i) => excluded[i]), observers, raRad, decRad, sigma2, weights, sigmas: usable.map((i) => sigmas[i]) };
 }
 
 /** Fit from one start; OrbitFitError on failure. */
@@ -191,28 +210,47 @@ function runFit(observations: readonly AstrometryObservation[], prep: Prepared, 
   solveFor.forEach((q, k) => { p[6 + k] = params[FIT_PARAMETER_INDEX[q]]; });
   const reject = opts.reject === false ? null : { rej: opts.reject?.chi2Reject ?? CHI2_REJECT, rec: opts.reject?.chi2Recover ?? CHI2_RECOVER };
   const maxIterations = opts.maxIterations ?? 25;
-  const kept = new Array<boolean>(n).fill(true);
+  // Excluded observations are never kept and never in a window, so never recovered.
+  const kept = prep.excluded.map((x) => !x);
   const ctx: FitContext = { prep, solveFor, m, eph, opts, params, epoch: s.epochJdTDB, iterations: 0, condition: NaN, lastChi2: NaN, rejections: 0, recoveries: 0 };
-  // Windows about the epoch.
+  // Windows about the epoch, over the observations not excluded.
   const dist = prep.observers.map((o) => Math.abs(o.jdTDB - s.epochJdTDB));
-  const far = Math.max(...dist);
+  const inFit = dist.filter((_, k) => !prep.excluded[k]);
+  const far = Math.max(...inFit);
   let width = s.grow ? Math.max(s.arcDays, 1) : far;
   // A window needs enough observations to fix the unknowns: widen it until it has 2m.
-  const sorted = [...dist].sort((a, b) => a - b);
+  const sorted = [...inFit].sort((a, b) => a - b);
   width = Math.max(width, sorted[Math.min(sorted.length, 2 * m) - 1]);
   let cov: Float64Array = new Float64Array(m * m);
   let evalAt: Evaluation | null = null;
   let active: number[] = [];
   for (;;) {
     active = [];
-    for (let k = 0; k < n; k++) if (dist[k] <= width) active.push(k);
+    for (let k = 0; k < n; k++) if (!prep.excluded[k] && dist[k] <= width) active.push(k);
     const res = fitWindow(ctx, p, active, kept, maxIterations, reject);
     cov = res.covariance;
     evalAt = res.evaluation;
     if (width >= far) break;
     width = Math.min(far, width * GROWTH);
   }
-  return assemble(observations, ctx, p, kept, cov, evalAt!, s.label);
+  return assemble(observations, ctx, p, kept, cov, [{ active, evaluation: evalAt! }, ...recordOfExcluded(ctx, p, kept)], s.label);
+}
+
+/**
+ * Places of the excluded observations at the solution, for the record (one more integration;
+ * none when nothing is excluded). When they cannot be computed (the integration fails out
+ * there) their residuals stay NaN.
+ */
+function recordOfExcluded(ctx: FitContext, p: Float64Array, kept: readonly boolean[]): { active: number[]; evaluation: Evaluation }[] {
+  const active: number[] = [];
+  ctx.prep.excluded.forEach((x, k) => { if (x) active.push(k); });
+  if (active.length === 0) return [];
+  try {
+    return [{ active, evaluation: evaluate(ctx, p, active, kept) }];
+  } catch (e) {
+    if (e instanceof OrbitFitError) return [];
+    throw e;
+  }
 }
 
 interface FitContext {
@@ -355,28 +393,36 @@ function converge(ctx: FitContext, p: Float64Array, active: readonly number[], k
   throw new OrbitFitError('diverged', `no convergence within ${maxIterations} iterations`, ctx.iterations, cur.chi2, ctx.condition);
 }
 
-/** The result object over all usable observations (the last window holds them all). */
+/**
+ * The result object over all usable observations, from the evaluations that hold them: the last
+ * window's (every observation not excluded) and the record of the excluded ones.
+ */
 function assemble(observations: readonly AstrometryObservation[], ctx: FitContext, p: Float64Array, kept: readonly boolean[],
-  covariance: Float64Array, ev: Evaluation, label: string): OrbitFit {
+  covariance: Float64Array, evaluations: readonly { active: readonly number[]; evaluation: Evaluation }[], label: string): OrbitFit {
   const { prep, m } = ctx;
   const n = prep.index.length;
-  const s2 = prep.sigma2;
-  const chi = observationChi2(ev.pred.design, ev.residuals, s2, kept, covariance, m);
-  const out: ObservationFit[] = observations.map((o) => ({
+  const residuals = new Float64Array(2 * n).fill(NaN), chi = new Float64Array(n).fill(NaN);
+  for (const { active, evaluation: ev } of evaluations) {
+    const s2 = sub(prep.sigma2, active, 3);
+    const c = observationChi2(ev.pred.design, ev.residuals, s2, active.map((k) => kept[k]), covariance, m);
+    active.forEach((k, a) => { residuals[2 * k] = ev.residuals[2 * a]; residuals[2 * k + 1] = ev.residuals[2 * a + 1]; chi[k] = c[a]; });
+  }
+  const out: ObservationFit[] = observations.map(() => ({
     status: 'unusable', residualRaCosDecArcsec: NaN, residualDecArcsec: NaN, sigmaRaCosDecArcsec: NaN, sigmaDecArcsec: NaN, chi2: NaN,
   }));
-  let chi2 = 0, wSum = 0, wr2 = 0, r2 = 0, nKept = 0;
+  let chi2 = 0, wSum = 0, wr2 = 0, r2 = 0, nKept = 0, nExcluded = 0;
   for (let k = 0; k < n; k++) {
     const sg = prep.sigmas[k];
-    const r0 = ev.residuals[2 * k] * ARCSEC_PER_RAD, r1 = ev.residuals[2 * k + 1] * ARCSEC_PER_RAD;
+    const r0 = residuals[2 * k] * ARCSEC_PER_RAD, r1 = residuals[2 * k + 1] * ARCSEC_PER_RAD;
     out[prep.index[k]] = {
-      status: kept[k] ? 'kept' : 'rejected', residualRaCosDecArcsec: r0, residualDecArcsec: r1,
+      status: prep.excluded[k] ? 'excluded' : kept[k] ? 'kept' : 'rejected', residualRaCosDecArcsec: r0, residualDecArcsec: r1,
       sigmaRaCosDecArcsec: sg.sigmaRaCosDecArcsec, sigmaDecArcsec: sg.sigmaDecArcsec, chi2: chi[k],
     };
+    if (prep.excluded[k]) nExcluded++;
     if (!kept[k]) continue;
     nKept++;
     const w = prep.weights;
-    const a = ev.residuals[2 * k], b = ev.residuals[2 * k + 1];
+    const a = residuals[2 * k], b = residuals[2 * k + 1];
     chi2 += a * a * w[3 * k] + 2 * a * b * w[3 * k + 1] + b * b * w[3 * k + 2];
     const w0 = 1 / sg.sigmaRaCosDecArcsec ** 2, w1 = 1 / sg.sigmaDecArcsec ** 2;
     wSum += w0 + w1; wr2 += w0 * r0 * r0 + w1 * r1 * r1; r2 += r0 * r0 + r1 * r1;
@@ -397,7 +443,8 @@ function assemble(observations: readonly AstrometryObservation[], ctx: FitContex
     weightedRmsArcsec: Math.sqrt(wr2 / wSum),
     rmsArcsec: Math.sqrt(r2 / (2 * nKept)),
     kept: nKept,
-    rejected: n - nKept,
+    rejected: n - nKept - nExcluded,
+    excluded: nExcluded,
     unusable: observations.length - n,
     observations: out,
     iterations: ctx.iterations,

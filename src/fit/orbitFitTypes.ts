@@ -45,19 +45,29 @@ export interface OrbitFitOptions {
   relativity?: boolean;
   /** Planet positions; default a VSOP87B cache over the observations and the epoch. */
   ephemeris?: Ephemeris;
+  /**
+   * Indices into the observations of those left out of the fit: never used in it (not in χ²,
+   * the normal equations, the start or the arc's windows), never recovered, reported with
+   * status 'excluded' and their residuals at the solution (for the record). Default none.
+   */
+  exclude?: readonly number[];
 }
 
 /** One observation's outcome. */
 export interface ObservationFit {
-  /** 'kept' in the fit, 'rejected' as an outlier, 'unusable' (no TT for the time: before 1972 the readers give none). */
-  status: 'kept' | 'rejected' | 'unusable';
-  /** Observed − computed, α cos δ and δ, arcsec (NaN when unusable). */
+  /**
+   * 'kept' in the fit, 'rejected' as an outlier, 'excluded' by the caller (options.exclude),
+   * 'unusable' (no TT for the time: before 1972 the readers give none; an unusable observation
+   * the caller excluded stays 'unusable').
+   */
+  status: 'kept' | 'rejected' | 'excluded' | 'unusable';
+  /** Observed − computed, α cos δ and δ, arcsec (NaN when unusable, or excluded and its place could not be computed). */
   residualRaCosDecArcsec: number;
   residualDecArcsec: number;
   /** σ used (per-night factor included), arcsec. */
   sigmaRaCosDecArcsec: number;
   sigmaDecArcsec: number;
-  /** χ² of the 2-D residual against its own covariance (normalEquations.ts); NaN when unusable. */
+  /** χ² of the 2-D residual against its own covariance (normalEquations.ts; an excluded one's as left out); NaN when unusable. */
   chi2: number;
 }
 
@@ -82,12 +92,15 @@ export interface OrbitFit {
   /** Unweighted RMS over both coordinates of the kept observations, arcsec. */
   rmsArcsec: number;
   kept: number;
+  /** Outliers the fit set aside (never the excluded ones). */
   rejected: number;
+  /** Usable observations the caller excluded. */
+  excluded: number;
   unusable: number;
   observations: ObservationFit[];
   /** Gauss–Newton iterations (all windows and rejection rounds). */
   iterations: number;
-  /** Rejections and recoveries made on the way (an observation may be rejected, then recovered). */
+  /** Rejections and recoveries made on the way (an observation may be rejected, then recovered; an excluded one is neither). */
   rejections: number;
   recoveries: number;
   /** Condition number of the scaled normal matrix at the end. */

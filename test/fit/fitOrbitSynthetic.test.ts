@@ -235,3 +235,58 @@ describe('orbit fit failures carry their numbers', () => {
     expect(f.message).toMatch(/1 iterations, last χ² /);
   });
 });
+
+describe('orbit fit with excluded observations', () => {
+  // Three 20″ outliers (invented offsets) and one clean observation excluded by the caller. An
+  // excluded observation must take no part: the fit is the fit of the others alone (the same
+  // observations in the same order, so the same numbers to rounding), and it is reported as
+  // 'excluded' with its residual at that solution — the planted 20″ (within 5σ of the 0.3″
+  // noise, common practice), the clean one within 5σ of zero — never counted as rejected or
+  // recovered, even where its χ² is below χ²_rec.
+  const planted = [10, 20, 30];
+  const clean = 40;
+  const exclude = [...planted, clean];
+  const offset = (o: AstrometryObservation, k: number): AstrometryObservation => (planted.includes(k) ? { ...o, decRad: o.decRad + 20 * RAD_PER_ARCSEC } : o);
+
+  it('are left out of the fit, never recovered, and reported with their residuals', () => {
+    const obs = noisy.map(offset);
+    const start = { kind: 'state' as const, epochJdTDB: EPOCH, state: perturbedStart() };
+    const fit = fitOrbit(obs, sites, start, { sigmas: sigmas(obs.length), ephemeris: eph, exclude });
+    const others = obs.filter((_, k) => !exclude.includes(k));
+    const alone = fitOrbit(others, sites, start, { sigmas: sigmas(others.length), ephemeris: eph });
+    console.log(`excluded: residuals in δ ${exclude.map((k) => fit.observations[k].residualDecArcsec.toFixed(2)).join(', ')}″, χ² ${exclude.map((k) => fit.observations[k].chi2.toFixed(1)).join(', ')}; `
+      + `${fit.rejected} rejected, ${fit.rejections} rejections, ${fit.recoveries} recoveries; the others alone: ${alone.rejected} rejected`);
+    for (const k of exclude) expect(fit.observations[k].status).toBe('excluded');
+    expect(fit.excluded).toBe(exclude.length);
+    expect(fit.kept + fit.rejected + fit.excluded + fit.unusable).toBe(obs.length);
+    // The same fit as without them: kept, rejected, rejections, recoveries, χ² and state.
+    expect(fit.kept).toBe(alone.kept);
+    expect(fit.rejected).toBe(alone.rejected);
+    expect(fit.rejections).toBe(alone.rejections);
+    expect(fit.recoveries).toBe(alone.recoveries);
+    expect(fit.degreesOfFreedom).toBe(alone.degreesOfFreedom);
+    expect(Math.abs(fit.chi2 - alone.chi2)).toBeLessThan(1e-9 * alone.chi2);
+    for (let j = 0; j < 6; j++) expect(Math.abs(fit.state[j] - alone.state[j])).toBeLessThan(1e-12);
+    // Their residuals, for the record.
+    for (const k of planted) expect(Math.abs(fit.observations[k].residualDecArcsec - 20)).toBeLessThan(5 * NOISE_ARCSEC);
+    expect(Math.abs(fit.observations[clean].residualDecArcsec)).toBeLessThan(5 * NOISE_ARCSEC);
+    expect(Math.abs(fit.observations[clean].residualRaCosDecArcsec)).toBeLessThan(5 * NOISE_ARCSEC);
+    expect(fit.observations[clean].chi2).toBeLessThan(7); // below χ²_rec, and still not recovered
+    for (const k of planted) expect(fit.observations[k].chi2).toBeGreaterThan(1000);
+  });
+
+  it('refuses an index that is not one of the observations', () => {
+    const start = { kind: 'state' as const, epochJdTDB: EPOCH, state: perturbedStart() };
+    expect(() => fitOrbit(noisy, sites, start, { sigmas: sigmas(noisy.length), ephemeris: eph, exclude: [noisy.length] })).toThrow(RangeError);
+    expect(() => fitOrbit(noisy, sites, start, { sigmas: sigmas(noisy.length), ephemeris: eph, exclude: [1.5] })).toThrow(RangeError);
+  });
+
+  it('counts the excluded ones out of the observations needed', () => {
+    const few = noisy.slice(0, 5);
+    const start = { kind: 'state' as const, epochJdTDB: EPOCH, state: perturbedStart() };
+    const f = (() => { try { fitOrbit(few, sites, start, { sigmas: sigmas(5), ephemeris: eph, exclude: [0, 1, 2] }); } catch (e) { return e; } return null; })();
+    expect(f).toBeInstanceOf(OrbitFitError);
+    expect((f as OrbitFitError).reason).toBe('too-few-observations');
+    expect((f as OrbitFitError).message).toMatch(/2 usable observations \(3 more excluded\) for 6 unknowns/);
+  });
+});

@@ -1,9 +1,9 @@
 /**
  * The artefact guards on the preferred model's comparison residuals: residual means per
  * station, the runs test on the signs in time order (α cos δ and δ separately), and, for a
- * non-gravitational model, the leave-one-station-out refits (src/fit/models/). A refit drops
- * one station's observations and fits the same model again from the full solution, with
- * outlier rejection; the parameter watched is the model's one with the largest S/N. Only
+ * non-gravitational model, the leave-one-station-out refits (src/fit/models/). A refit excludes
+ * one station's observations (fitOrbit's `exclude`) and fits the same model again from the full
+ * solution, with outlier rejection; the parameter watched is the model's one with the largest S/N. Only
  * stations holding at least `stationMinShare` of the fitted observations are refitted (each
  * refit costs a whole fit; a station with a few observations cannot carry the signal alone).
  */
@@ -65,11 +65,10 @@ export async function runGuards(input: GuardsInput): Promise<CheckGuards> {
   const watched = p.params[k];
   const options = fitOptionsOf(p.model);
   const refit = (station: string) => {
-    const keep: number[] = [];
-    observations.forEach((o, i) => { if (o.station !== station) keep.push(i); });
-    input.onProgress?.(`leave-one-station-out: refitting ${p.id} without ${station} (${keep.length} observations)`);
-    const fit = fitOrbit(keep.map((i) => observations[i]), sites, startAt(p.fit),
-      { ...options, params: p.fit.params, sigmas: keep.map((i) => sigmas[i]), ephemeris });
+    const without: number[] = [];
+    observations.forEach((o, i) => { if (o.station === station) without.push(i); });
+    input.onProgress?.(`leave-one-station-out: refitting ${p.id} without ${station} (${observations.length - without.length} observations)`);
+    const fit = fitOrbit(observations, sites, startAt(p.fit), { ...options, params: p.fit.params, sigmas, ephemeris, exclude: without });
     const m = fit.columns.length;
     return { value: fit.params[FIT_PARAMETER_INDEX[watched.name as FitParameter]], sigma: Math.sqrt(fit.covariance[(6 + k) * m + 6 + k]) };
   };

@@ -7,15 +7,12 @@
  * model that explains the most observations says which ones are outliers. Every other model is
  * refitted to that set.
  *
- * A refit leaves the other observations out by giving them σ = LEFT_OUT_SIGMA_ARCSEC (weight
- * 10⁻¹² of a 1″ observation's), so that their residuals are still computed and reported; χ²
- * and the RMS are then summed over the set alone (setStatistics).
+ * A refit leaves the other observations out by excluding them (fitOrbit's `exclude`): they
+ * take no part in it and cannot be recovered, and their residuals are still computed and
+ * reported; χ² and the RMS are summed over the set alone (setStatistics).
  */
 import type { ObservationSigma } from '../observationWeights.js';
 import type { OrbitFit } from '../orbitFitTypes.js';
-
-/** σ that takes an observation out of a fit while its residual is still computed, arcsec. */
-export const LEFT_OUT_SIGMA_ARCSEC = 1e6;
 
 export const COMPARISON_SET_RULE =
   'every model fitted to the observations kept by the fit that rejected the fewest (ties: fewer parameters), the others left out';
@@ -41,10 +38,11 @@ export function keepsExactly(fit: OrbitFit, mask: readonly boolean[]): boolean {
   return fit.observations.every((o, i) => (o.status === 'kept') === mask[i]);
 }
 
-/** The σ of the observations, with those outside `mask` left out (see the file comment). */
-export function sigmasLeavingOut(sigmas: readonly ObservationSigma[], mask: readonly boolean[]): ObservationSigma[] {
-  if (sigmas.length !== mask.length) throw new RangeError(`sigmasLeavingOut: ${sigmas.length} σ for ${mask.length} observations`);
-  return sigmas.map((s, i) => (mask[i] ? s : { ...s, sigmaRaCosDecArcsec: LEFT_OUT_SIGMA_ARCSEC, sigmaDecArcsec: LEFT_OUT_SIGMA_ARCSEC, correlation: 0 }));
+/** Indices of the observations outside `mask`: fitOrbit's `exclude` for a refit on the set. */
+export function indicesOutside(mask: readonly boolean[]): number[] {
+  const out: number[] = [];
+  mask.forEach((inSet, i) => { if (!inSet) out.push(i); });
+  return out;
 }
 
 export interface SetStatistics {
@@ -56,8 +54,7 @@ export interface SetStatistics {
 }
 
 /**
- * χ² = Σ rᵀ Γ⁻¹ r over the set, Γ = [[σα², ρσασδ], [ρσασδ, σδ²]] from the assumed σ (not the
- * left-out ones); unweighted RMS √(Σ (rα² + rδ²) / 2n); weighted RMS √(Σ w r² / Σ w), w = 1/σ²
+ * χ² = Σ rᵀ Γ⁻¹ r over the set, Γ = [[σα², ρσασδ], [ρσασδ, σδ²]] from the assumed σ; unweighted RMS √(Σ (rα² + rδ²) / 2n); weighted RMS √(Σ w r² / Σ w), w = 1/σ²
  * per coordinate (as fitOrbit's weightedRmsArcsec).
  */
 export function setStatistics(fit: OrbitFit, sigmas: readonly ObservationSigma[], mask: readonly boolean[]): SetStatistics {

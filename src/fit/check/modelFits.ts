@@ -13,7 +13,7 @@ import type { ObservationSigma } from '../observationWeights.js';
 import { OrbitFitError, type OrbitFit, type OrbitFitStart } from '../orbitFitTypes.js';
 import type { FitParameter } from '../trajectoryPartials.js';
 import { NONGRAV_MODELS, type NongravModel, type NongravModelId } from '../models/index.js';
-import { comparisonSetSource, keepsExactly, keptMask, setStatistics, sigmasLeavingOut } from './comparisonSet.js';
+import { comparisonSetSource, indicesOutside, keepsExactly, keptMask, setStatistics } from './comparisonSet.js';
 import type { CheckModelFailure, CheckModelFit } from './types.js';
 
 export interface ModelFitsInput {
@@ -70,7 +70,7 @@ export function runModelFits(input: ModelFitsInput): ModelFits {
   retryFailures(input, own, failures, say);
   const source = comparisonSetSource(own);
   const inSet = keptMask(own[source].fit);
-  const setSigmas = sigmasLeavingOut(sigmas, inSet);
+  const outside = indicesOutside(inSet);
   const fits: CheckModelFit[] = [];
   for (const o of own) {
     const model = NONGRAV_MODELS[o.id];
@@ -78,7 +78,7 @@ export function runModelFits(input: ModelFitsInput): ModelFits {
     if (!keepsExactly(fit, inSet)) {
       say(`refitting ${o.id} on the comparison set`);
       try {
-        fit = fitOrbit(observations, sites, startAt(o.fit), { ...fitOptionsOf(model), params: o.fit.params, sigmas: setSigmas, ephemeris, reject: false });
+        fit = fitOrbit(observations, sites, startAt(o.fit), { ...fitOptionsOf(model), params: o.fit.params, sigmas, ephemeris, reject: false, exclude: outside });
       } catch (e) {
         if (!(e instanceof OrbitFitError)) throw e;
         if (o.id === 'gravity') throw e;

@@ -3,7 +3,7 @@
 // (common practice), RMS by hand.
 import { describe, expect, it } from 'vitest';
 import {
-  comparisonSetSource, keepsExactly, LEFT_OUT_SIGMA_ARCSEC, setStatistics, sigmasLeavingOut,
+  comparisonSetSource, indicesOutside, keepsExactly, setStatistics,
 } from '../../../src/fit/check/comparisonSet.js';
 import type { ObservationSigma } from '../../../src/fit/observationWeights.js';
 import type { OrbitFit } from '../../../src/fit/orbitFitTypes.js';
@@ -32,12 +32,9 @@ describe('comparison set', () => {
     expect(keepsExactly(c, [true, true, false])).toBe(false);
   });
 
-  it('leaves the other observations out by their σ only', () => {
-    const s = sigmasLeavingOut([sigma(0.2, 0.3, 0.5), sigma(1, 1)], [true, false]);
-    expect(s[0]).toEqual(sigma(0.2, 0.3, 0.5));
-    expect(s[1].sigmaRaCosDecArcsec).toBe(LEFT_OUT_SIGMA_ARCSEC);
-    expect(s[1].sigmaDecArcsec).toBe(LEFT_OUT_SIGMA_ARCSEC);
-    expect(s[1].correlation).toBe(0);
+  it('leaves out, by index, exactly the observations outside the set', () => {
+    expect(indicesOutside([true, false, true, false, false])).toEqual([1, 3, 4]);
+    expect(indicesOutside([true, true])).toEqual([]);
   });
 
   it('sums χ², RMS and weighted RMS over the set alone, with the assumed σ and correlation', () => {
