@@ -6,13 +6,15 @@
  * years from five real stations of test/fixtures/astrometry/observatory-codes.txt (their
  * published sites; the observations are not theirs), then runs the built CLI's `check` with
  * every model (gravity, thermal, comet, srp), outlier rejection and the leave-one-station-out
- * refits, as a child process under /usr/bin/time. Prints the wall and CPU time, peak RSS, the
- * times the CLI's progress lines carry (stderr), the number of fits, `uptime` before and after,
- * and whether the target (< 10 s on this 2-core machine) is met. Figures only: nothing here
- * asserts a time.
+ * refits, as a child process under /usr/bin/time, with --threads 1 and then --threads 2. Prints
+ * for each the wall and CPU time, peak RSS, the times the CLI's progress lines carry (stderr),
+ * the number of fits, `uptime` before and after; then the ratio of the two (wall, and up to
+ * "fits and guards done"), whether the two runs wrote byte-identical fit.json and
+ * residuals.csv, and whether the target (< 10 s on this 2-core machine) is met. Figures only:
+ * nothing here asserts a time.
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -60,6 +62,48 @@ if (!existsSync(CLI)) {
   if (!existsSync(CLI)) throw new Error(`build did not produce ${CLI}`);
 }
 
+interface CheckRunFigures {
+  threads: number;
+  ok: boolean;
+  out: string; // the output directory
+  wall: number; // s
+  fitsDone: number; // s since the command started, at 'fits and guards done' (NaN when absent)
+  text: string[]; // the lines to print
+}
+
+/** The built CLI's `check` on the bench files with `threads` threads, under /usr/bin/time when there is one. */
+function runCheckOnce(dir: string, threads: number): CheckRunFigures {
+  const out = join(dir, `out-${threads}`);
+  const before = uptime();
+  const args = [CLI, 'check', DESIGNATION, '--obs', join(dir, 'bench.obs80.txt'), '--obscodes', join(ROOT, 'test/fixtures/astrometry/observatory-codes.txt'),
+    '--elements', join(dir, 'bench-elements.txt'), '--not-after', '2100-01-01', '--threads', String(threads), '--out', out];
+  const useTime = existsSync('/usr/bin/time');
+  const [cmd, argv] = useTime ? ['/usr/bin/time', ['-f', 'maxrss-kb=%M cpu-user=%U cpu-sys=%S', process.execPath, ...args]] : [process.execPath, args];
+  const t0 = process.hrtime.bigint();
+  const r = spawnSync(cmd, argv, { cwd: ROOT, encoding: 'utf8', maxBuffer: 1 << 26 });
+  const wall = seconds(t0);
+  const after = uptime();
+  const stderr = r.stderr ?? '';
+  const m = /maxrss-kb=(\d+) cpu-user=([\d.]+) cpu-sys=([\d.]+)/.exec(stderr);
+  const progress = stderr.split('\n').filter((l) => l.startsWith('wayward check ['));
+  const done = progress.map((l) => /^wayward check \[([\d.]+) s\]: fits and guards done/.exec(l)).find((x) => x !== null);
+  const text = [`--threads ${threads}:`, `  uptime before: ${before}`, `  uptime after:  ${after}`];
+  if (r.status !== 0) {
+    text.push(`  check FAILED (exit ${r.status}) after ${wall.toFixed(2)} s:`, stderr);
+    return { threads, ok: false, out, wall, fitsDone: NaN, text };
+  }
+  const fits = progress.filter((l) => /: (fitting|refitting|leave-one-station-out: refitting)/.test(l)).length;
+  text.push(`  wall ${wall.toFixed(2)} s, CPU ${m ? (Number(m[2]) + Number(m[3])).toFixed(2) : '?'} s (user+sys, all threads), peak RSS ${m ? (Number(m[1]) / 1024).toFixed(0) : '?'} MB`);
+  text.push(`  fits started: ${fits} (each with its own integrations and iterations)`);
+  text.push('  progress (stderr, seconds since the command started):', ...progress.map((l) => `    ${l}`));
+  if (threads === 1) text.push(r.stdout.split('\n').slice(0, 12).map((l) => `  | ${l}`).join('\n'));
+  return { threads, ok: true, out, wall, fitsDone: done ? Number(done[1]) : NaN, text };
+}
+
+function printRun(r: CheckRunFigures): void {
+  for (const l of r.text) console.log(l);
+}
+
 const dir = mkdtempSync(join(tmpdir(), 'wayward-bench-check-'));
 try {
   const table = await readObservatoryCodes(join(ROOT, 'test/fixtures/astrometry/observatory-codes.txt'));
@@ -86,31 +130,22 @@ try {
   writeSyntheticFiles({ dir, name: 'bench', format: 'obs80', elementsLine: el.line, observations: made.observations });
   console.log(`check benchmark: ${made.observations.length} observations (${made.shortBy} short) over ${years} years from ${STATIONS.map((s) => s[0]).join(', ')}, ${made.apparitions} apparitions; made in ${seconds(tGen).toFixed(1)} s in ${dir}`);
 
-  const before = uptime();
-  const args = [CLI, 'check', DESIGNATION, '--obs', join(dir, 'bench.obs80.txt'), '--obscodes', join(ROOT, 'test/fixtures/astrometry/observatory-codes.txt'),
-    '--elements', join(dir, 'bench-elements.txt'), '--not-after', '2100-01-01', '--out', join(dir, 'out')];
-  const useTime = existsSync('/usr/bin/time');
-  const [cmd, argv] = useTime ? ['/usr/bin/time', ['-f', 'maxrss-kb=%M cpu-user=%U cpu-sys=%S', process.execPath, ...args]] : [process.execPath, args];
-  const t0 = process.hrtime.bigint();
-  const r = spawnSync(cmd, argv, { cwd: ROOT, encoding: 'utf8', maxBuffer: 1 << 26 });
-  const wall = seconds(t0);
-  const after = uptime();
-  const stderr = r.stderr ?? '';
-  const m = /maxrss-kb=(\d+) cpu-user=([\d.]+) cpu-sys=([\d.]+)/.exec(stderr);
-  const progress = stderr.split('\n').filter((l) => l.startsWith('wayward check ['));
-  console.log(`uptime before: ${before}`);
-  console.log(`uptime after:  ${after}`);
-  if (r.status !== 0) {
-    console.log(`check FAILED (exit ${r.status}) after ${wall.toFixed(2)} s:\n${stderr}`);
-    process.exitCode = 1;
+  const runs = [1, 2].map((threads) => {
+    const r = runCheckOnce(dir, threads);
+    printRun(r);
+    return r;
+  });
+  const [one, two] = runs;
+  if (one.ok && two.ok) {
+    const same = ['fit.json', 'residuals.csv'].every((f) => readFileSync(join(one.out, f)).equals(readFileSync(join(two.out, f))));
+    console.log(`1 thread / 2 threads: wall ${(one.wall / two.wall).toFixed(2)}× (${one.wall.toFixed(2)} s / ${two.wall.toFixed(2)} s), `
+      + `fits and guards ${(one.fitsDone / two.fitsDone).toFixed(2)}× (${one.fitsDone.toFixed(1)} s / ${two.fitsDone.toFixed(1)} s by the progress lines); `
+      + `fit.json and residuals.csv ${same ? 'byte-identical' : 'DIFFER'}`);
+    console.log(`target < ${TARGET_SECONDS} s: 1 thread ${one.wall < TARGET_SECONDS ? 'met' : 'NOT met'} (${one.wall.toFixed(2)} s), `
+      + `2 threads ${two.wall < TARGET_SECONDS ? 'met' : 'NOT met'} (${two.wall.toFixed(2)} s)`);
+    if (!same) process.exitCode = 1;
   } else {
-    const fits = progress.filter((l) => /: (fitting|refitting|leave-one-station-out: refitting)/.test(l)).length;
-    console.log(`wall ${wall.toFixed(2)} s, CPU ${m ? (Number(m[2]) + Number(m[3])).toFixed(2) : '?'} s (user+sys), peak RSS ${m ? (Number(m[1]) / 1024).toFixed(0) : '?'} MB`);
-    console.log(`fits started: ${fits} (each with its own integrations and iterations)`);
-    console.log('progress (stderr, seconds since the command started):');
-    for (const l of progress) console.log(`  ${l}`);
-    console.log(r.stdout.split('\n').slice(0, 12).map((l) => `  | ${l}`).join('\n'));
-    console.log(`target < ${TARGET_SECONDS} s: ${wall < TARGET_SECONDS ? 'met' : 'NOT met'} (${wall.toFixed(2)} s)`);
+    process.exitCode = 1;
   }
 } finally {
   if (keep) console.log(`kept ${dir}`);

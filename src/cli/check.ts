@@ -21,10 +21,14 @@ import { OutputStage } from '../report/outputStage.js';
 import { Instant } from '../core/time/time.js';
 import { CheckInputError, endOfUtcDayJd, readCheckInputs } from './checkInputs.js';
 import { withDefault } from './optionDefault.js';
+import { parsePositiveInteger } from './optionParsers.js';
 
 export const CHECK_MODELS_DEFAULT = 'gravity,thermal,comet,srp';
 /** Stations refitted in the leave-one-station-out test hold at least this share of the observations (our choice: keeps the refits few). */
 export const STATION_MIN_SHARE_DEFAULT = 0.05;
+
+/** Threads by default: the two cores of the reference machine, as scan's --threads. */
+export const CHECK_THREADS_DEFAULT = 2;
 
 /** Records set aside shown on stderr; the rest are counted there and listed in the outputs. */
 const STDERR_SET_ASIDE_LINES = 20;
@@ -38,6 +42,8 @@ export interface CheckCliOptions {
   stationMinShare: number;
   /** Observations after this JD (UTC) are set aside; default the end of the run's UTC day. */
   notAfter?: number;
+  /** Threads for the fits after gravity only (outputs identical for any number); default 1 here, CHECK_THREADS_DEFAULT from the command line. */
+  threads?: number;
 }
 
 /** `--models a,b,…`: known ids, each once; gravity is always fitted and may be named. */
@@ -87,7 +93,7 @@ export async function runCheckCommand(designation: string, opts: CheckCliOptions
     let result: CheckResult;
     try {
       result = await runCheck(designation, inputs.observations, inputs.table.sites, {
-        models: opts.models, start: inputs.start, absMagH: a.absMagH, stationMinShare: opts.stationMinShare, onProgress: say,
+        models: opts.models, start: inputs.start, absMagH: a.absMagH, stationMinShare: opts.stationMinShare, threads: opts.threads ?? 1, onProgress: say,
       });
     } catch (e) {
       if (e instanceof OrbitFitError) throw new CheckInputError(`the gravity-only orbit fit of ${designation} failed: ${e.message}`);
@@ -134,6 +140,8 @@ export function registerCheck(program: Command): void {
     .option('--elements <file>', "orbit dump holding the body's row: the fit's start and its H (default: Gauss's method, H unknown)")
     .addOption(withDefault('--models <list>', 'models fitted besides gravity only (gravity, thermal, comet, srp)', parseModelList(CHECK_MODELS_DEFAULT), CHECK_MODELS_DEFAULT, parseModelList))
     .addOption(withDefault('--station-min-share <f>', 'leave-one-station-out: refit without the stations holding at least this share of the observations', STATION_MIN_SHARE_DEFAULT, String(STATION_MIN_SHARE_DEFAULT), parseShare))
+    .addOption(withDefault('--threads <n>', 'worker threads for the model fits and the leave-one-station-out refits (outputs identical for any number)',
+      CHECK_THREADS_DEFAULT, String(CHECK_THREADS_DEFAULT), parsePositiveInteger))
     .option('--not-after <date>', 'set aside observations dated after this (ISO date, UTC; default: the end of today)', parseNotAfter)
     .option('-o, --out <dir>', 'write fit.json, residuals.csv and plots/ here')
     .action(async (designation: string, flags: CheckCliOptions) => {

@@ -131,3 +131,23 @@ export class OrbitFitError extends Error {
 function formatNumber(x: number): string {
   return Number.isFinite(x) ? x.toPrecision(4) : String(x);
 }
+
+/** An OrbitFitError's fields, as they cross a thread boundary (structured clone keeps no class). */
+export interface OrbitFitErrorRecord {
+  reason: OrbitFitFailure;
+  message: string;
+  iterations: number;
+  lastChi2: number;
+  condition: number;
+}
+
+export function orbitFitErrorRecord(e: OrbitFitError): OrbitFitErrorRecord {
+  return { reason: e.reason, message: e.message, iterations: e.iterations, lastChi2: e.lastChi2, condition: e.condition };
+}
+
+/** The OrbitFitError of a record, with the message it had. */
+export function rebuildOrbitFitError(r: OrbitFitErrorRecord): OrbitFitError {
+  const e = new OrbitFitError(r.reason, '', r.iterations, r.lastChi2, r.condition);
+  e.message = r.message;
+  return e;
+}

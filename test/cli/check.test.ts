@@ -5,6 +5,8 @@
  *   must prefer srp, recover the planted value within 3σ and call the body artificial-like, from
  *   the 80-column and the ADES PSV file alike. The demo's dates run to 2032, so --not-after
  *   moves the latest accepted date past them.
+ * The PSV run is repeated on one thread (the others run on the default two): the leave-one-station-out
+ * refits then run here instead of on worker threads, and every output must be byte-identical.
  * The real astrometry and the bad-input cases: checkReal.test.ts, checkBadInput.test.ts.
  */
 import { existsSync, readFileSync } from 'node:fs';
@@ -18,12 +20,14 @@ const PLANTED_CR_AM = 0.039; // C_R · A/m, m²/kg (data/demo/check/README.md)
 describe('check on the demo body (synthetic: radiation pressure planted)', () => {
   const out80 = tempDir('wayward-check-80-');
   const outPsv = tempDir('wayward-check-psv-');
-  let run80: CliRun, runPsv: CliRun;
+  const outPsv1 = tempDir('wayward-check-psv-1-');
+  let run80: CliRun, runPsv: CliRun, runPsv1: CliRun;
   beforeAll(() => {
     const common = ['--obscodes', CODES, '--elements', `${DEMO}/check-body-elements.txt`, '--not-after', '2033-01-01'];
     run80 = runCli(['check', '2030 QW12', '--obs', `${DEMO}/check-body.obs80.txt`, ...common, '--out', out80]);
     // The PSV file with srp alone: the same verdict, at half the run time.
     runPsv = runCli(['check', '2030 QW12', '--obs', `${DEMO}/check-body.psv`, ...common, '--models', 'srp', '--out', outPsv]);
+    runPsv1 = runCli(['check', '2030 QW12', '--obs', `${DEMO}/check-body.psv`, ...common, '--models', 'srp', '--threads', '1', '--out', outPsv1]);
   }, 600_000);
 
   it('prefers srp and recovers the planted C_R·A/m within 3σ, from either format', () => {
@@ -69,6 +73,15 @@ describe('check on the demo body (synthetic: radiation pressure planted)', () =>
     for (const line of planted) expect(rejected).toContain(line);
     for (const m of ['gravity', 'thermal', 'comet', 'srp']) {
       for (const ext of ['svg', 'png']) expect(existsSync(join(out80, 'plots', `residuals-${m}.${ext}`))).toBe(true);
+    }
+  });
+
+  it('writes byte-identical outputs on one thread and on two', () => {
+    expect(runPsv1.status, runPsv1.stderr).toBe(0);
+    expect(fitJson(outPsv).guards.leaveOneStationOut?.drops.length).toBe(4);
+    expect(runPsv1.stdout.replaceAll(outPsv1, outPsv)).toBe(runPsv.stdout);
+    for (const f of ['fit.json', 'residuals.csv', 'plots/residuals-gravity.svg', 'plots/residuals-srp.svg', 'plots/residuals-srp.png']) {
+      expect(readFileSync(join(outPsv1, f)).equals(readFileSync(join(outPsv, f))), f).toBe(true);
     }
   });
 });

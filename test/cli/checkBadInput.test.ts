@@ -77,5 +77,10 @@ describe('check: records set aside and bad input', () => {
     expect(runCli(['check', '(12893)', '--obs', SAMPLE, '--models', 'srp,srp']).status).toBe(2);
     expect(runCli(['check', '(12893)', '--obs', SAMPLE, '--station-min-share', '1.5']).status).toBe(2);
     expect(runCli(['check', '(12893)', '--obs', SAMPLE, '--not-after', 'soon']).status).toBe(2);
+    for (const n of ['0', '1.5', 'two']) {
+      const threads = runCli(['check', '(12893)', '--obs', SAMPLE, '--threads', n]);
+      expect(threads.status, n).toBe(2);
+      expect(threads.stderr).toContain(`'${n}' is not a positive integer`);
+    }
   });
 });

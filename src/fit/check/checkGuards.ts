@@ -9,10 +9,10 @@
  */
 import type { Ephemeris } from '../../core/types.js';
 import type { AstrometryObservation, ObservatorySite } from '../../io/astrometry/types.js';
-import { fitOrbit } from '../fitOrbit.js';
 import type { ObservationSigma } from '../observationWeights.js';
 import { FIT_PARAMETER_INDEX, type FitParameter } from '../trajectoryPartials.js';
 import { leaveOneStationOut, runsTest, stationMeans } from '../models/index.js';
+import { fitHere, type CheckFitter, type FitRequest } from './checkFitter.js';
 import { fitOptionsOf, startAt } from './modelFits.js';
 import type { CheckGuards, CheckModelFit } from './types.js';
 
@@ -24,6 +24,8 @@ export interface GuardsInput {
   ephemeris: Ephemeris | undefined;
   stationMinShare: number;
   onProgress?: (message: string) => void;
+  /** Where the leave-one-station-out refits run (checkFitter.ts); default here, one after another. */
+  fitter?: CheckFitter;
 }
 
 /** Indices of the kept observations in time order (ties: input order). */
@@ -64,13 +66,20 @@ export async function runGuards(input: GuardsInput): Promise<CheckGuards> {
   const k = p.params.reduce((best, q, j) => (Math.abs(q.value) / q.sigma > Math.abs(p.params[best].value) / p.params[best].sigma ? j : best), 0);
   const watched = p.params[k];
   const options = fitOptionsOf(p.model);
-  const refit = (station: string) => {
+  // The refits are independent: asked for at once (on the fitter's threads), judged in order.
+  const requests: FitRequest[] = drop.map((station) => {
     const without: number[] = [];
     observations.forEach((o, i) => { if (o.station === station) without.push(i); });
     input.onProgress?.(`leave-one-station-out: refitting ${p.id} without ${station} (${observations.length - without.length} observations)`);
-    const fit = fitOrbit(observations, sites, startAt(p.fit), { ...options, params: p.fit.params, sigmas, ephemeris, exclude: without });
-    const m = fit.columns.length;
-    return { value: fit.params[FIT_PARAMETER_INDEX[watched.name as FitParameter]], sigma: Math.sqrt(fit.covariance[(6 + k) * m + 6 + k]) };
+    return { start: startAt(p.fit), options: { ...options, params: p.fit.params, exclude: without } };
+  });
+  const inputs = { observations, sites, sigmas, ephemeris };
+  const outcomes = input.fitter === undefined ? requests.map((r) => fitHere(inputs, r)) : await input.fitter.fitAll(requests);
+  const refit = (station: string) => {
+    const o = outcomes[drop.indexOf(station)];
+    if (o.error !== undefined) throw o.error;
+    const m = o.fit.columns.length;
+    return { value: o.fit.params[FIT_PARAMETER_INDEX[watched.name as FitParameter]], sigma: Math.sqrt(o.fit.covariance[(6 + k) * m + 6 + k]) };
   };
   const loso = await leaveOneStationOut(drop, { value: watched.value, sigma: watched.sigma }, refit);
   return { model: p.id, stationMeans: means, runsRaCosDec, runsDec, leaveOneStationOut: loso, watchedParameter: watched.name, stationsNotRefitted: small };

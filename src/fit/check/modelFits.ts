@@ -4,23 +4,19 @@
  * every fit with outlier rejection; then the comparison set (comparisonSet.ts) and every model
  * not already on it refitted there, without rejection, from its own solution. A model whose
  * fit fails is listed as failed and left out of the comparison; a failed gravity-only fit
- * fails the run (OrbitFitError, with its numbers).
+ * fails the run (OrbitFitError, with its numbers). The fits are asked for in batches of
+ * independent ones (checkFitter.ts): here one after another, or on worker threads, with the same
+ * result.
  */
-import type { Ephemeris } from '../../core/types.js';
-import type { AstrometryObservation, ObservatorySite } from '../../io/astrometry/types.js';
-import { fitOrbit } from '../fitOrbit.js';
 import type { ObservationSigma } from '../observationWeights.js';
-import { OrbitFitError, type OrbitFit, type OrbitFitStart } from '../orbitFitTypes.js';
+import type { OrbitFit, OrbitFitStart } from '../orbitFitTypes.js';
 import type { FitParameter } from '../trajectoryPartials.js';
 import { NONGRAV_MODELS, type NongravModel, type NongravModelId } from '../models/index.js';
+import { runStepsHere, runStepsOn, type CheckFitInputs, type CheckFitter, type FitSteps } from './checkFitter.js';
 import { comparisonSetSource, indicesOutside, keepsExactly, keptMask, setStatistics } from './comparisonSet.js';
 import type { CheckModelFailure, CheckModelFit } from './types.js';
 
-export interface ModelFitsInput {
-  observations: readonly AstrometryObservation[];
-  sites: ReadonlyMap<string, ObservatorySite>;
-  sigmas: readonly ObservationSigma[];
-  ephemeris: Ephemeris | undefined;
+export interface ModelFitsInput extends CheckFitInputs {
   start: OrbitFitStart;
   models: readonly Exclude<NongravModelId, 'gravity'>[];
   onProgress?: (message: string) => void;
@@ -44,49 +40,60 @@ export function startAt(fit: OrbitFit): OrbitFitStart {
   return { kind: 'state', epochJdTDB: fit.epochJdTDB, state: fit.state };
 }
 
-/** Runs the fits (see the file comment). */
+/** Runs the fits (see the file comment), every one on this thread. */
 export function runModelFits(input: ModelFitsInput): ModelFits {
-  const { observations, sites, sigmas, ephemeris } = input;
+  return runStepsHere(modelFitSteps(input), input);
+}
+
+/** The same fits, each batch of independent ones on `fitter` (the same result for any number of threads). */
+export function runModelFitsOn(input: ModelFitsInput, fitter: CheckFitter): Promise<ModelFits> {
+  return runStepsOn(modelFitSteps(input), fitter);
+}
+
+type Own = { id: NongravModelId; fit: OrbitFit; nParams: number };
+
+/** The fits as batches: gravity only; the models; the retries; the refits on the comparison set. */
+function* modelFitSteps(input: ModelFitsInput): FitSteps<ModelFits> {
   const say = input.onProgress ?? (() => undefined);
-  const own: { id: NongravModelId; fit: OrbitFit; nParams: number }[] = [];
+  const own: Own[] = [];
   const failures: CheckModelFailure[] = [];
-  say(`fitting gravity only (${observations.length} observations)`);
-  const gravity = fitOrbit(observations, sites, input.start, { sigmas, ephemeris });
+  say(`fitting gravity only (${input.observations.length} observations)`);
+  const [g] = yield [{ start: input.start, options: {} }];
+  if (g.error !== undefined) throw g.error;
+  const gravity = g.fit;
   say(`gravity only: χ² ${gravity.chi2.toFixed(1)}, ${gravity.kept} kept, ${gravity.rejected} rejected`);
   own.push({ id: 'gravity', fit: gravity, nParams: 6 });
-  for (const id of input.models) {
-    const model = NONGRAV_MODELS[id];
-    say(`fitting ${id} (${model.params.map((p) => p.name).join(', ')})`);
-    try {
-      const fit = fitOrbit(observations, sites, startAt(gravity), { ...fitOptionsOf(model), sigmas, ephemeris });
-      say(`${id}: χ² ${fit.chi2.toFixed(1)}, ${fit.kept} kept, ${fit.rejected} rejected`);
-      own.push({ id, fit, nParams: 6 + model.params.length });
-    } catch (e) {
-      if (!(e instanceof OrbitFitError)) throw e;
-      failures.push({ id, message: e.message });
-      say(`${id}: ${e.message}`);
+  for (const id of input.models) say(`fitting ${id} (${NONGRAV_MODELS[id].params.map((p) => p.name).join(', ')})`);
+  const outcomes = yield input.models.map((id) => ({ start: startAt(gravity), options: fitOptionsOf(NONGRAV_MODELS[id]) }));
+  input.models.forEach((id, k) => {
+    const o = outcomes[k];
+    if (o.error !== undefined) {
+      failures.push({ id, message: o.error.message });
+      say(`${id}: ${o.error.message}`);
+      return;
     }
-  }
-  retryFailures(input, own, failures, say);
+    say(`${id}: χ² ${o.fit.chi2.toFixed(1)}, ${o.fit.kept} kept, ${o.fit.rejected} rejected`);
+    own.push({ id, fit: o.fit, nParams: 6 + NONGRAV_MODELS[id].params.length });
+  });
+  yield* retryFailures(input, own, failures, say);
   const source = comparisonSetSource(own);
   const inSet = keptMask(own[source].fit);
-  const outside = indicesOutside(inSet);
+  const exclude = indicesOutside(inSet);
+  const refit = own.filter((o) => !keepsExactly(o.fit, inSet));
+  for (const o of refit) say(`refitting ${o.id} on the comparison set`);
+  const refits = yield refit.map((o) => ({
+    start: startAt(o.fit), options: { ...fitOptionsOf(NONGRAV_MODELS[o.id]), params: o.fit.params, reject: false as const, exclude },
+  }));
   const fits: CheckModelFit[] = [];
   for (const o of own) {
-    const model = NONGRAV_MODELS[o.id];
-    let fit = o.fit;
-    if (!keepsExactly(fit, inSet)) {
-      say(`refitting ${o.id} on the comparison set`);
-      try {
-        fit = fitOrbit(observations, sites, startAt(o.fit), { ...fitOptionsOf(model), params: o.fit.params, sigmas, ephemeris, reject: false, exclude: outside });
-      } catch (e) {
-        if (!(e instanceof OrbitFitError)) throw e;
-        if (o.id === 'gravity') throw e;
-        failures.push({ id: o.id, message: `on the comparison set: ${e.message}` });
-        continue;
-      }
+    const k = refit.indexOf(o);
+    const r = k < 0 ? { fit: o.fit } : refits[k];
+    if (r.error !== undefined) {
+      if (o.id === 'gravity') throw r.error;
+      failures.push({ id: o.id, message: `on the comparison set: ${r.error.message}` });
+      continue;
     }
-    fits.push(summarise(o.id, model, fit, o.fit.rejected, sigmas, inSet));
+    fits.push(summarise(o.id, NONGRAV_MODELS[o.id], r.fit, o.fit.rejected, input.sigmas, inSet));
   }
   return { fits, failures, comparisonSetFrom: own[source].id, inSet };
 }
@@ -96,24 +103,23 @@ export function runModelFits(input: ModelFitsInput): ModelFits {
  * observations a non-gravitational force moved) is tried once more from the state of the fit
  * that rejected the fewest, its own parameters from 0; the failure stays listed when that fails too.
  */
-function retryFailures(input: ModelFitsInput, own: { id: NongravModelId; fit: OrbitFit; nParams: number }[],
-  failures: CheckModelFailure[], say: (message: string) => void): void {
+function* retryFailures(input: ModelFitsInput, own: Own[], failures: CheckModelFailure[], say: (message: string) => void): FitSteps<void> {
   const best = own[comparisonSetSource(own)];
-  if (best.id === 'gravity') return;
-  for (const failed of [...failures]) {
-    const model = NONGRAV_MODELS[failed.id];
-    say(`fitting ${failed.id} again, from the ${best.id} solution`);
-    try {
-      const fit = fitOrbit(input.observations, input.sites, startAt(best.fit), { ...fitOptionsOf(model), sigmas: input.sigmas, ephemeris: input.ephemeris });
-      say(`${failed.id}: χ² ${fit.chi2.toFixed(1)}, ${fit.kept} kept, ${fit.rejected} rejected`);
-      own.push({ id: failed.id, fit, nParams: 6 + model.params.length });
-      failures.splice(failures.indexOf(failed), 1);
-    } catch (e) {
-      if (!(e instanceof OrbitFitError)) throw e;
-      failed.message = `from the gravity-only solution and from the ${best.id} solution: ${e.message}`;
-      say(`${failed.id}: ${e.message}`);
+  if (best.id === 'gravity' || failures.length === 0) return;
+  const failed = [...failures];
+  for (const f of failed) say(`fitting ${f.id} again, from the ${best.id} solution`);
+  const outcomes = yield failed.map((f) => ({ start: startAt(best.fit), options: fitOptionsOf(NONGRAV_MODELS[f.id]) }));
+  failed.forEach((f, k) => {
+    const o = outcomes[k];
+    if (o.error !== undefined) {
+      f.message = `from the gravity-only solution and from the ${best.id} solution: ${o.error.message}`;
+      say(`${f.id}: ${o.error.message}`);
+      return;
     }
-  }
+    say(`${f.id}: χ² ${o.fit.chi2.toFixed(1)}, ${o.fit.kept} kept, ${o.fit.rejected} rejected`);
+    own.push({ id: f.id, fit: o.fit, nParams: 6 + NONGRAV_MODELS[f.id].params.length });
+    failures.splice(failures.indexOf(f), 1);
+  });
   // Keep the order the models were asked for.
   const order = ['gravity', ...input.models];
   own.sort((a, b) => order.indexOf(a.id) - order.indexOf(b.id));

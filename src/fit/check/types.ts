@@ -22,6 +22,11 @@ export interface CheckOptions {
   stationMinShare: number;
   /** A model other than gravity may be preferred only below this p-value (compareModels' default when absent). */
   pValueThreshold?: number;
+  /**
+   * Threads for the fits after gravity only (models, comparison refits, leave-one-station-out
+   * refits): an integer ≥ 1; the result is the same for any number. Default 1 (this thread).
+   */
+  threads?: number;
   /** Told what is being fitted, one line at a time (the CLI shows it on stderr). */
   onProgress?: (message: string) => void;
 }

@@ -3,11 +3,14 @@
 // Over these three years gravity only rejects half the places the push moved, and the thermal
 // model started from that solution fails; it is tried again from the srp solution (measured:
 // that fails too, so it is listed with both failures and left out). Every model compared ends
-// on the same observations, the srp fit's kept set.
+// on the same observations, the srp fit's kept set. The same fits with their batches on two
+// worker threads (checkFitter.ts) must give the same numbers, bit for bit, and the same failures
+// with the same messages (an OrbitFitError crosses the thread boundary as its fields).
 import { fileURLToPath } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { planetaryEphemerisOver } from '../../../src/core/propagate/propagateOrbit.js';
-import { runModelFits, type ModelFits } from '../../../src/fit/check/modelFits.js';
+import { startCheckFitter } from '../../../src/fit/check/checkFitter.js';
+import { runModelFits, runModelFitsOn, type ModelFits, type ModelFitsInput } from '../../../src/fit/check/modelFits.js';
 import { jdTTToTDB } from '../../../src/fit/observerPosition.js';
 import { observationSigmas } from '../../../src/fit/observationWeights.js';
 import { checkStations, readAstrometryFile, readObservatoryCodes } from '../../../src/io/astrometry/index.js';
@@ -20,6 +23,7 @@ const RAD = Math.PI / 180;
 const LAST_JD_UTC = 2461378.5; // 2026 December 4.0 UTC: the first 164 of the 480
 
 let mf: ModelFits;
+let input: ModelFitsInput;
 const said: string[] = [];
 
 beforeAll(async () => {
@@ -34,11 +38,12 @@ beforeAll(async () => {
     meanAnomalyRad: r.meanAnomalyDeg * RAD, epochJdTDB: jdTTToTDB(r.epochJdTT),
   };
   const times = observations.map((o) => o.timeJdTT);
-  mf = runModelFits({
+  input = {
     observations, sites: table.sites, sigmas: observationSigmas(observations, table.sites),
     ephemeris: planetaryEphemerisOver(Math.min(...times) - 2, elements.epochJdTDB + 2),
     start: { kind: 'elements', elements }, models: ['thermal', 'srp'], onProgress: (m) => said.push(m),
-  });
+  };
+  mf = runModelFits(input);
 }, 300_000);
 
 describe('runModelFits', () => {
@@ -63,4 +68,18 @@ describe('runModelFits', () => {
     expect(srp.chi2).toBeCloseTo(srp.fit.chi2, 6);
     expect(srp.ownRejected).toBe(srp.rejected);
   });
+
+  it('gives the same fits, bit for bit, with its batches on two worker threads', async () => {
+    // Typed arrays as plain arrays and NaN spelled out, so that the text compares every number exactly.
+    const text = (x: ModelFits) => JSON.stringify(x, (_, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array, String) : typeof v === 'number' ? String(v) : v));
+    const fitter = startCheckFitter(input, 2);
+    expect(fitter.threads).toBe(2);
+    try {
+      const two = await runModelFitsOn({ ...input, onProgress: undefined }, fitter);
+      expect(two.failures).toEqual(mf.failures);
+      expect(text(two)).toBe(text(mf));
+    } finally {
+      await fitter.close();
+    }
+  }, 300_000);
 });

@@ -1,0 +1,188 @@
+/**
+ * Where `check`'s orbit fits run. Every fit of a check is fitOrbit on the same observations,
+ * σ and planets; only the start and a few options differ (a FitRequest). The computation asks
+ * for them in batches of fits that do not depend on each other (the models from the gravity
+ * solution, the refits on the comparison set, the leave-one-station-out refits) and gets the
+ * outcomes back in request order, so what it does with them does not depend on where they ran.
+ *
+ * Here (one thread): one after another on this thread. On worker threads (checkFitWorker.ts):
+ * `threads` workers started at once with the observations, σ and the planets' cache options,
+ * so that they load while this thread fits gravity only; each is sent, before its first fit,
+ * the planets' Chebyshev tables this thread has filled by then (under 1 MB for 20 years), and
+ * fills any other segment itself, to the same coefficients (EphemerisCache: a segment's
+ * coefficients do not depend on the order or way of filling). A batch of one fit runs here:
+ * nothing would run beside it. Fits give the same numbers on any thread, so the outputs are
+ * the same for any number of threads.
+ */
+import type { Worker } from 'node:worker_threads';
+import { EphemerisCache, type EphemerisCacheOptions } from '../../core/ephemeris/ephemerisCache.js';
+import { EPHEMERIS_BODIES } from '../../core/ephemeris/ephemerisBody.js';
+import type { CacheBodyTable } from '../../core/ephemeris/ephemerisCacheTable.js';
+import { startSiblingWorker } from '../../core/moduleWorker.js';
+import type { WorkerReply } from '../../core/workerPool.js';
+import type { Ephemeris } from '../../core/types.js';
+import type { AstrometryObservation, ObservatorySite } from '../../io/astrometry/types.js';
+import { fitOrbit } from '../fitOrbit.js';
+import type { ObservationSigma } from '../observationWeights.js';
+import { OrbitFitError, rebuildOrbitFitError, type OrbitFit, type OrbitFitErrorRecord, type OrbitFitOptions, type OrbitFitStart } from '../orbitFitTypes.js';
+
+/** What every fit of one check shares. */
+export interface CheckFitInputs {
+  observations: readonly AstrometryObservation[];
+  sites: ReadonlyMap<string, ObservatorySite>;
+  sigmas: readonly ObservationSigma[];
+  ephemeris: Ephemeris | undefined;
+}
+
+/** One fit: fitOrbit on the shared inputs from `start` with `options`. */
+export interface FitRequest {
+  start: OrbitFitStart;
+  options: Pick<OrbitFitOptions, 'solveFor' | 'law' | 'params' | 'reject' | 'exclude'>;
+}
+
+/** A fit's outcome: the orbit, or why there is none. */
+export type FitOutcome = { fit: OrbitFit; error?: undefined } | { fit?: undefined; error: OrbitFitError };
+
+/** The same outcome as a worker sends it (an OrbitFitError as its fields). */
+export type FitOutcomeRecord = { fit: OrbitFit; error?: undefined } | { fit?: undefined; error: OrbitFitErrorRecord };
+
+/** Runs one request on this thread; errors other than OrbitFitError are thrown. */
+export function fitHere(inputs: CheckFitInputs, request: FitRequest): FitOutcome {
+  try {
+    return { fit: fitOrbit(inputs.observations, inputs.sites, request.start, { ...request.options, sigmas: inputs.sigmas, ephemeris: inputs.ephemeris }) };
+  } catch (e) {
+    if (e instanceof OrbitFitError) return { error: e };
+    throw e;
+  }
+}
+
+export interface CheckFitter {
+  readonly threads: number;
+  /** Runs the requests; their outcomes in request order. */
+  fitAll(requests: readonly FitRequest[]): Promise<FitOutcome[]>;
+  /** Stops the workers (none here). */
+  close(): Promise<void>;
+}
+
+/** The batches of a computation: it yields requests and is given their outcomes. */
+export type FitSteps<R> = Generator<FitRequest[], R, FitOutcome[]>;
+
+/** Runs `steps` with every fit on this thread, synchronously. */
+export function runStepsHere<R>(steps: FitSteps<R>, inputs: CheckFitInputs): R {
+  let step = steps.next([]);
+  while (!step.done) step = steps.next(step.value.map((r) => fitHere(inputs, r)));
+  return step.value;
+}
+
+/** Runs `steps` with its fits on `fitter`. */
+export async function runStepsOn<R>(steps: FitSteps<R>, fitter: CheckFitter): Promise<R> {
+  let step = steps.next([]);
+  while (!step.done) step = steps.next(await fitter.fitAll(step.value));
+  return step.value;
+}
+
+/** What a check worker starts with (checkFitWorker.ts). */
+export interface CheckWorkerData {
+  observations: readonly AstrometryObservation[];
+  sites: ReadonlyMap<string, ObservatorySite>;
+  sigmas: readonly ObservationSigma[];
+  /** The planets' cache options; null when the fits make their own planets (no ephemeris given). */
+  cache: EphemerisCacheOptions | null;
+}
+
+/** A message to a check worker: the filled planets' tables, or a fit. */
+export type CheckWorkerTask = { kind: 'tables'; tables: CacheBodyTable[] } | { kind: 'fit'; request: FitRequest };
+
+/**
+ * A fitter on `threads` threads (an integer ≥ 1): this one alone for 1, else that many
+ * workers. The planets must be undefined or an EphemerisCache (what runCheck makes): other
+ * ephemerides cannot be carried to a worker, and their fits run here.
+ */
+export function startCheckFitter(inputs: CheckFitInputs, threads: number): CheckFitter {
+  if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`startCheckFitter: threads must be a positive integer, got ${threads}`);
+  const eph = inputs.ephemeris;
+  if (threads === 1 || (eph !== undefined && !(eph instanceof EphemerisCache))) {
+    return { threads: 1, fitAll: async (requests) => requests.map((r) => fitHere(inputs, r)), close: async () => undefined };
+  }
+  return new WorkerFitter(inputs, threads);
+}
+
+class WorkerFitter implements CheckFitter {
+  readonly threads: number;
+  private readonly inputs: CheckFitInputs;
+  private readonly workers: Worker[] = [];
+  private readonly primed: boolean[] = [];
+  private tables: CacheBodyTable[] | null = null;
+  /** A worker's error between batches (a worker with no listener would take the process down). */
+  private failure: Error | null = null;
+
+  constructor(inputs: CheckFitInputs, threads: number) {
+    this.inputs = inputs;
+    this.threads = threads;
+    const cache = inputs.ephemeris instanceof EphemerisCache ? inputs.ephemeris.options : null;
+    const data: CheckWorkerData = { observations: inputs.observations, sites: inputs.sites, sigmas: inputs.sigmas, cache };
+    for (let t = 0; t < threads; t++) {
+      const w = startSiblingWorker(import.meta.url, 'checkFitWorker', data);
+      w.on('error', (e) => { this.failure ??= e; });
+      this.workers.push(w);
+      this.primed.push(false);
+    }
+  }
+
+  async fitAll(requests: readonly FitRequest[]): Promise<FitOutcome[]> {
+    if (requests.length <= 1) return requests.map((r) => fitHere(this.inputs, r));
+    if (this.failure !== null) throw new Error(`a check worker failed: ${this.failure.message}`);
+    const records = await this.dispatch(requests);
+    return records.map((o) => (o.error === undefined ? { fit: o.fit } : { error: rebuildOrbitFitError(o.error) }));
+  }
+
+  /** The requests handed out one at a time as workers come free; outcomes in request order. */
+  private dispatch(requests: readonly FitRequest[]): Promise<FitOutcomeRecord[]> {
+    const out: FitOutcomeRecord[] = new Array(requests.length);
+    let next = 0, finished = 0;
+    const used = this.workers.slice(0, Math.min(this.workers.length, requests.length));
+    return new Promise<FitOutcomeRecord[]>((resolve, reject) => {
+      const listeners: [Worker, (reply: WorkerReply<FitOutcomeRecord | null>) => void, (e: Error) => void, (code: number) => void][] = [];
+      const done = (err: Error | null) => {
+        for (const [w, onMessage, onError, onExit] of listeners) {
+          w.off('message', onMessage); w.off('error', onError); w.off('exit', onExit);
+        }
+        if (err === null) resolve(out); else reject(err);
+      };
+      const feed = (w: Worker, k: number) => {
+        if (next >= requests.length) return;
+        if (!this.primed[k]) {
+          w.postMessage({ id: -1, input: { kind: 'tables', tables: this.filledTables() } satisfies CheckWorkerTask });
+          this.primed[k] = true;
+        }
+        const id = next++;
+        w.postMessage({ id, input: { kind: 'fit', request: requests[id] } satisfies CheckWorkerTask });
+      };
+      used.forEach((w, k) => {
+        const onMessage = (reply: WorkerReply<FitOutcomeRecord | null>) => {
+          if (reply.error !== undefined) return done(new Error(`a check fit failed in a worker: ${reply.error}`));
+          if (reply.id < 0) return undefined;
+          out[reply.id] = reply.output!;
+          if (++finished === requests.length) return done(null);
+          feed(w, k);
+        };
+        const onError = (e: Error) => done(new Error(`a check worker failed: ${e.message}`));
+        const onExit = (code: number) => done(new Error(`a check worker exited (code ${code}) with fits unfinished`));
+        listeners.push([w, onMessage, onError, onExit]);
+        w.on('message', onMessage); w.once('error', onError); w.once('exit', onExit);
+        feed(w, k);
+      });
+    });
+  }
+
+  /** The planets' tables as filled now (exported once: the fits here after that add nothing the workers need). */
+  private filledTables(): CacheBodyTable[] {
+    const eph = this.inputs.ephemeris;
+    if (this.tables === null) this.tables = eph instanceof EphemerisCache ? EPHEMERIS_BODIES.map((b) => eph.exportBody(b)) : [];
+    return this.tables;
+  }
+
+  async close(): Promise<void> {
+    await Promise.all(this.workers.map((w) => w.terminate()));
+  }
+}
