@@ -140,7 +140,7 @@ export function registerCheck(program: Command): void {
     .option('--elements <file>', "orbit dump holding the body's row: the fit's start and its H (default: Gauss's method, H unknown)")
     .addOption(withDefault('--models <list>', 'models fitted besides gravity only (gravity, thermal, comet, srp)', parseModelList(CHECK_MODELS_DEFAULT), CHECK_MODELS_DEFAULT, parseModelList))
     .addOption(withDefault('--station-min-share <f>', 'leave-one-station-out: refit without the stations holding at least this share of the observations', STATION_MIN_SHARE_DEFAULT, String(STATION_MIN_SHARE_DEFAULT), parseShare))
-    .addOption(withDefault('--threads <n>', 'worker threads for the model fits and the leave-one-station-out refits (outputs identical for any number)',
+    .addOption(withDefault('--threads <n>', 'threads for the model fits and the leave-one-station-out refits: this one and n − 1 workers (outputs identical for any number)',
       CHECK_THREADS_DEFAULT, String(CHECK_THREADS_DEFAULT), parsePositiveInteger))
     .option('--not-after <date>', 'set aside observations dated after this (ISO date, UTC; default: the end of today)', parseNotAfter)
     .option('-o, --out <dir>', 'write fit.json, residuals.csv and plots/ here')

@@ -5,14 +5,15 @@
  * solution, the refits on the comparison set, the leave-one-station-out refits) and gets the
  * outcomes back in request order, so what it does with them does not depend on where they ran.
  *
- * Here (one thread): one after another on this thread. On worker threads (checkFitWorker.ts):
- * `threads` workers started at once with the observations, σ and the planets' cache options,
+ * On one thread: one after another here. On `threads` > 1: this thread and threads − 1 workers
+ * (checkFitWorker.ts), started at once with the observations, σ and the planets' cache options
  * so that they load while this thread fits gravity only; each is sent, before its first fit,
  * the planets' Chebyshev tables this thread has filled by then (under 1 MB for 20 years), and
  * fills any other segment itself, to the same coefficients (EphemerisCache: a segment's
- * coefficients do not depend on the order or way of filling). A batch of one fit runs here:
- * nothing would run beside it. Fits give the same numbers on any thread, so the outputs are
- * the same for any number of threads.
+ * coefficients do not depend on the order or way of filling). This thread takes part (its
+ * code is already compiled hot by the gravity fit, a fresh worker's is not); a batch of one
+ * fit runs here. Fits give the same numbers on any thread, so the outputs are the same for
+ * any number of threads.
  */
 import type { Worker } from 'node:worker_threads';
 import { EphemerisCache, type EphemerisCacheOptions } from '../../core/ephemeris/ephemerisCache.js';
@@ -94,8 +95,7 @@ export interface CheckWorkerData {
 export type CheckWorkerTask = { kind: 'tables'; tables: CacheBodyTable[] } | { kind: 'fit'; request: FitRequest };
 
 /**
- * A fitter on `threads` threads (an integer ≥ 1): this one alone for 1, else that many
- * workers. The planets must be undefined or an EphemerisCache (what runCheck makes): other
+ * A fitter on `threads` threads (an integer ≥ 1): this one and threads − 1 workers. The planets must be undefined or an EphemerisCache (what runCheck makes): other
  * ephemerides cannot be carried to a worker, and their fits run here.
  */
 export function startCheckFitter(inputs: CheckFitInputs, threads: number): CheckFitter {
@@ -107,11 +107,15 @@ export function startCheckFitter(inputs: CheckFitInputs, threads: number): Check
   return new WorkerFitter(inputs, threads);
 }
 
+/** Fits a worker holds at once (one running, one waiting), so it never waits on this thread's fit. */
+const WORKER_QUEUE = 2;
+
 class WorkerFitter implements CheckFitter {
   readonly threads: number;
   private readonly inputs: CheckFitInputs;
   private readonly workers: Worker[] = [];
   private readonly primed: boolean[] = [];
+  private outstanding: number[] = []; // fits sent to each worker and not yet answered, in the current batch
   private tables: CacheBodyTable[] | null = null;
   /** A worker's error between batches (a worker with no listener would take the process down). */
   private failure: Error | null = null;
@@ -121,7 +125,7 @@ class WorkerFitter implements CheckFitter {
     this.threads = threads;
     const cache = inputs.ephemeris instanceof EphemerisCache ? inputs.ephemeris.options : null;
     const data: CheckWorkerData = { observations: inputs.observations, sites: inputs.sites, sigmas: inputs.sigmas, cache };
-    for (let t = 0; t < threads; t++) {
+    for (let t = 1; t < threads; t++) {
       const w = startSiblingWorker(import.meta.url, 'checkFitWorker', data);
       w.on('error', (e) => { this.failure ??= e; });
       this.workers.push(w);
@@ -129,50 +133,65 @@ class WorkerFitter implements CheckFitter {
     }
   }
 
+  /**
+   * The workers take requests from the front, WORKER_QUEUE at a time, as they come free; this
+   * thread takes them from the back, one at a time, letting the workers' replies in between.
+   */
   async fitAll(requests: readonly FitRequest[]): Promise<FitOutcome[]> {
     if (requests.length <= 1) return requests.map((r) => fitHere(this.inputs, r));
     if (this.failure !== null) throw new Error(`a check worker failed: ${this.failure.message}`);
-    const records = await this.dispatch(requests);
-    return records.map((o) => (o.error === undefined ? { fit: o.fit } : { error: rebuildOrbitFitError(o.error) }));
-  }
-
-  /** The requests handed out one at a time as workers come free; outcomes in request order. */
-  private dispatch(requests: readonly FitRequest[]): Promise<FitOutcomeRecord[]> {
-    const out: FitOutcomeRecord[] = new Array(requests.length);
-    let next = 0, finished = 0;
-    const used = this.workers.slice(0, Math.min(this.workers.length, requests.length));
-    return new Promise<FitOutcomeRecord[]>((resolve, reject) => {
-      const listeners: [Worker, (reply: WorkerReply<FitOutcomeRecord | null>) => void, (e: Error) => void, (code: number) => void][] = [];
-      const done = (err: Error | null) => {
-        for (const [w, onMessage, onError, onExit] of listeners) {
-          w.off('message', onMessage); w.off('error', onError); w.off('exit', onExit);
-        }
-        if (err === null) resolve(out); else reject(err);
-      };
-      const feed = (w: Worker, k: number) => {
-        if (next >= requests.length) return;
+    const out: FitOutcome[] = new Array(requests.length);
+    let front = 0, back = requests.length - 1, pending = 0;
+    let settle: ((err: Error | null) => void) | null = null;
+    let failed: Error | null = null;
+    const detach: (() => void)[] = [];
+    const finish = (err: Error | null) => {
+      if (err !== null && failed === null) failed = err;
+      if (settle !== null && (failed !== null || (pending === 0 && front > back))) settle(failed);
+    };
+    const feed = (w: Worker, k: number) => {
+      while (front <= back && this.outstanding[k] < WORKER_QUEUE) {
         if (!this.primed[k]) {
           w.postMessage({ id: -1, input: { kind: 'tables', tables: this.filledTables() } satisfies CheckWorkerTask });
           this.primed[k] = true;
         }
-        const id = next++;
+        const id = front++;
+        this.outstanding[k]++;
+        pending++;
         w.postMessage({ id, input: { kind: 'fit', request: requests[id] } satisfies CheckWorkerTask });
-      };
-      used.forEach((w, k) => {
-        const onMessage = (reply: WorkerReply<FitOutcomeRecord | null>) => {
-          if (reply.error !== undefined) return done(new Error(`a check fit failed in a worker: ${reply.error}`));
-          if (reply.id < 0) return undefined;
-          out[reply.id] = reply.output!;
-          if (++finished === requests.length) return done(null);
-          feed(w, k);
-        };
-        const onError = (e: Error) => done(new Error(`a check worker failed: ${e.message}`));
-        const onExit = (code: number) => done(new Error(`a check worker exited (code ${code}) with fits unfinished`));
-        listeners.push([w, onMessage, onError, onExit]);
-        w.on('message', onMessage); w.once('error', onError); w.once('exit', onExit);
+      }
+    };
+    this.outstanding = this.workers.map(() => 0);
+    this.workers.forEach((w, k) => {
+      const onMessage = (reply: WorkerReply<FitOutcomeRecord | null>) => {
+        if (reply.error !== undefined) return finish(new Error(`a check fit failed in a worker: ${reply.error}`));
+        if (reply.id < 0) return undefined;
+        const o = reply.output!;
+        out[reply.id] = o.error === undefined ? { fit: o.fit } : { error: rebuildOrbitFitError(o.error) };
+        this.outstanding[k]--;
+        pending--;
         feed(w, k);
-      });
+        return finish(null);
+      };
+      const onExit = (code: number) => finish(new Error(`a check worker exited (code ${code}) with fits unfinished`));
+      w.on('message', onMessage); w.once('exit', onExit);
+      detach.push(() => { w.off('message', onMessage); w.off('exit', onExit); });
+      feed(w, k);
     });
+    try {
+      while (front <= back && failed === null) {
+        const id = back--;
+        out[id] = fitHere(this.inputs, requests[id]);
+        await new Promise<void>((resolve) => setImmediate(resolve)); // the workers' replies, and their next requests
+      }
+      await new Promise<void>((resolve, reject) => {
+        settle = (err) => (err === null ? resolve() : reject(err));
+        finish(this.failure);
+      });
+    } finally {
+      for (const d of detach) d();
+    }
+    return out;
   }
 
   /** The planets' tables as filled now (exported once: the fits here after that add nothing the workers need). */
