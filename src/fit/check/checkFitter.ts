@@ -10,9 +10,9 @@
  * so that they load while this thread fits gravity only; each is sent, before its first fit,
  * the planets' Chebyshev tables this thread has filled by then (under 1 MB for 20 years), and
  * fills any other segment itself, to the same coefficients (EphemerisCache: a segment's
- * coefficients do not depend on the order or way of filling). This thread takes part (its
- * code is already compiled hot by the gravity fit, a fresh worker's is not); a batch of one
- * fit runs here. Fits give the same numbers on any thread, so the outputs are the same for
+ * coefficients do not depend on the order or way of filling). Every thread of a batch, this
+ * one included (its code is already compiled hot by the gravity fit, a fresh worker's is not),
+ * takes the next request from a shared counter; a batch of one fit runs here. Fits give the same numbers on any thread, so the outputs are the same for
  * any number of threads.
  */
 import type { Worker } from 'node:worker_threads';
@@ -91,12 +91,24 @@ export interface CheckWorkerData {
   cache: EphemerisCacheOptions | null;
 }
 
-/** A message to a check worker: the filled planets' tables, or a fit. */
-export type CheckWorkerTask = { kind: 'tables'; tables: CacheBodyTable[] } | { kind: 'fit'; request: FitRequest };
+/**
+ * A batch for a check worker: the requests, the counter every thread takes the next one from,
+ * and the filled planets' tables before the worker's first batch (null after).
+ */
+export interface CheckWorkerTask {
+  kind: 'batch';
+  requests: FitRequest[];
+  counter: Int32Array; // on a SharedArrayBuffer
+  tables: CacheBodyTable[] | null;
+}
+
+/** A worker's answer to a batch: the outcomes of the requests it took, by index. */
+export type WorkerBatchDone = [number, FitOutcomeRecord][];
 
 /**
- * A fitter on `threads` threads (an integer ≥ 1): this one and threads − 1 workers. The planets must be undefined or an EphemerisCache (what runCheck makes): other
- * ephemerides cannot be carried to a worker, and their fits run here.
+ * A fitter on `threads` threads (an integer ≥ 1): this one and threads − 1 workers. The planets
+ * must be undefined or an EphemerisCache (what runCheck makes): other ephemerides cannot be
+ * carried to a worker, and their fits run here.
  */
 export function startCheckFitter(inputs: CheckFitInputs, threads: number): CheckFitter {
   if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`startCheckFitter: threads must be a positive integer, got ${threads}`);
@@ -107,17 +119,16 @@ export function startCheckFitter(inputs: CheckFitInputs, threads: number): Check
   return new WorkerFitter(inputs, threads);
 }
 
-/** Fits a worker holds at once (one running, one waiting), so it never waits on this thread's fit. */
-const WORKER_QUEUE = 2;
-
 class WorkerFitter implements CheckFitter {
   readonly threads: number;
   private readonly inputs: CheckFitInputs;
   private readonly workers: Worker[] = [];
   private readonly primed: boolean[] = [];
-  private outstanding: number[] = []; // fits sent to each worker and not yet answered, in the current batch
   private tables: CacheBodyTable[] | null = null;
-  /** A worker's error between batches (a worker with no listener would take the process down). */
+  /** Batches sent and not yet answered, by message id. */
+  private readonly waiting = new Map<number, { resolve: (done: WorkerBatchDone) => void; reject: (e: Error) => void }>();
+  private nextId = 0;
+  /** A worker's error or exit (every batch waiting is rejected with it; later ones at once). */
   private failure: Error | null = null;
 
   constructor(inputs: CheckFitInputs, threads: number) {
@@ -127,69 +138,53 @@ class WorkerFitter implements CheckFitter {
     const data: CheckWorkerData = { observations: inputs.observations, sites: inputs.sites, sigmas: inputs.sigmas, cache };
     for (let t = 1; t < threads; t++) {
       const w = startSiblingWorker(import.meta.url, 'checkFitWorker', data);
-      w.on('error', (e) => { this.failure ??= e; });
+      w.on('message', (reply: WorkerReply<WorkerBatchDone>) => {
+        const p = this.waiting.get(reply.id);
+        if (p === undefined) return;
+        this.waiting.delete(reply.id);
+        if (reply.error !== undefined) p.reject(new Error(`a check fit failed in a worker: ${reply.error}`));
+        else p.resolve(reply.output!);
+      });
+      w.on('error', (e) => this.fail(new Error(`a check worker failed: ${e.message}`)));
+      w.on('exit', (code) => this.fail(new Error(`a check worker exited (code ${code})`)));
       this.workers.push(w);
       this.primed.push(false);
     }
   }
 
+  private fail(e: Error): void {
+    this.failure ??= e;
+    for (const p of this.waiting.values()) p.reject(this.failure);
+    this.waiting.clear();
+  }
+
   /**
-   * The workers take requests from the front, WORKER_QUEUE at a time, as they come free; this
-   * thread takes them from the back, one at a time, letting the workers' replies in between.
+   * Every worker is sent the whole batch and a shared counter; each thread, this one included,
+   * takes the next request by incrementing it (Atomics), until none is left. No thread waits for
+   * another to hand out work, and the last fit to finish started before every thread ran dry.
    */
   async fitAll(requests: readonly FitRequest[]): Promise<FitOutcome[]> {
     if (requests.length <= 1) return requests.map((r) => fitHere(this.inputs, r));
-    if (this.failure !== null) throw new Error(`a check worker failed: ${this.failure.message}`);
-    const out: FitOutcome[] = new Array(requests.length);
-    let front = 0, back = requests.length - 1, pending = 0;
-    let settle: ((err: Error | null) => void) | null = null;
-    let failed: Error | null = null;
-    const detach: (() => void)[] = [];
-    const finish = (err: Error | null) => {
-      if (err !== null && failed === null) failed = err;
-      if (settle !== null && (failed !== null || (pending === 0 && front > back))) settle(failed);
-    };
-    const feed = (w: Worker, k: number) => {
-      while (front <= back && this.outstanding[k] < WORKER_QUEUE) {
-        if (!this.primed[k]) {
-          w.postMessage({ id: -1, input: { kind: 'tables', tables: this.filledTables() } satisfies CheckWorkerTask });
-          this.primed[k] = true;
-        }
-        const id = front++;
-        this.outstanding[k]++;
-        pending++;
-        w.postMessage({ id, input: { kind: 'fit', request: requests[id] } satisfies CheckWorkerTask });
-      }
-    };
-    this.outstanding = this.workers.map(() => 0);
-    this.workers.forEach((w, k) => {
-      const onMessage = (reply: WorkerReply<FitOutcomeRecord | null>) => {
-        if (reply.error !== undefined) return finish(new Error(`a check fit failed in a worker: ${reply.error}`));
-        if (reply.id < 0) return undefined;
-        const o = reply.output!;
-        out[reply.id] = o.error === undefined ? { fit: o.fit } : { error: rebuildOrbitFitError(o.error) };
-        this.outstanding[k]--;
-        pending--;
-        feed(w, k);
-        return finish(null);
-      };
-      const onExit = (code: number) => finish(new Error(`a check worker exited (code ${code}) with fits unfinished`));
-      w.on('message', onMessage); w.once('exit', onExit);
-      detach.push(() => { w.off('message', onMessage); w.off('exit', onExit); });
-      feed(w, k);
+    if (this.failure !== null) throw this.failure;
+    const counter = new Int32Array(new SharedArrayBuffer(4));
+    const replies = this.workers.map((w, k) => {
+      const id = this.nextId++;
+      const task: CheckWorkerTask = { kind: 'batch', requests: [...requests], counter, tables: this.primed[k] ? null : this.filledTables() };
+      this.primed[k] = true;
+      const reply = new Promise<WorkerBatchDone>((resolve, reject) => this.waiting.set(id, { resolve, reject }));
+      w.postMessage({ id, input: task });
+      return reply;
     });
+    const out: FitOutcome[] = new Array(requests.length);
     try {
-      while (front <= back && failed === null) {
-        const id = back--;
-        out[id] = fitHere(this.inputs, requests[id]);
-        await new Promise<void>((resolve) => setImmediate(resolve)); // the workers' replies, and their next requests
-      }
-      await new Promise<void>((resolve, reject) => {
-        settle = (err) => (err === null ? resolve() : reject(err));
-        finish(this.failure);
-      });
-    } finally {
-      for (const d of detach) d();
+      for (let id = Atomics.add(counter, 0, 1); id < requests.length; id = Atomics.add(counter, 0, 1)) out[id] = fitHere(this.inputs, requests[id]);
+    } catch (e) {
+      Atomics.store(counter, 0, requests.length); // the workers take no more
+      await Promise.allSettled(replies);
+      throw e;
+    }
+    for (const done of await Promise.all(replies)) {
+      for (const [id, o] of done) out[id] = o.error === undefined ? { fit: o.fit } : { error: rebuildOrbitFitError(o.error) };
     }
     return out;
   }
@@ -202,6 +197,7 @@ class WorkerFitter implements CheckFitter {
   }
 
   async close(): Promise<void> {
+    this.failure ??= new Error('the check fitter is closed');
     await Promise.all(this.workers.map((w) => w.terminate()));
   }
 }
