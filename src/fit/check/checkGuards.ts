@@ -11,7 +11,7 @@ import type { Ephemeris } from '../../core/types.js';
 import type { AstrometryObservation, ObservatorySite } from '../../io/astrometry/types.js';
 import type { ObservationSigma } from '../observationWeights.js';
 import { FIT_PARAMETER_INDEX, type FitParameter } from '../trajectoryPartials.js';
-import { leaveOneStationOut, runsTest, stationMeans } from '../models/index.js';
+import { leaveOneStationOut, runsTest, stationMeans, type ParameterEstimate } from '../models/index.js';
 import { fitHere, type CheckFitter, type FitRequest } from './checkFitter.js';
 import { fitOptionsOf, startAt } from './modelFits.js';
 import type { CheckGuards, CheckModelFit } from './types.js';
@@ -65,22 +65,30 @@ export async function runGuards(input: GuardsInput): Promise<CheckGuards> {
   }
   const k = p.params.reduce((best, q, j) => (Math.abs(q.value) / q.sigma > Math.abs(p.params[best].value) / p.params[best].sigma ? j : best), 0);
   const watched = p.params[k];
+  const refit = await refitsWithout(input, drop, watched.name as FitParameter, k);
+  const loso = await leaveOneStationOut(drop, { value: watched.value, sigma: watched.sigma }, refit);
+  return { model: p.id, stationMeans: means, runsRaCosDec, runsDec, leaveOneStationOut: loso, watchedParameter: watched.name, stationsNotRefitted: small };
+}
+
+/**
+ * The leave-one-station-out refits of the preferred model, one per station of `drop`: asked for
+ * at once (they are independent; on the fitter's threads when there is one), then served to
+ * leaveOneStationOut in its order as the watched parameter (column 6 + k) with its σ.
+ */
+async function refitsWithout(input: GuardsInput, drop: readonly string[], watched: FitParameter, k: number): Promise<(station: string) => ParameterEstimate> {
+  const { preferred: p, observations } = input;
   const options = fitOptionsOf(p.model);
-  // The refits are independent: asked for at once (on the fitter's threads), judged in order.
   const requests: FitRequest[] = drop.map((station) => {
     const without: number[] = [];
     observations.forEach((o, i) => { if (o.station === station) without.push(i); });
     input.onProgress?.(`leave-one-station-out: refitting ${p.id} without ${station} (${observations.length - without.length} observations)`);
     return { start: startAt(p.fit), options: { ...options, params: p.fit.params, exclude: without } };
   });
-  const inputs = { observations, sites, sigmas, ephemeris };
-  const outcomes = input.fitter === undefined ? requests.map((r) => fitHere(inputs, r)) : await input.fitter.fitAll(requests);
-  const refit = (station: string) => {
+  const outcomes = input.fitter === undefined ? requests.map((r) => fitHere(input, r)) : await input.fitter.fitAll(requests);
+  return (station) => {
     const o = outcomes[drop.indexOf(station)];
     if (o.error !== undefined) throw o.error;
     const m = o.fit.columns.length;
-    return { value: o.fit.params[FIT_PARAMETER_INDEX[watched.name as FitParameter]], sigma: Math.sqrt(o.fit.covariance[(6 + k) * m + 6 + k]) };
+    return { value: o.fit.params[FIT_PARAMETER_INDEX[watched]], sigma: Math.sqrt(o.fit.covariance[(6 + k) * m + 6 + k]) };
   };
-  const loso = await leaveOneStationOut(drop, { value: watched.value, sigma: watched.sigma }, refit);
-  return { model: p.id, stationMeans: means, runsRaCosDec, runsDec, leaveOneStationOut: loso, watchedParameter: watched.name, stationsNotRefitted: small };
 }
