@@ -133,6 +133,7 @@ export interface NullSummary {
 }
 
 export interface InjectedRow {
+  kind: 'a2' | 'srp';
   magnitude: number;
   trials: number;
   failed: number;
@@ -150,6 +151,13 @@ export interface InjectionSummary {
   /** Smallest injected magnitude detected in at least half its trials; NaN when none. */
   a2Threshold: number;
   srpThreshold: number;
+  /**
+   * Where the detection share crosses 50 %: linear in log10 of the magnitude between the grid
+   * value below the threshold and the threshold (NaN when the first value is already at 50 %
+   * or none is).
+   */
+  a2Half: number;
+  srpHalf: number;
 }
 
 export interface RunOptions {
@@ -287,6 +295,17 @@ function median(xs: number[]): number {
   return s.length % 2 === 1 ? s[m] : (s[m - 1] + s[m]) / 2;
 }
 
+/** The 50 % crossing of the detection share (see InjectionSummary). */
+function halfPoint(rows: InjectedRow[] | null): number {
+  const k = rows?.findIndex((x) => x.detected.share >= 0.5) ?? -1;
+  if (rows === null || k < 1) return NaN;
+  const lo = rows[k - 1];
+  const hi = rows[k];
+  if (!(lo.detected.share < 0.5)) return NaN;
+  const f = (0.5 - lo.detected.share) / (hi.detected.share - lo.detected.share);
+  return 10 ** (Math.log10(lo.magnitude) + f * (Math.log10(hi.magnitude) - Math.log10(lo.magnitude)));
+}
+
 /** The tables of a set of trials. A failed trial counts in `failed` and in no share. */
 export function summarise(trials: readonly TrialResult[], a2Grid: readonly number[], srpGrid: readonly number[]): InjectionSummary {
   const nulls = trials.filter((t) => t.kind === 'null');
@@ -315,7 +334,7 @@ export function summarise(trials: readonly TrialResult[], a2Grid: readonly numbe
       const ok = at.filter((t) => t.preferred !== 'failed' && Number.isFinite(t.models[0].pValue));
       const pulls = ok.map((t) => (t.models[0].value - t.injected) / t.models[0].sigma);
       return {
-        magnitude: g, trials: at.length, failed: at.length - ok.length,
+        kind, magnitude: g, trials: at.length, failed: at.length - ok.length,
         detected: binomialShare(ok.filter((t) => t.models[0].pValue < DETECTION_P).length, ok.length),
         within1Sigma: binomialShare(pulls.filter((p) => Math.abs(p) <= 1).length, ok.length),
         medianPull: median(pulls),
@@ -326,7 +345,7 @@ export function summarise(trials: readonly TrialResult[], a2Grid: readonly numbe
   const threshold = (rs: InjectedRow[] | null): number => rs?.find((x) => x.detected.share >= 0.5)?.magnitude ?? NaN;
   const a2 = rows('a2', a2Grid);
   const srp = rows('srp', srpGrid);
-  return { null: nullSummary, a2, srp, a2Threshold: threshold(a2), srpThreshold: threshold(srp) };
+  return { null: nullSummary, a2, srp, a2Threshold: threshold(a2), srpThreshold: threshold(srp), a2Half: halfPoint(a2), srpHalf: halfPoint(srp) };
 }
 
 /** Runs every trial in a fixed order (kind, trial number, injected value) and summarises. */
@@ -405,15 +424,21 @@ export function formatInjectionReport(run: InjectionRun): string {
     for (const m of s.null.perModel) out.push(`| ${m.id} | ${pct(m.atDetection)} | ${pct(m.atLoose)} | ${m.meanDeltaChi2.toFixed(3)} (${m.k}) | ${pct(m.atDetectionRescaled)} | ${pct(m.atLooseRescaled)} |`);
     out.push(`| any model preferred | ${pct(s.null.anyModelAtDetection)} | | | | |`);
   }
-  const table = (title: string, unit: string, rows: InjectedRow[], thr: number): void => {
+  const table = (title: string, unit: string, rows: InjectedRow[], thr: number, half: number): void => {
     out.push('', title, '', `| injected (${unit}) | trials | failed (model alone fits) | detected | within 1σ (nominal ${(100 * NOMINAL_WITHIN_1SIGMA).toFixed(1)} %) | median pull |`, '|---|---|---|---|---|---|');
     for (const r of rows) out.push(`| ${r.magnitude.toExponential(1)} | ${r.trials} | ${r.failed} (${r.failedModelAlone}) | ${pct(r.detected)} | ${pct(r.within1Sigma)} | ${Number.isNaN(r.medianPull) ? 'n/a' : r.medianPull.toFixed(2)} |`);
     const k = rows.reduce((a, r) => a + r.within1Sigma.k, 0);
     const n = rows.reduce((a, r) => a + r.within1Sigma.n, 0);
-    out.push(`within 1σ over every converged trial: ${pct(binomialShare(k, n))}`);
-    out.push(`smallest injected value detected in ≥ 50 % of trials: ${Number.isNaN(thr) ? 'none on the grid' : thr.toExponential(1) + ' ' + unit}`);
+    const pulls = run.trials.filter((t) => t.kind === rows[0].kind && t.preferred !== 'failed' && Number.isFinite(t.models[0].pValue)).map((t) => (t.models[0].value - t.injected) / t.models[0].sigma);
+    const m = mean(pulls);
+    const sd = Math.sqrt(pulls.reduce((a, p) => a + (p - m) ** 2, 0) / (pulls.length - 1));
+    // 1.4826 × median absolute deviation: σ of a normal sample, robust to a few wild pulls (common practice).
+    const mad = 1.4826 * median(pulls.map((p) => Math.abs(p - median(pulls))));
+    out.push(`within 1σ over every converged trial: ${pct(binomialShare(k, n))}; pulls: mean ${m.toFixed(2)}, standard deviation ${sd.toFixed(2)}, 1.4826·MAD ${mad.toFixed(2)} (nominal 0, 1, 1)`);
+    out.push(`smallest injected value detected in ≥ 50 % of trials: ${Number.isNaN(thr) ? 'none on the grid' : thr.toExponential(1) + ' ' + unit}`
+      + (Number.isNaN(half) ? '' : `; 50 % crossed at ${half.toExponential(1)} ${unit} (log-linear between grid values)`));
   };
-  if (s.a2) table('injected transverse A2 (inverse-square law, random sign; thermal model fitted)', 'au/d²', s.a2, s.a2Threshold);
-  if (s.srp) table('injected radiation pressure, C_R = 1 (srp model fitted)', 'm²/kg', s.srp, s.srpThreshold);
+  if (s.a2) table('injected transverse A2 (inverse-square law, random sign; thermal model fitted)', 'au/d²', s.a2, s.a2Threshold, s.a2Half);
+  if (s.srp) table('injected radiation pressure, C_R = 1 (srp model fitted)', 'm²/kg', s.srp, s.srpThreshold, s.srpHalf);
   return out.join('\n') + '\n';
 }

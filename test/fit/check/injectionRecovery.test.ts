@@ -89,6 +89,9 @@ describe('summarise', () => {
     expect(s.a2![1].within1Sigma.k).toBe(2);
     expect(s.a2![1].medianPull).toBeCloseTo(1, 12);
     expect(s.a2Threshold).toBe(1e-13);
+    // 0 of 2 at 1e-14, 2 of 3 at 1e-13: 50 % at three quarters of the decade, 10^−13.25.
+    expect(s.a2Half).toBeCloseTo(10 ** -13.25, 25);
+    expect(Number.isNaN(s.srpHalf)).toBe(true);
     expect(s.srp).toBeNull();
   });
   it('counts null false detections as compareModels gives them and rescaled by χ²/dof', () => {
@@ -184,5 +187,5 @@ describe('grids and failed gravity-only fits', () => {
     expect(row.failed).toBe(1);
     expect(row.failedModelAlone).toBe(1);
     expect(row.detected.n).toBe(0);
-  }, 120_000);
+  }, 300_000);
 });
