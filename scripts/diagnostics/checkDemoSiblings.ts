@@ -17,7 +17,7 @@
  * 'stations' — no σ on the records, the default per-station table (as the 80-column file).
  * Pull = (fitted − planted)/σ; for noise alone the pulls have mean 0 and spread 1.
  */
-import { Command, InvalidArgumentError, Option } from 'commander';
+import { Command, Option } from 'commander';
 import { RAD_PER_ARCSEC } from '../../src/core/constants.js';
 import { planetaryEphemerisOver } from '../../src/core/propagate/propagateOrbit.js';
 import { normalDeviate, seededRandom } from '../../src/core/random.js';
@@ -30,12 +30,7 @@ import { generateSyntheticAstrometry } from '../../src/fit/synthetic/index.js';
 import type { AstrometryObservation, ObservatorySite } from '../../src/io/astrometry/types.js';
 import { CHECK_BODY_DESIGNATION, checkBodyRequest } from '../demo/checkBody.js';
 import { trialSeed } from '../injection/injectionRecovery.js';
-
-function int(value: string): number {
-  const n = Number(value);
-  if (value.trim() === '' || !Number.isInteger(n)) throw new InvalidArgumentError(`not an integer: ${value}`);
-  return n;
-}
+import { int } from './checkOptions.js';
 
 const program = new Command('checkDemoSiblings')
   .option('--siblings <n>', 'siblings with new noise', int, 20)

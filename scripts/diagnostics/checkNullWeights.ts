@@ -14,7 +14,7 @@
  * gives it (Pr(χ²_k ≥ Δχ²), k the model's extra parameters). For a correct weighting and a
  * linear model, χ²/dof ≈ 1 and Δχ² ~ χ²_k, mean k (common practice).
  */
-import { Command, InvalidArgumentError } from 'commander';
+import { Command } from 'commander';
 import { planetaryEphemerisOver } from '../../src/core/propagate/propagateOrbit.js';
 import { fitOptionsOf, runModelFits } from '../../src/fit/check/modelFits.js';
 import { fitOrbit } from '../../src/fit/fitOrbit.js';
@@ -24,12 +24,7 @@ import { observationSigmas } from '../../src/fit/observationWeights.js';
 import { OrbitFitError } from '../../src/fit/orbitFitTypes.js';
 import { readObservatoryCodes } from '../../src/io/astrometry/observatoryCodes.js';
 import { makeTrialData, recordSigmas, trialSeed } from '../injection/injectionRecovery.js';
-
-function int(value: string): number {
-  const n = Number(value);
-  if (value.trim() === '' || !Number.isInteger(n)) throw new InvalidArgumentError(`not an integer: ${value}`);
-  return n;
-}
+import { CANDIDATE_STATION_CODES, int } from './checkOptions.js';
 
 const program = new Command('checkNullWeights')
   .option('--trials <n>', 'null trials', int, 10)
@@ -41,7 +36,7 @@ const program = new Command('checkNullWeights')
   .parse();
 const o = program.opts();
 const table = await readObservatoryCodes(o.obscodes);
-const sites = ['F51', 'G96', '703', 'W84', 'I41', 'Q55'].map((c) => table.sites.get(c)!);
+const sites = CANDIDATE_STATION_CODES.map((c) => table.sites.get(c)!);
 const MODELS = ['thermal', 'comet', 'srp'] as const;
 type Way = 'check' | 'record' | 'plain';
 const WAYS: Way[] = ['check', 'record', 'plain'];
