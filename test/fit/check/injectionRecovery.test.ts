@@ -4,7 +4,8 @@
 import { fileURLToPath } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
 import {
-  binomialShare, formatInjectionReport, NOMINAL_WITHIN_1SIGMA, runInjectionRecovery, summarise, trialSeed,
+  A2_GRID_AU_PER_DAY2, binomialShare, formatInjectionReport, mergeRuns, NOMINAL_WITHIN_1SIGMA, recordSigmas, runFromJson,
+  runInjectionRecovery, runToJson, runTrial, SRP_GRID_M2_PER_KG, summarise, trialSeed,
   type InjectionOptions, type InjectionRun, type TrialResult,
 } from '../../../scripts/injection/injectionRecovery.js';
 import { readObservatoryCodes } from '../../../src/io/astrometry/index.js';
@@ -72,8 +73,8 @@ describe('runInjectionRecovery', () => {
 
 describe('summarise', () => {
   const trial = (injected: number, value: number, sigma: number, pValue: number): TrialResult => ({
-    kind: 'a2', injected, trialSeed: 0, observations: 100, stations: ['F51', 'G96', '703'], preferred: pValue < 0.0027 ? 'thermal' : 'gravity',
-    models: [{ id: 'thermal', pValue, value, sigma }], failure: '',
+    kind: 'a2', index: 0, injected, trialSeed: 0, observations: 100, stations: ['F51', 'G96', '703'], preferred: pValue < 0.0027 ? 'thermal' : 'gravity',
+    models: [{ id: 'thermal', pValue, deltaChi2: NaN, value, sigma }], failure: '', gravityChi2PerDof: 1, rejected: 0, alone: null,
   });
   it('counts detections, 1σ recoveries, median pulls and the threshold per value', () => {
     const trials = [
@@ -88,7 +89,28 @@ describe('summarise', () => {
     expect(s.a2![1].within1Sigma.k).toBe(2);
     expect(s.a2![1].medianPull).toBeCloseTo(1, 12);
     expect(s.a2Threshold).toBe(1e-13);
+    // 0 of 2 at 1e-14, 2 of 3 at 1e-13: 50 % at three quarters of the decade, 10^−13.25.
+    expect(s.a2Half).toBeCloseTo(10 ** -13.25, 25);
+    expect(Number.isNaN(s.srpHalf)).toBe(true);
     expect(s.srp).toBeNull();
+  });
+  it('counts null false detections as compareModels gives them and rescaled by χ²/dof', () => {
+    // Pr(χ²₁ ≥ 9) = 0.0027 and Pr(χ²₁ ≥ 3.841) = 0.05 (common practice, normal-table values).
+    const nullTrial = (d: number, chi2PerDof: number, p: number): TrialResult => ({
+      kind: 'null', index: 0, injected: 0, trialSeed: 0, observations: 100, stations: ['F51', 'G96', '703'], preferred: 'gravity', failure: '',
+      gravityChi2PerDof: chi2PerDof, rejected: 1, alone: null,
+      models: (['thermal', 'comet', 'srp'] as const).map((id) => ({ id, pValue: p, deltaChi2: d, value: 0, sigma: 1 })),
+    });
+    // Δχ² 3.6 with χ²/dof 0.9 is 4.0 rescaled: p 0.058 as given, 0.046 rescaled (one parameter).
+    const s = summarise([nullTrial(3.6, 0.9, 0.0578), nullTrial(0.5, 1, 0.48)], [], []).null!;
+    const thermal = s.perModel.find((m) => m.id === 'thermal')!;
+    expect(thermal.atLoose.k).toBe(0);
+    expect(thermal.atLooseRescaled.k).toBe(1);
+    expect(thermal.meanDeltaChi2).toBeCloseTo(2.05, 12);
+    expect(thermal.k).toBe(1);
+    // The comet model has two parameters: Pr(χ²₂ ≥ 4) = e⁻² = 0.135, not below 0.05.
+    expect(s.perModel.find((m) => m.id === 'comet')!.atLooseRescaled.k).toBe(0);
+    expect(s.meanChi2PerDof).toBeCloseTo(0.95, 12);
   });
   it('gives the binomial σ and the nominal 1σ share', () => {
     const b = binomialShare(3, 12);
@@ -97,4 +119,73 @@ describe('summarise', () => {
     expect(Number.isNaN(binomialShare(0, 0).share)).toBe(true);
     expect(NOMINAL_WITHIN_1SIGMA).toBeCloseTo(0.6827, 4);
   });
+});
+
+describe('parts of a run', () => {
+  it('merges parts made over trial ranges into the same trials and report as one run, through JSON', () => {
+    // Gravity-only bodies with the thermal model only fitted: the cheapest trials.
+    const a2: InjectionOptions = { ...opts, kinds: ['a2'], trials: 2, a2Grid: [1e-12] };
+    const whole = runInjectionRecovery(a2);
+    const parts = [runInjectionRecovery({ ...a2, range: [1, 2] }), runInjectionRecovery({ ...a2, range: [0, 1] })];
+    expect(whole.trials.map((t) => t.index)).toEqual([0, 1]);
+    expect(parts[0].trials.map((t) => t.index)).toEqual([1]);
+    const merged = mergeRuns(parts.map((p) => runFromJson(runToJson(p))));
+    expect(merged.trials).toEqual(whole.trials);
+    expect(merged.options).toEqual(whole.options);
+    expect(formatInjectionReport(merged)).toBe(formatInjectionReport(whole));
+    // Parts that overlap, leave a gap or come from another seed are refused.
+    expect(() => mergeRuns([parts[0], parts[0]])).toThrow(RangeError);
+    expect(() => mergeRuns([parts[0]].concat({ ...parts[1], options: { ...parts[1].options, seed: 8 } }))).toThrow(RangeError);
+    expect(() => runInjectionRecovery({ ...a2, range: [1, 3] })).toThrow(RangeError);
+  }, 240_000);
+
+  it('keeps NaN through JSON (JSON itself would write null)', () => {
+    const t = runFromJson(runToJson({ ...first, trials: [{ ...first.trials[0], gravityChi2PerDof: NaN, alone: { value: NaN, sigma: Infinity } }] }));
+    expect(Number.isNaN(t.trials[0].gravityChi2PerDof)).toBe(true);
+    expect(t.trials[0].alone!.sigma).toBe(Infinity);
+  });
+});
+
+describe('weights', () => {
+  it('takes the per-night factor out of the σ with record weights', () => {
+    const f = Math.sqrt(5 / 4);
+    const s = recordSigmas([{ sigmaRaCosDecArcsec: 0.5 * f, sigmaDecArcsec: 0.3 * f, correlation: 0, source: 'record', nightCount: 5, nightFactor: f }]);
+    expect(s[0].sigmaRaCosDecArcsec).toBeCloseTo(0.5, 14);
+    expect(s[0].sigmaDecArcsec).toBeCloseTo(0.3, 14);
+    expect(s[0].nightFactor).toBe(1);
+  });
+
+  it('fits with the records\' σ: χ² per degree of freedom rises where nights had the factor', () => {
+    const t = first.trials[0];
+    const rec = runTrial('srp', 1e-1, t.trialSeed, { ...opts, weights: 'record' });
+    expect(rec.observations).toBe(t.observations);
+    // σ only shrinks (nights of 5 lose √(5/4)), so χ²/dof grows; synthetic nights hold 2–5 places.
+    expect(rec.gravityChi2PerDof).toBeGreaterThan(t.gravityChi2PerDof);
+  }, 120_000);
+});
+
+describe('grids and failed gravity-only fits', () => {
+  it('steps the injected values by half decades over 1e-15 … 1e-12 au/d² and 1e-4 … 1e-1 m²/kg', () => {
+    expect(A2_GRID_AU_PER_DAY2).toHaveLength(7);
+    expect(SRP_GRID_M2_PER_KG).toHaveLength(7);
+    expect(A2_GRID_AU_PER_DAY2[0]).toBe(1e-15);
+    expect(A2_GRID_AU_PER_DAY2[6]).toBeCloseTo(1e-12, 25);
+    expect(SRP_GRID_M2_PER_KG[3]).toBeCloseTo(Math.sqrt(10) * 1e-3, 15);
+    for (let k = 1; k < 7; k++) expect(SRP_GRID_M2_PER_KG[k] / SRP_GRID_M2_PER_KG[k - 1]).toBeCloseTo(Math.sqrt(10), 12);
+  });
+
+  it('fits the injected model alone when gravity only fails, and leaves the trial out of the shares', async () => {
+    // A body pushed by 0.1 m²/kg on which the gravity-only fit does not converge (found by a run
+    // with seed 5, all six candidate stations, fast, record weights: trial 13 of srp).
+    const table = await readObservatoryCodes(CODES);
+    const six = ['F51', 'G96', '703', 'W84', 'I41', 'Q55'].map((c) => table.sites.get(c)!);
+    const t = runTrial('srp', 1e-1, trialSeed(5, 'srp', 13), { ...opts, sites: six, weights: 'record' }, 13);
+    expect(t.preferred).toBe('failed');
+    expect(t.failure).toContain('diverged');
+    expect(Math.abs(t.alone!.value - 0.1)).toBeLessThan(5 * t.alone!.sigma);
+    const row = summarise([t], [], [1e-1]).srp![0];
+    expect(row.failed).toBe(1);
+    expect(row.failedModelAlone).toBe(1);
+    expect(row.detected.n).toBe(0);
+  }, 300_000);
 });
