@@ -12,6 +12,7 @@ import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, writeFi
 import { join } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { fitJson } from './checkFitJson.js';
 import { ROOT, runCli, tempDir, type CliRun } from './cliHarness.js';
 
 const OBS = 'data/demo/check';
@@ -74,6 +75,20 @@ describe('scan --obs on the demo', () => {
     expect(runs[0].stderr).toContain('wayward: 2030 QW12: 480 of its 960 records set aside (given again in another file: 480)');
     expect(runs[0].stderr).toContain(`wayward: ${OBS}/README.md: not read as astrometry:`);
   });
+
+  it('gives the numbers check gives for the body from the same file and elements (the 80-column file comes first by name)', () => {
+    const out = tempDir('wayward-obs-check-');
+    const r = runCli(['check', '2030 QW12', '--obs', `${OBS}/check-body.obs80.txt`, '--obscodes', CODES,
+      '--elements', `${OBS}/check-body-elements.txt`, '--not-after', '2033-01-01', '--out', out]);
+    expect(r.status, r.stderr).toBe(0);
+    const f = fitJson(out);
+    const c = candidates(outs[0]).find((x) => x.detector === 'nongrav')!;
+    expect(f.preferred).toBe(c.class);
+    // the scan writes six significant figures of the same fit
+    expect(c.details.areaToMass).toBe(Number(f.models.srp.params.areaToMass.value.toPrecision(6)));
+    expect(Math.abs((c.details.delta_chi2 as number) - f.models.srp.deltaChi2)).toBeLessThan(1e-3);
+    expect([c.details.kept, c.details.rejected]).toEqual([f.models.srp.kept, f.models.srp.rejected]);
+  }, 300_000);
 
   it('writes the same bytes on one and two threads, and on a rerun', () => {
     const [a, b, c] = outs.map(files);
