@@ -2,7 +2,8 @@
  * Writes the demo asteroid file (one-line orbit export format): header, then the numbered,
  * multi-opposition and one-opposition blocks of natural bodies with the planted bodies and
  * bad rows inserted at random places, then a block of older re-submitted orbits (duplicate
- * designations). The natural rows come from a stream of their own (spec.naturalRandom), so
+ * designations), then, when given, one more row (the demo body for check: no random draws,
+ * so every row before it is as without it). The natural rows come from a stream of their own (spec.naturalRandom), so
  * the same bodies can be drawn ahead of writing (naturalTrusted.ts). Streams: natural rows are drawn, written and forgotten, so 1.5 M rows
  * need no more memory than 20 000. One scratch OrbitRow, DemoElements and DemoQuality serve
  * every natural row.
@@ -27,7 +28,7 @@ import { uniformInt } from './random.js';
 import type { Section } from './scenario.js';
 import { DEMO_EPOCH_JD_TT, SECTION_SHARES, SECTIONS } from './scenario.js';
 import { tisserandJupiter } from './tisserand.js';
-import type { DemoElements, DemoQuality, TruthRow } from './types.js';
+import type { DemoElements, DemoQuality, TrailingRow, TruthRow } from './types.js';
 import { emptyElements, emptyQuality } from './types.js';
 
 export interface AsteroidFileSpec {
@@ -45,6 +46,7 @@ export interface AsteroidFileSpec {
   truth: TruthRow[]; // appended to
   classCounts: Record<string, number>; // natural rows per class, appended to
   coorbitals: CoorbitalTruthRow[]; // co-orbital plants as written, appended to
+  trailing?: TrailingRow | null; // a last block of one row after the re-submitted orbits (the demo body for check)
 }
 
 type Special =
@@ -153,7 +155,7 @@ export function writeAsteroidFile(spec: AsteroidFileSpec, populationOnly: boolea
   const q = emptyQuality();
   const plant: NaturalPlant = emptyNaturalPlant();
   const duplicateSources: DuplicateSource[] = [];
-  for (const line of asteroidFileHeader(spec.seed, packEpochJd(DEMO_EPOCH_JD_TT), populationOnly)) w.write(line);
+  for (const line of asteroidFileHeader(spec.seed, packEpochJd(DEMO_EPOCH_JD_TT), populationOnly, Boolean(spec.trailing))) w.write(line);
   SECTIONS.forEach((section, k) => {
     if (k > 0) w.write('');
     const list = specials[section];
@@ -174,6 +176,10 @@ export function writeAsteroidFile(spec: AsteroidFileSpec, populationOnly: boolea
     }
   });
   writeDuplicates(spec, w, row, duplicateSources);
+  if (spec.trailing) {
+    w.write('');
+    spec.truth.push({ ...spec.trailing.truth, line: w.write(spec.trailing.line) });
+  }
   w.close();
   return w.lines;
 }

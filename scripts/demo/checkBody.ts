@@ -22,6 +22,8 @@ import { elementsRow, type ElementsInput } from '../synthetic/elementsRow.js';
 import { writeFileAtomic, writeSyntheticFiles } from '../synthetic/syntheticFiles.js';
 import { halfMonthIndex, provisionalText } from './designations.js';
 import { DEMO_EPOCH_JD_TT } from './scenario.js';
+import { tisserandJupiter } from './tisserand.js';
+import type { TrailingRow } from './types.js';
 
 /** Seed of the check body's stream: the demo seed moved by a fourth odd constant (a hash multiplier, common practice). */
 export function checkBodySeed(seed: number): number {
@@ -68,6 +70,41 @@ export interface CheckBodyDemo {
   request: SyntheticRequest;
   result: SyntheticResult;
   elementsLine: string;
+  catalogueRow: TrailingRow; // its row in the demo catalogue (orbits.txt) and truth.csv
+}
+
+/** The observatory-code table of the demo's stations (the published lines above), for `scan --obs` and `check`. */
+export const DEMO_OBSCODES_FILE = 'observatory-codes.txt';
+
+/** Writes the four stations' lines of the observatory-code table into `dir`; returns the path. */
+export function writeDemoObservatoryCodes(dir: string): string {
+  const path = join(dir, DEMO_OBSCODES_FILE);
+  writeFileAtomic(path, ['Code  Long.   cos      sin    Name', ...STATION_LINES.map(([line]) => line)].join('\n') + '\n');
+  return path;
+}
+
+/**
+ * The body's row in the demo catalogue: the same elements as check-body-elements.txt (the
+ * exact truth), with the quality columns of its astrometry (observations, apparitions as
+ * oppositions, first and last year, last observation date; no U: no orbit computer gave one).
+ */
+export function checkBodyCatalogueRow(result: SyntheticResult): TrailingRow {
+  const obs = result.observations.map((o) => o.observation);
+  const first = jdToCalendar(obs[0].timeJdUtc), last = jdToCalendar(obs[obs.length - 1].timeJdUtc);
+  const lastDay = calendarToJd(last.year, last.month, Math.floor(last.day));
+  const el = elementsRow(CHECK_BODY_ORBIT, {
+    nObs: obs.length, nOpp: result.apparitions, firstObsYear: first.year, lastObsYear: last.year, lastObsJdTT: lastDay,
+  });
+  const o = CHECK_BODY_ORBIT;
+  const crAm = CHECK_BODY_AREA_TO_MASS_M2_PER_KG * CHECK_BODY_CR;
+  return {
+    line: el.line,
+    truth: {
+      designation: CHECK_BODY_DESIGNATION, file: 'orbits.txt', plantedClass: 'srp', detector: 'nongrav',
+      aAu: o.aAu, e: o.e, iDeg: o.iDeg, tisserandJ: tisserandJupiter(o.aAu, o.e, o.iDeg),
+      note: `light artificial object pushed by radiation pressure, C_R·A/m = ${crAm.toFixed(3)} m²/kg planted; its astrometry in check/ (scan --obs data/demo/check)`,
+    },
+  };
 }
 
 /** The request for `seed` (the demo seed) and the elements row it is made from. */
@@ -97,7 +134,7 @@ export function writeCheckBodyDemo(outDir: string, seed: number): CheckBodyDemo 
   });
   const readme = join(outDir, 'README.md');
   writeFileAtomic(readme, checkBodyReadme(seed, request, result, elementsLine));
-  return { files: [...files, readme], request, result, elementsLine };
+  return { files: [...files, readme], request, result, elementsLine, catalogueRow: checkBodyCatalogueRow(result) };
 }
 
 function isoDay(jd: number): string {

@@ -29,7 +29,7 @@ import { sectionSizes } from './asteroidFile.js';
 import { DemoSecularField } from './secularForced.js';
 import type { PopulationContext } from './population.js';
 import { writeTruthCsv } from './truthTable.js';
-import type { TruthRow } from './types.js';
+import type { TrailingRow, TruthRow } from './types.js';
 
 export interface DemoOptions {
   seed: number;
@@ -39,6 +39,7 @@ export interface DemoOptions {
   populationOnly?: boolean; // orbits.txt only: no plants, bad rows, duplicates or other files
   duplicates?: number; // older re-submitted orbits (default 5)
   integrate?: boolean; // judge co-orbital plants by N-body (default true; false: fast tests, no claim on their state)
+  checkBody?: TrailingRow | null; // the demo body for check, appended to orbits.txt as a block of its own (not with populationOnly)
 }
 
 export interface DemoResult {
@@ -99,7 +100,7 @@ export async function generateDemo(opts: DemoOptions): Promise<DemoResult> {
   const orbitLines = writeAsteroidFile({
     path: orbitsPath, seed: opts.seed, random, naturalRandom: mulberry32(naturalSeed(opts.seed)), population, familiesTruth,
     bodies, plants, badRows: !populationOnly, duplicates: populationOnly ? 0 : (opts.duplicates ?? 5), allocator, truth,
-    classCounts: asteroidClassCounts, coorbitals,
+    classCounts: asteroidClassCounts, coorbitals, trailing: populationOnly ? null : (opts.checkBody ?? null),
   }, populationOnly);
   familiesTruth?.close();
   const extra = { outliers, trustedNatural: trusted ? trusted.count : 0, familiesTruthRows: familiesTruth ? familiesTruth.rows : 0, familiesTruthCounts: familiesTruth ? familiesTruth.counts : {} };

@@ -23,6 +23,16 @@ export function regenerateCommand(opts: DemoOptions): string {
   return parts.join(' ');
 }
 
+/** The last block of orbits.txt: the demo body for check, when the demo has it. */
+function checkBodyText(result: DemoResult): string {
+  const t = result.truth.find((r) => r.detector === 'nongrav');
+  if (t === undefined) return '';
+  return `, then, alone in the last block (line ${t.line}), ${t.designation}, the demo body for \`check\`
+(class \`${t.plantedClass}\`, detector \`nongrav\`): its astrometry is in \`check/\` and its stations in
+\`observatory-codes.txt\`, so that \`wayward scan --obs data/demo/check --obscodes
+data/demo/observatory-codes.txt --not-after 2033-01-01\` fits it as \`check\` does`;
+}
+
 function countTable(counts: Record<string, number>, order: readonly string[]): string {
   return order.filter((k) => counts[k]).map((k) => `| ${k} | ${counts[k]} |`).join('\n');
 }
@@ -180,7 +190,7 @@ ${coorbitalSection(result)}
 **Accounting.** \`orbits.txt\` has ${result.orbitLines} lines: a header block ending in a dashed
 line, blank lines between blocks, 8 malformed lines (class \`bad-row\`, expected rejects)
 and ${result.truth.filter((t) => t.plantedClass === 'duplicate').length} older re-submitted orbits of
-designations that appear earlier (class \`duplicate\`; the newer epoch should be kept).
+designations that appear earlier (class \`duplicate\`; the newer epoch should be kept)${checkBodyText(result)}.
 \`comets.txt\` has ${result.cometLines} lines.
 
 ## Regenerate

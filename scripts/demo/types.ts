@@ -53,6 +53,12 @@ export type CometClass = 'jupiter-family' | 'halley-type' | 'long-period';
 export type DemoFile = 'orbits.txt' | 'comets.txt';
 
 /** One row of truth.csv: a planted body, a bad row or a duplicate. */
+/** A row appended to the asteroid file as a block of its own (the demo body for check), with its truth.csv row. */
+export interface TrailingRow {
+  line: string; // the export line
+  truth: Omit<TruthRow, 'line'>;
+}
+
 export interface TruthRow {
   designation: string; // readable, '' for a garbage line
   file: DemoFile;

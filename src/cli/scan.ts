@@ -12,6 +12,7 @@ import { DEFAULT_DETECTOR_IDS, DETECTORS, detectorById } from '../detect/registr
 import { TISSERAND_DEFAULTS } from '../detect/tisserand.js';
 import { COORBITAL_DEFAULTS, type CoorbitalOptions } from '../detect/coorbitalOptions.js';
 import { FAMILIES_DEFAULTS, type FamiliesOptions } from '../detect/familiesOptions.js';
+import { NONGRAV_DEFAULTS, type NongravOptions } from '../detect/nongravOptions.js';
 import { membershipRejectLines, readFamiliesInputs } from './familiesInputs.js';
 import type { Candidate, DetectorOptions } from '../detect/types.js';
 import type { CsvKindChoice } from '../io/bodyKind.js';
@@ -24,7 +25,10 @@ import { buildSummary, type DetectorRun } from '../report/summary.js';
 import { writeFileAtomic } from '../report/atomicWrite.js';
 import { fileSystemCause, OutputDirectoryError, OutputStage } from '../report/outputStage.js';
 import type { ScanSummary } from '../report/types.js';
+import { parseNotAfter } from './check.js';
+import { endOfUtcDayJd } from './checkInputs.js';
 import { inputErrorLine } from './inputErrorLine.js';
+import { matchObsToCatalogue, ObsInputError, readObsDir, type ObsDirRead, type ObsMatch } from './scanObsInputs.js';
 import { loadCatalogue } from './loadCatalogue.js';
 import { withDefault } from './optionDefault.js';
 import {
@@ -55,6 +59,9 @@ export interface ScanOptions {
   familyFdr?: number; // --family-fdr: false-discovery level: family outliers with Benjamini–Hochberg q below it are candidates
   familyCutoff?: number; // --family-cutoff: one HCM cutoff (m/s) instead of the quasi-random levels
   familyMin?: number; // --family-min: N_min
+  obs?: string; // --obs DIR: astrometry of the catalogue's bodies, for the nongrav detector
+  obscodes?: string; // --obscodes FILE: observatory-code table for --obs (default: the built-in one)
+  notAfter?: number; // --not-after: --obs records dated after this JD (UTC) are set aside; default the end of the run's UTC day
   reproducible: boolean; // leave timings and memory out of summary.json
 }
 
@@ -62,7 +69,7 @@ export interface ScanResult {
   summary: ScanSummary;
   ranked: Candidate[];
   errors: string[]; // one line per unreadable input
-  warnings: string[]; // one line per bad line of a side list (--families)
+  warnings: string[]; // one line per bad line of a side list (--families), per astrometry file or body set aside (--obs), per body a detector could not judge
   outDir: string;
 }
 
@@ -84,14 +91,16 @@ function seconds(t0: bigint): number {
  */
 async function runDetectors(
   ids: readonly string[], cat: Catalogue, detOpts: DetectorOptions, timing: Record<string, number>, threads: number, progress?: Progress,
-): Promise<{ runs: DetectorRun[]; candidates: Candidate[] }> {
+): Promise<{ runs: DetectorRun[]; candidates: Candidate[]; warnings: string[] }> {
   const runs: DetectorRun[] = [];
   const candidates: Candidate[] = [];
+  const warnings: string[] = [];
   for (const id of ids) {
     const detector = detectorById(id);
     if (!detector) throw new RangeError(`unknown detector ${id}`);
     const t0 = process.hrtime.bigint();
-    const { candidates: found, ...account } = await detector.run(cat, detOpts, { progress, threads });
+    const { candidates: found, warnings: said, ...account } = await detector.run(cat, detOpts, { progress, threads });
+    warnings.push(...(said ?? []));
     const offered = account.screened + Object.values(account.notScreened).reduce((a, b) => a + b, 0);
     if (offered !== cat.size) {
       throw new Error(`detector ${id} accounted for ${offered} bodies of ${cat.size} (screened ${account.screened})`);
@@ -100,7 +109,34 @@ async function runDetectors(
     runs.push({ detector, account });
     timing[`${id}Seconds`] = seconds(t0);
   }
-  return { runs, candidates };
+  return { runs, candidates, warnings };
+}
+
+/** Astrometry lines and records set aside shown on stderr; the rest are counted there and all are in obs-rejects.csv. */
+const STDERR_OBS_REJECT_LINES = 20;
+
+/** The stderr lines of --obs: files that are not astrometry, the first rejects, bodies not in the catalogue or set aside. */
+function obsWarnings(read: ObsDirRead, match: ObsMatch, outDir: string): string[] {
+  const out = read.notAstrometry.map((n) => `${n.file}: not read as astrometry: ${n.reason}`);
+  const parse = read.rejects.filter((r) => r.kind === 'parse');
+  for (const r of parse.slice(0, STDERR_OBS_REJECT_LINES)) out.push(`${r.file}:${r.line}: ${r.reason}`);
+  if (parse.length > STDERR_OBS_REJECT_LINES) out.push(`… and ${parse.length - STDERR_OBS_REJECT_LINES} more unreadable astrometry lines (all in ${outDir}/obs-rejects.csv)`);
+  out.push(...match.warnings);
+  return out;
+}
+
+/** summary.json's account of --obs. */
+function obsAccount(read: ObsDirRead, match: ObsMatch, notAfterJdUtc: number): Record<string, unknown> {
+  return {
+    dir: read.dir, obscodes: read.obscodes === '' ? 'built-in (500 only)' : read.obscodes, notAfterJdUtc,
+    files: read.files, notAstrometry: read.notAstrometry,
+    unreadableLines: read.rejects.filter((r) => r.kind === 'parse').length,
+    designations: read.groups.length, bodiesMatched: match.bodies.length,
+    notInCatalogue: match.unmatched.length, notInCatalogueObservations: match.unmatched.reduce((n, u) => n + u.observations, 0),
+    notInCatalogueList: match.unmatched,
+    recordsSetAside: match.setAside, observationsUsable: match.bodies.reduce((n, b) => n + b.observations.length, 0),
+    rejectsFile: 'obs-rejects.csv',
+  };
 }
 
 /**
@@ -135,6 +171,8 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
   const timing: Record<string, number> = {};
   let t0 = process.hrtime.bigint();
   progress?.start('reading');
+  const notAfterJdUtc = opts.notAfter ?? endOfUtcDayJd(Date.now());
+  const obsRead = opts.obs === undefined ? null : await readObsDir(opts.obs, opts.obscodes, notAfterJdUtc);
   const loaded = await loadCatalogue(files, { format: opts.inputFormat, columns: opts.columns, csvKind: opts.csvKind });
   progress?.end();
   if (loaded.files.length > 0 && loaded.errors.length === loaded.files.length) {
@@ -142,6 +180,8 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
   }
   const familyInputs = opts.detectors.includes('families') ? await readFamiliesInputs(opts.families) : null;
   const warnings = familyInputs ? membershipRejectLines(familyInputs) : [];
+  const obsMatch = obsRead === null ? null : matchObsToCatalogue(obsRead, loaded.catalogue);
+  if (obsRead !== null && obsMatch !== null) warnings.push(...obsWarnings(obsRead, obsMatch, opts.out));
   timing.readSeconds = seconds(t0);
   const detOpts: DetectorOptions = {
     tisserand: {
@@ -167,34 +207,45 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
       published: familyInputs?.published.families ?? [],
       membership: familyInputs?.membership ?? null,
     },
+    nongrav: { ...NONGRAV_DEFAULTS, bodies: obsMatch?.bodies ?? null, sites: obsRead?.table.sites ?? NONGRAV_DEFAULTS.sites },
   };
-  const { runs, candidates } = await runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, opts.threads ?? COORBITAL_DEFAULTS.threads, progress);
+  const { runs, candidates, warnings: detectorWarnings } = await runDetectors(opts.detectors, loaded.catalogue, detOpts, timing, opts.threads ?? COORBITAL_DEFAULTS.threads, progress);
+  warnings.push(...detectorWarnings);
   const ranked = rankInPlace(candidates, opts.detectors);
   sortRejectsInPlace(loaded.rejects, files);
   t0 = process.hrtime.bigint();
   await writeCandidatesJsonl(stage.path('candidates.jsonl'), ranked, loaded.catalogue);
   await writeCandidatesCsv(stage.path('candidates.csv'), ranked, loaded.catalogue);
   await writeRejectsCsv(stage.path('rejects.csv'), loaded.rejects);
+  if (obsRead !== null) await writeRejectsCsv(stage.path('obs-rejects.csv'), sortRejectsInPlace(obsRead.rejects, obsRead.files.map((f) => f.file)));
   const options = {
     detectors: opts.detectors, planet: opts.planet,
     tisserand: detOpts.tisserand, coorbital: coorbitalOptionsRecord(detOpts.coorbital), families: familiesOptionsRecord(detOpts.families, opts.families),
     inputFormat: opts.inputFormat ?? 'auto', columns: opts.columns ?? {},
     csvKind: opts.csvKind ?? 'auto',
+    ...(opts.detectors.includes('nongrav') ? { nongrav: nongravOptionsRecord(detOpts.nongrav) } : {}),
     validity: DEFAULT_VALIDITY, quality: DEFAULT_QUALITY,
   };
   const base = {
     version: packageVersion(), demoCatalogue, files: loaded.files, catalogue: loaded.catalogue, rejects: loaded.rejects,
     candidates: ranked, runs, options,
   };
-  const forReport = buildSummary(base);
+  const astrometry = obsRead !== null && obsMatch !== null ? { astrometry: obsAccount(obsRead, obsMatch, notAfterJdUtc) } : {};
+  const forReport = { ...buildSummary(base), ...astrometry };
   await writeFileAtomic(stage.path('report.md'), reportMarkdown(forReport, ranked, runs.map((r) => r.detector), loaded.catalogue));
   timing.writeSeconds = seconds(t0);
   timing.totalSeconds = seconds(tStart);
   const summary = opts.reproducible
     ? forReport
-    : buildSummary({ ...base, timing, peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024) });
+    : { ...buildSummary({ ...base, timing, peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024) }), ...astrometry };
   await writeFileAtomic(stage.path('summary.json'), JSON.stringify(summary, null, 2) + '\n');
   return { summary, ranked, errors: loaded.errors.map(inputErrorLine), warnings, outDir: opts.out };
+}
+
+/** The nongrav options as summary.json records them: not the astrometry itself. */
+function nongravOptionsRecord(o: NongravOptions): Record<string, unknown> {
+  const { bodies: _b, sites: _s, ...rest } = o;
+  return rest;
 }
 
 /** The co-orbital options as summary.json records them: not the thread count, which changes no output. */
@@ -225,7 +276,7 @@ export function registerScan(program: Command): void {
     .description('screen orbit dumps for bodies whose orbits do not behave (default: the bundled demo catalogue)')
     .argument('[files...]', "orbit dumps: one-line orbit or comet export format, CSV/TSV; '-' reads standard input; gzip read transparently")
     .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-out', 'wayward-out'))
-    .addOption(withDefault('-d, --detectors <list>', `comma-separated detectors, of: ${DETECTORS.map((d) => d.id).join(', ')}`,
+    .addOption(withDefault('-d, --detectors <list>', `comma-separated detectors, of: ${DETECTORS.map((d) => d.id).join(', ')} (--obs adds nongrav to the default)`,
       [...DEFAULT_DETECTOR_IDS], DEFAULT_DETECTOR_IDS.join(','), parseDetectorList))
     .addOption(withDefault('--planet <name>', `planet the Tisserand parameter is taken with respect to: ${PLANETS.join(', ')}`,
       TISSERAND_DEFAULTS.planet, TISSERAND_DEFAULTS.planet, parsePlanet))
@@ -250,6 +301,9 @@ export function registerScan(program: Command): void {
     .option('--family-cutoff <m/s>', "families: one HCM cutoff for every belt region (default: each region's quasi-random level)", parsePositiveNumber)
     .addOption(withDefault('--family-min <n>', 'families: fewest members of a family (N_min)',
       FAMILIES_DEFAULTS.minMembers, String(FAMILIES_DEFAULTS.minMembers), parseMinMembers))
+    .option('--obs <dir>', "astrometry of the catalogue's bodies: every 80-column or ADES PSV file in DIR, grouped by designation; each body fitted as check fits it (the nongrav detector)")
+    .option('--obscodes <file>', 'observatory-code table for --obs (default: the built-in one, the geocentre 500 only)')
+    .option('--not-after <date>', '--obs: set aside observations dated after this (ISO date, UTC; default: the end of today)', parseNotAfter)
     .addOption(new Option('--input-format <format>',
       `force the input format, one of: ${INPUT_FORMATS.join(', ')} (without it: detected from each file's content)`).argParser(parseInputFormat))
     .option('--columns <map>', 'CSV column mapping field=header,…, e.g. designation=objname,a=semimajor', parseColumnMapping)
@@ -261,13 +315,19 @@ export function registerScan(program: Command): void {
     .option('--top <n>', 'rows per class of each detector in the stdout table, boundary cases likewise (all are in candidates.csv)', parsePositiveInteger, 5)
     .option('--reproducible', 'leave timings and memory out of summary.json (byte-identical reruns)')
     .option('--no-progress', 'no progress line on stderr (shown only on a terminal anyway)')
-    .action(async (files: string[], flags: RawScanFlags) => {
-      const opts = { files, ...flags, includeExterior: flags.includeExterior === true, reproducible: flags.reproducible === true };
+    .action(async (files: string[], flags: RawScanFlags, command: Command) => {
+      const detectors = obsDetectors(flags, command);
+      const opts = { files, ...flags, detectors, includeExterior: flags.includeExterior === true, reproducible: flags.reproducible === true };
       let result: ScanResult;
       try {
         result = await runScan(opts, terminalProgress(flags.progress && !flags.quiet));
       } catch (err) {
         if (err instanceof NoInputReadError) for (const line of err.errors) process.stderr.write(`wayward: ${line}\n`);
+        if (err instanceof ObsInputError) {
+          for (const line of [err.message, ...err.lines]) process.stderr.write(`wayward: ${line}\n`);
+          process.exitCode = 1;
+          return;
+        }
         throw err;
       }
       for (const line of [...result.warnings, ...result.errors]) process.stderr.write(`wayward: ${line}\n`);
@@ -278,6 +338,21 @@ export function registerScan(program: Command): void {
       }
       if (result.errors.length > 0) process.exitCode = 1;
     });
+}
+
+/**
+ * The detectors with --obs: nongrav joins the default list; a list that names detectors without
+ * nongrav, or --obscodes / --not-after without --obs, is a usage error (exit 2).
+ */
+function obsDetectors(flags: RawScanFlags, command: Command): string[] {
+  if (flags.obs === undefined) {
+    const stray = flags.obscodes !== undefined ? '--obscodes' : flags.notAfter !== undefined ? '--not-after' : '';
+    if (stray !== '') command.error(`error: ${stray} is read with --obs DIR only`, { exitCode: 2, code: 'wayward.usage' });
+    return flags.detectors;
+  }
+  if (command.getOptionValueSource('detectors') === 'default') return [...flags.detectors, 'nongrav'];
+  if (!flags.detectors.includes('nongrav')) command.error('error: --obs is read by the nongrav detector only: add nongrav to --detectors', { exitCode: 2, code: 'wayward.usage' });
+  return flags.detectors;
 }
 
 /** The stdout line that says no files were named and the bundled demo catalogue was scanned. */

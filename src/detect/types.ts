@@ -18,6 +18,7 @@ import type { Progress } from '../core/progress.js';
 import type { Catalogue } from '../clean/types.js';
 import type { CoorbitalOptions } from './coorbitalOptions.js';
 import type { FamiliesOptions } from './familiesOptions.js';
+import type { NongravOptions } from './nongravOptions.js';
 
 /** One body raised by one detector. */
 export interface Candidate {
@@ -47,6 +48,7 @@ export interface ScreeningAccount {
 
 export interface DetectorResult extends ScreeningAccount {
   candidates: Candidate[];
+  warnings?: string[]; // one line per body the detector could not judge for a reason of its own input (the CLI shows them)
 }
 
 /** What a run may use besides the catalogue and options. */
@@ -68,6 +70,7 @@ export interface DetectorOptions {
   tisserand: TisserandOptions;
   coorbital: CoorbitalOptions;
   families: FamiliesOptions;
+  nongrav: NongravOptions;
 }
 
 export interface Detector {
