@@ -12,6 +12,10 @@
  * A UTF-8 byte-order mark at the start is dropped. The last line needs no terminator.
  * An empty input gives zero lines. A line longer than MAX_LINE_BYTES is fatal (the input is
  * not line-oriented text).
+ *
+ * A caller that reads the end of a plain file elsewhere (./orbitExportParts.ts) sets
+ * `options.until.byte`, even while the lines are being delivered: no line ending at or
+ * past that byte of the file is delivered, but every byte is still read (and hashed).
  */
 import { isAscii } from 'node:buffer';
 import { openByteSource, type ByteSourceInfo } from './byteSource.js';
@@ -27,6 +31,12 @@ export interface LineSourceOptions {
   encoding?: LineEncoding;
   /** Awaited after the lines of each chunk (about 1 MiB): lets a consumer drain a stream. */
   onChunkEnd?: () => void | Promise<void>;
+  /**
+   * Byte offset in the file (plain files; for gzip, in the decompressed bytes) at which
+   * delivering lines stops: a line is delivered only if its terminator lies before `byte`.
+   * Read at every line, so it may be set during the read. Default: all lines.
+   */
+  until?: { byte: number };
 }
 
 export interface LineSourceStats extends ByteSourceInfo {
@@ -43,7 +53,7 @@ function checkLineLength(carry: Buffer, lineNo: number, path: string): void {
  * LF (10) when the first terminator in `buf` is an LF or a CR followed by LF; CR (13) when it
  * is a CR followed by anything else; -1 when undecided (none yet, or a CR as the last byte).
  */
-function lineTerminator(buf: Buffer): number {
+export function lineTerminator(buf: Buffer): number {
   const lf = buf.indexOf(10);
   const cr = buf.indexOf(13);
   if (cr < 0 || (lf >= 0 && lf <= cr + 1)) return lf < 0 ? -1 : 10;
@@ -68,10 +78,20 @@ export async function forEachLineBytes(
   let terminator = -1; // 10 (LF) or 13 (CR), decided on the first chunk
   let carry: Buffer | null = null;
   let lineNo = 0;
+  const until = options.until ?? { byte: Infinity };
+  let stopped = false; // a line reached `until.byte`: the rest is only read
+  let decoded = 0; // bytes the source gave so far
+  let bufByte = 0; // offset in the (decoded) file of buf[0]
   for await (const chunk of openByteSource(path, stats)) {
+    decoded += chunk.length;
+    if (stopped) continue;
     let buf: Buffer = carry === null ? chunk : Buffer.concat([carry, chunk]);
+    bufByte = decoded - buf.length;
     if (terminator < 0) {
-      if (carry === null && buf.length >= 3 && buf[0] === 0xef && buf[1] === 0xbb && buf[2] === 0xbf) buf = buf.subarray(3);
+      if (carry === null && buf.length >= 3 && buf[0] === 0xef && buf[1] === 0xbb && buf[2] === 0xbf) {
+        buf = buf.subarray(3);
+        bufByte += 3;
+      }
       terminator = lineTerminator(buf);
       if (terminator < 0) {
         carry = buf; // no terminator yet, or a CR as the very last byte: wait for more
@@ -86,16 +106,25 @@ export async function forEachLineBytes(
     let start = 0;
     let end = buf.indexOf(terminator, start);
     while (end >= 0) {
+      if (bufByte + end >= until.byte) {
+        stopped = true;
+        break;
+      }
       const stop = terminator === 10 && end > start && buf[end - 1] === 13 ? end - 1 : end;
       onLine(buf, start, stop, ++lineNo, enc);
       start = end + 1;
       end = buf.indexOf(terminator, start);
     }
+    if (stopped) {
+      carry = null;
+      continue;
+    }
     carry = start < buf.length ? buf.subarray(start) : null;
     if (carry !== null) checkLineLength(carry, lineNo, path);
     if (options.onChunkEnd) await options.onChunkEnd();
   }
-  if (carry !== null && carry.length > 0) {
+  // the last line, with no terminator: delivered when it starts before `until.byte`
+  if (carry !== null && carry.length > 0 && decoded - carry.length < until.byte) {
     const stop = carry[carry.length - 1] === 13 ? carry.length - 1 : carry.length;
     onLine(carry, 0, stop, ++lineNo, asciiOr(carry, encoding));
   }
@@ -104,7 +133,7 @@ export async function forEachLineBytes(
 }
 
 /** 'latin1' for an all-ASCII buffer read as UTF-8 (the same text, a cheaper decoder). */
-function asciiOr(buf: Buffer, encoding: LineEncoding): LineEncoding {
+export function asciiOr(buf: Buffer, encoding: LineEncoding): LineEncoding {
   return encoding === 'utf8' && isAscii(buf) ? 'latin1' : encoding;
 }
 
