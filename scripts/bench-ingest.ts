@@ -1,9 +1,12 @@
 /**
- * Ingestion benchmark: `npx tsx scripts/bench-ingest.ts [--rows N] [--seed N] [--build] [--runs N]`
+ * Ingestion benchmark: `npx tsx scripts/bench-ingest.ts [--rows N] [--seed N] [--build] [--runs N] [--file F]`
  * (npm run bench:ingest). Generates a population-only demo dump (default 1 500 000 rows)
- * into a temporary directory, then measures in one run the wall time of `cat FILE >
+ * into a temporary directory (or reads F), then measures in one run the wall time of `cat FILE >
  * /dev/null` (the floor: reading the bytes) and of `wayward scan FILE --detectors tisserand
- * --quiet` end to end in a child process, with the child's peak RSS. Prints the figures
+ * --quiet` end to end in a child process, with the child's peak RSS; then the read step alone
+ * (loadCatalogue: stream, parse, clean, hash; scripts/bench/readStep.ts in a child process)
+ * on 1 and on 2 threads, alternated, with the ratio and whether the two built the same
+ * catalogue, rejects and accounts. Prints the figures
  * next to the targets and the load average before and after the scan (`uptime`'s figures,
  * os.loadavg); asserts nothing (the machine is shared: figures vary run to run).
  * The temporary directory is removed afterwards.
@@ -125,27 +128,81 @@ function reportScan(scan: ScanRun, summary: ScanSummaryView | null, generatedRow
   }
 }
 
+interface ReadStep { seconds: number; cpuSeconds: number; rows: number; rejects: number; twoThreadFiles: number; sha256: string; maxRssKb: number }
+
+/** The read step alone on `threads` threads, in a child process under /usr/bin/time when there is one. */
+function readStep(file: string, threads: number): ReadStep | null {
+  const script = join(ROOT, 'scripts', 'bench', 'readStep.ts');
+  const tsx = join(ROOT, 'node_modules', 'tsx', 'dist', 'cli.mjs');
+  const args = [tsx, script, file, String(threads)];
+  const useTime = existsSync('/usr/bin/time');
+  const [cmd, argv] = useTime ? ['/usr/bin/time', ['-f', 'maxrss-kb=%M', process.execPath, ...args]] : [process.execPath, args];
+  const r = spawnSync(cmd, argv, { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'], encoding: 'utf8', maxBuffer: 1 << 26 });
+  const line = (r.stdout ?? '').trim().split('\n').pop() ?? '';
+  if (r.status !== 0 || !line.startsWith('{')) {
+    console.log(`  read step on ${threads} thread(s) FAILED (exit ${r.status}):\n${r.stderr}`);
+    return null;
+  }
+  const m = /maxrss-kb=(\d+)/.exec(r.stderr ?? '');
+  return { ...(JSON.parse(line) as Omit<ReadStep, 'maxRssKb'>), maxRssKb: m ? Number(m[1]) : NaN };
+}
+
+/** The read step on 1 and 2 threads, alternated `runs` times: best, spread, ratio, same result. */
+function readSteps(file: string, runs: number): void {
+  const seconds: Record<number, number[]> = { 1: [], 2: [] };
+  const hashes = new Set<string>();
+  for (let run = 1; run <= runs; run++) {
+    for (const threads of [1, 2]) {
+      const before = load();
+      const s = readStep(file, threads);
+      if (s === null) {
+        process.exitCode = 1;
+        return;
+      }
+      seconds[threads].push(s.seconds);
+      hashes.add(s.sha256);
+      console.log(`  read step (loadCatalogue in process), ${threads} thread${threads > 1 ? 's' : ' '}, run ${run}: ${s.seconds.toFixed(2)} s wall, ` +
+        `${s.cpuSeconds.toFixed(2)} s CPU (all threads), ${fmtInt(s.rows / s.seconds)} rows/s, peak RSS ${(s.maxRssKb / 1024).toFixed(0)} MB, ` +
+        `parsed on two threads: ${s.twoThreadFiles > 0 ? 'yes' : 'no'}; ${before} before, ${load()} after`);
+    }
+  }
+  const best = (t: number): number => Math.min(...seconds[t]);
+  const worst = (t: number): number => Math.max(...seconds[t]);
+  console.log(`  read step best ${best(1).toFixed(2)} s (1 thread) / ${best(2).toFixed(2)} s (2 threads), ratio ${(best(1) / best(2)).toFixed(2)}; ` +
+    `spread ${best(1).toFixed(2)}–${worst(1).toFixed(2)} / ${best(2).toFixed(2)}–${worst(2).toFixed(2)} s; ` +
+    `the same catalogue, rejects and accounts on 1 and 2 threads: ${hashes.size === 1 ? 'yes' : 'NO'}`);
+  if (hashes.size !== 1) process.exitCode = 1;
+}
+
 async function main(): Promise<void> {
   const o = new Command('bench-ingest')
     .option('--rows <n>', 'rows in the generated dump', integerAtLeast(100), 1_500_000)
     .option('--seed <n>', 'generator seed', integerAtLeast(0), DEFAULT_SEED)
     .option('--build', 'rebuild dist/ first even if it exists', false)
     .option('--runs <n>', 'scans of the one generated dump (the machine is shared: compare runs)', integerAtLeast(1), 1)
+    .option('--file <path>', 'an orbit export file to read instead of a generated dump')
+    .option('--no-scan', 'the read step alone (no scan end to end)')
     .parse()
-    .opts<{ rows: number; seed: number; build: boolean; runs: number }>();
+    .opts<{ rows: number; seed: number; build: boolean; runs: number; file?: string; scan: boolean }>();
   ensureBuilt(o.build);
   const dir = mkdtempSync(join(tmpdir(), 'wayward-bench-ingest-'));
   try {
-    const t0 = process.hrtime.bigint();
-    const gen = await generateDemo({ seed: o.seed, outDir: join(dir, 'dump'), bodies: o.rows, populationOnly: true });
-    const genSeconds = secondsSince(t0);
-    const file = gen.files[0];
+    let file: string;
+    if (o.file !== undefined) {
+      file = resolve(o.file);
+      console.log(`ingest benchmark: ${file}, ${(statSync(file).size / 1e6).toFixed(1)} MB`);
+    } else {
+      const t0 = process.hrtime.bigint();
+      const gen = await generateDemo({ seed: o.seed, outDir: join(dir, 'dump'), bodies: o.rows, populationOnly: true });
+      const genSeconds = secondsSince(t0);
+      file = gen.files[0];
+      console.log(`ingest benchmark: ${fmtInt(o.rows)} rows (seed ${o.seed}), ${(statSync(file).size / 1e6).toFixed(1)} MB, ${gen.orbitLines} lines`);
+      console.log(`  generation (not measured below): ${genSeconds.toFixed(2)} s, ${fmtInt(o.rows / genSeconds)} rows/s`);
+    }
     const mb = statSync(file).size / 1e6;
-    console.log(`ingest benchmark: ${fmtInt(o.rows)} rows (seed ${o.seed}), ${mb.toFixed(1)} MB, ${gen.orbitLines} lines`);
-    console.log(`  generation (not measured below): ${genSeconds.toFixed(2)} s, ${fmtInt(o.rows / genSeconds)} rows/s`);
     const catSeconds = timeCat(file);
     console.log(`  cat FILE > /dev/null:            ${catSeconds.toFixed(3)} s, ${(mb / catSeconds).toFixed(0)} MB/s`);
-    for (let run = 1; run <= o.runs; run++) {
+    for (let run = 1; run <= (o.scan ? o.runs : 0); run++) {
       console.log(`  run ${run} of ${o.runs}, before the scan: ${load()}`);
       const scan = timeScan(file, join(dir, `out${run}`));
       console.log(`  after the scan: ${load()}`);
@@ -157,6 +214,7 @@ async function main(): Promise<void> {
       reportScan(scan, readSummary(join(dir, `out${run}`)), o.rows);
       console.log(`  ratio scan / cat: ${(scan.seconds / catSeconds).toFixed(1)}`);
     }
+    readSteps(file, o.runs);
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -16,6 +16,7 @@ export interface LoadOptions extends BuilderOptions {
   format?: InputFormat; // force a format instead of sniffing each file
   columns?: Record<string, string>; // explicit CSV column mapping: field → header
   csvKind?: CsvKindChoice; // CSV rows: classed by designation ('auto') or all one kind
+  threads?: number; // ≥ 2: a large plain orbit export file is parsed on two threads (same result); default 1
 }
 
 export interface LoadResult {
@@ -23,6 +24,7 @@ export interface LoadResult {
   rejects: Reject[];
   files: FileAccount[];
   errors: UnreadableInputError[];
+  twoThreadFiles: number; // inputs parsed on two threads (see LoadOptions.threads)
 }
 
 /**
@@ -48,16 +50,18 @@ export async function loadCatalogue(paths: readonly string[], opts: LoadOptions 
   const builder = new CatalogueBuilder({ expectedRows: expectedRows(paths), ...opts });
   const files: FileAccount[] = [];
   const errors: UnreadableInputError[] = [];
+  let twoThreadFiles = 0;
   for (const path of paths) {
     builder.beginFile(path); // input number = index in `files`
     const readBefore = builder.read;
     try {
       const info = await readOrbitFile(
         path,
-        { format: opts.format, columns: opts.columns, csvKind: opts.csvKind },
+        { format: opts.format, columns: opts.columns, csvKind: opts.csvKind, threads: opts.threads },
         (row: OrbitRow, line: number, text: () => string) => builder.add(row, path, line, text),
         (err) => builder.rejectUnparsed(path, err.line, err.reason, err.text),
       );
+      if (info.parseThreads === 2) twoThreadFiles++;
       files.push({
         file: path, format: info.format, sha256: info.sha256,
         rows: { read: builder.read - readBefore, accepted: 0, rejected: 0 },
@@ -80,5 +84,5 @@ export async function loadCatalogue(paths: readonly string[], opts: LoadOptions 
     f.rows.rejected = builder.rejectedIn(k);
     f.rows.accepted = f.rows.read - f.rows.rejected;
   });
-  return { catalogue: builder.finish(), rejects: builder.rejects, files, errors };
+  return { catalogue: builder.finish(), rejects: builder.rejects, files, errors, twoThreadFiles };
 }

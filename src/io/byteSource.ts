@@ -12,7 +12,7 @@ import { UnreadableInputError } from './errors.js';
 import { sha256Of, type Sha256Stream } from './sha256Thread.js';
 
 /** Read size; 1 MiB keeps the per-chunk overhead small against the per-line work. */
-const CHUNK_BYTES = 1 << 20;
+export const CHUNK_BYTES = 1 << 20;
 /** How much decoded content is checked for NUL bytes to call a file binary. */
 const BINARY_PROBE_BYTES = 64 * 1024;
 

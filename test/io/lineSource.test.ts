@@ -1,7 +1,8 @@
 /**
  * Line source and whole-file errors: missing file, directory, empty file, binary file,
  * gzip, CRLF / CR endings, a byte-order mark, chunk boundaries inside a CRLF pair and
- * inside a multi-byte character, standard input. Checksums against the SHA-256 examples of
+ * inside a multi-byte character, lines across many chunk boundaries (against String.split),
+ * standard input. Checksums against the SHA-256 examples of
  * FIPS 180-2 (appendix B.1, "abc"; the empty-message digest), from memory.
  */
 import { spawnSync } from 'node:child_process';
@@ -11,6 +12,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { afterAll, describe, expect, it } from 'vitest';
+import { seededRandom } from '../../src/core/random.js';
 import { forEachLine, UnreadableInputError } from '../../src/io/index.js';
 import { HASH_THREAD_MIN_BYTES, sha256Of } from '../../src/io/sha256Thread.js';
 import { CAN_LIST_OPEN_FILES, closedWithin } from './openFiles.js';
@@ -124,6 +126,17 @@ describe('contents', () => {
     const r = await lines(file('split.txt', `${first}\r\n${second}tail\r\nend`));
     expect(r.texts.map((t) => t.length)).toEqual([chunk - 1, chunk - 2 + 5, 3]);
     expect(r.texts[1].endsWith('étail')).toBe(true);
+  });
+
+  it('lines of every length across many chunk boundaries, one longer than two chunks: the lines String.split gives', async () => {
+    const random = seededRandom(7);
+    const parts: string[] = [];
+    for (let k = 0; k < 3000; k++) parts.push('x'.repeat(Math.floor(random() * 2000)) + (k % 7 === 0 ? 'é' : ''));
+    parts.splice(1500, 0, 'y'.repeat((2 << 20) + 123)); // spans three chunks
+    const text = parts.join('\r\n');
+    const r = await lines(file('many.txt', text));
+    expect(r.texts).toEqual(text.split('\r\n'));
+    expect(r.nos[r.nos.length - 1]).toBe(parts.length);
   });
 
   it('an input past HASH_THREAD_MIN_BYTES is hashed on a worker thread: the digest node:crypto gives on the same bytes', async () => {
