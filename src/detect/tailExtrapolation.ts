@@ -116,13 +116,16 @@ export function upperTailProbability(sortedAsc: Float64Array, fit: UpperTailFit 
 /**
  * upperTailProbability of each value, into new columns: the same numbers, with the counts of the
  * sample at least as high found once per value and through a guide table (tailCountsAtLeast.ts).
+ * `counts`: those counts when the caller has them already (countsAtLeast(sortedAsc, xs)).
  */
-export function upperTailProbabilities(sortedAsc: Float64Array, fit: UpperTailFit | null, xs: ArrayLike<number>): { p: Float64Array; from: Uint8Array } {
+export function upperTailProbabilities(
+  sortedAsc: Float64Array, fit: UpperTailFit | null, xs: ArrayLike<number>, counts: Int32Array = countsAtLeast(sortedAsc, xs),
+): { p: Float64Array; from: Uint8Array } {
   if (fit !== null && fit.sampleSize !== sortedAsc.length) {
     throw new RangeError(`upperTailProbabilities: the fit is of a sample of ${fit.sampleSize}, not ${sortedAsc.length}`);
   }
+  if (counts.length !== xs.length) throw new RangeError(`upperTailProbabilities: ${counts.length} counts for ${xs.length} values`);
   const n = sortedAsc.length;
-  const counts = countsAtLeast(sortedAsc, xs);
   const p = new Float64Array(xs.length);
   const from = new Uint8Array(xs.length); // TAIL_FROM_FRACTION (0) unless set below
   for (let j = 0; j < xs.length; j++) {

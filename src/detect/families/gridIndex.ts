@@ -71,6 +71,9 @@ export function buildGridIndex(x: Float64Array, y: Float64Array, z: Float64Array
   return { x, y, z, radius, cellEdge, minX, minY, minZ, nx, ny, nz, cellKeys, cellStarts, pointIds, leftOut: n - finite };
 }
 
+/** Radix digits of a key sort: at most this many bits (our choice: 4 096 counters stay in the cache). */
+const KEY_DIGIT_BITS_MAX = 12;
+
 /** Ids of the points with a finite key, ordered by key then id. */
 function sortIdsByKey(key: Float64Array, finite: number): Int32Array {
   const n = key.length;
@@ -80,6 +83,7 @@ function sortIdsByKey(key: Float64Array, finite: number): Int32Array {
   const idBits = Math.max(1, Math.ceil(Math.log2(n + 1)));
   let maxKey = 0;
   for (let k = 0; k < m; k++) if (key[ids[k]] > maxKey) maxKey = key[ids[k]];
+  if (maxKey < 2 ** 32) return radixByKey(key, ids, maxKey);
   if ((maxKey + 1) * 2 ** idBits <= Number.MAX_SAFE_INTEGER) {
     // Fast path: key and id packed into one exact double, sorted by the typed-array sort.
     const packed = new Float64Array(m);
@@ -90,6 +94,38 @@ function sortIdsByKey(key: Float64Array, finite: number): Int32Array {
     return ids;
   }
   return ids.sort((p, q) => key[p] - key[q] || p - q);
+}
+
+/**
+ * Ids (ascending) ordered by their keys (whole numbers below 2³²), ties in id order: a
+ * least-significant-digit radix sort (common practice), stable, so ids of one key stay ascending.
+ * The packed-double sort above it took about 40 ms for the 400 000 bodies of a belt region,
+ * about half the grid's build (CPU profile of the clustering); a few counting passes take a
+ * fraction of that.
+ */
+function radixByKey(key: Float64Array, ids: Int32Array, maxKey: number): Int32Array {
+  const m = ids.length;
+  const bits = Math.max(1, Math.ceil(Math.log2(maxKey + 1)));
+  const passes = Math.ceil(bits / KEY_DIGIT_BITS_MAX);
+  const digitBits = Math.ceil(bits / passes);
+  const mask = (1 << digitBits) - 1;
+  let keys = new Uint32Array(m), order: Int32Array = ids;
+  for (let t = 0; t < m; t++) keys[t] = key[ids[t]];
+  let keys2 = new Uint32Array(m), order2: Int32Array = new Int32Array(m);
+  const count = new Uint32Array(mask + 2);
+  for (let pass = 0, shift = 0; pass < passes; pass++, shift += digitBits) {
+    count.fill(0);
+    for (let t = 0; t < m; t++) count[((keys[t] >>> shift) & mask) + 1]++;
+    for (let d = 0; d <= mask; d++) count[d + 1] += count[d];
+    for (let t = 0; t < m; t++) {
+      const w = count[(keys[t] >>> shift) & mask]++;
+      keys2[w] = keys[t];
+      order2[w] = order[t];
+    }
+    [keys, keys2] = [keys2, keys];
+    [order, order2] = [order2, order];
+  }
+  return order;
 }
 
 /** Distinct keys along the sorted ids and where each run starts. */

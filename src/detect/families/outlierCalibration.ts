@@ -108,13 +108,21 @@ export function nullCataloguePlan(catalogueSize: number, maxReplicates: number, 
  * False-alarm probability of each score under the null model: the null tail fraction, or beyond
  * the pool's resolution the tail fit's extrapolation; `from` says which (tailExtrapolation.ts codes).
  */
-export function nullFalseAlarmProbs(scores: Float64Array, cal: OutlierCalibration): { p: Float64Array; from: Uint8Array } {
-  return upperTailProbabilities(cal.nullScoresSorted, cal.tail.fit, scores);
+export function nullFalseAlarmProbs(scores: Float64Array, cal: OutlierCalibration, counts?: Int32Array): { p: Float64Array; from: Uint8Array } {
+  return upperTailProbabilities(cal.nullScoresSorted, cal.tail.fit, scores, counts);
 }
 
-/** Null tail fraction of each score: (1 + #{null ≥ s}) / (n + 1). */
-export function nullTailFractions(scores: Float64Array, cal: OutlierCalibration): Float64Array {
-  const counts = countsAtLeast(cal.nullScoresSorted, scores); // upperTailFraction's counts, through a guide table
+/**
+ * The pooled null scores at least as high as each score, #{null ≥ s}: what nullTailFractions and
+ * nullFalseAlarmProbs both read, found once for the two (through a guide table, tailCountsAtLeast.ts).
+ */
+export function nullCountsAtLeast(scores: Float64Array, cal: OutlierCalibration): Int32Array {
+  return countsAtLeast(cal.nullScoresSorted, scores);
+}
+
+/** Null tail fraction of each score: (1 + #{null ≥ s}) / (n + 1); `counts` from nullCountsAtLeast when at hand. */
+export function nullTailFractions(scores: Float64Array, cal: OutlierCalibration, counts: Int32Array = nullCountsAtLeast(scores, cal)): Float64Array {
+  if (counts.length !== scores.length) throw new RangeError(`nullTailFractions: ${counts.length} counts for ${scores.length} scores`);
   const out = new Float64Array(scores.length);
   for (let j = 0; j < scores.length; j++) out[j] = (1 + counts[j]) / (cal.nullScoresSorted.length + 1);
   return out;

@@ -20,7 +20,7 @@ import type { Random } from '../../core/random.js';
 import { orbitalSpeedMPerS } from './metricVelocity.js';
 import { scaledProperCoordinates } from './outlierMetric.js';
 import { buildOutlierBackground } from './outlierBackground.js';
-import { calibrateIsolation, nullCataloguePlan, nullFalseAlarmProbs, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
+import { calibrateIsolation, nullCataloguePlan, nullCountsAtLeast, nullFalseAlarmProbs, nullTailFractions, type OutlierCalibration } from './outlierCalibration.js';
 import type { UpperTailFitResult } from '../tailExtrapolation.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores, type IsolationOptions, type IsolationScores } from './outlierScore.js';
 import { SERIAL_KNEAREST, type KNearestSearch } from './kNearestSearch.js';
@@ -103,8 +103,9 @@ export function calibratedIsolation(
   const background = buildOutlierBackground(xyz, scores, options.weightCap, scored);
   const plan = nullCataloguePlan(nScored, options.replicates, options.nullScoresWanted ?? DEFAULT_NULL_SCORES_WANTED);
   const calibration = calibrateIsolation(background, n, options, plan.replicates, random, plan.scoredPerReplicate, search, runner);
-  const nullTailFraction = nullTailFractions(scores.score, calibration);
-  const fap = nullFalseAlarmProbs(scores.score, calibration);
+  const counts = nullCountsAtLeast(scores.score, calibration); // read by both below: found once
+  const nullTailFraction = nullTailFractions(scores.score, calibration, counts);
+  const fap = nullFalseAlarmProbs(scores.score, calibration, counts);
   if (scored !== null) {
     for (let j = 0; j < n; j++) if (scored[j] === 0) { nullTailFraction[j] = NaN; fap.p[j] = NaN; }
   }

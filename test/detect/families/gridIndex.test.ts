@@ -84,6 +84,27 @@ describe('grid index against brute force', () => {
     });
   }
 
+  it('files the points by cell key, then by id, whatever the width of the keys (radix passes: one, several; a key beyond 32 bits)', () => {
+    // The definition of the order checked directly: each point's key from its cell, (cx·ny + cy)·nz + cz.
+    for (const spread of [3, 100, 100_000]) {
+      fc.assert(
+        fc.property(fc.array(fc.tuple(fc.double({ min: -1, max: 1, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true }), fc.double({ min: -1, max: 1, noNaN: true }), fc.boolean()), { maxLength: 300 }), (raw) => {
+          // half the points drawn again near earlier ones, so that cells hold several ids
+          const pts = raw.map(([a, b, c, near], t) => (near && t > 0 ? [raw[t >> 1][0] * spread + a * 0.3, raw[t >> 1][1] * spread, raw[t >> 1][2] * spread] : [a * spread, b * spread, c * spread]));
+          const c: Cloud = { x: Float64Array.from(pts, (p) => p[0]), y: Float64Array.from(pts, (p) => p[1]), z: Float64Array.from(pts, (p) => p[2]) };
+          const g = buildGridIndex(c.x, c.y, c.z, 1);
+          const keyOf = (k: number) => (Math.floor((c.x[k] - g.minX) / g.cellEdge) * g.ny + Math.floor((c.y[k] - g.minY) / g.cellEdge)) * g.nz + Math.floor((c.z[k] - g.minZ) / g.cellEdge);
+          const want = Array.from(c.x, (_, k) => k).sort((p, q) => keyOf(p) - keyOf(q) || p - q);
+          expect(Array.from(g.pointIds)).toEqual(want);
+          const keys = [...new Set(want.map(keyOf))];
+          expect(Array.from(g.cellKeys)).toEqual(keys);
+          for (let t = 0; t < keys.length; t++) for (let a = g.cellStarts[t]; a < g.cellStarts[t + 1]; a++) expect(keyOf(g.pointIds[a])).toBe(keys[t]);
+        }),
+        { numRuns: 60 },
+      );
+    }
+  });
+
   it('points with a NaN coordinate are left out and counted, never paired', () => {
     const x = Float64Array.from([0, 0, NaN, 0.1]);
     const y = Float64Array.from([0, 0, 0, NaN]);

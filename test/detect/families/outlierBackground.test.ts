@@ -58,17 +58,20 @@ describe('null background', () => {
     const at = Float64Array.from({ length: 3 * m }, (_, t) => (t % 3 === 0 ? Math.floor(t / 3) : 0));
     const score = Float64Array.from({ length: m }, (_, j) => (j % 700 < 300 ? -Infinity : j % 700 < 350 ? -30 + 10 * random() : Math.log(random())));
     const fake = { score, neighbours: { k: 1, distance: new Float64Array(m), index: new Int32Array(m) } } as unknown as Parameters<typeof buildOutlierBackground>[1];
-    const bg = buildOutlierBackground(at, fake, 8);
-    const draws = drawFromBackground(bg, 50_000, seededRandom(25));
-    const replay = seededRandom(25);
-    const total = bg.cumulative[m - 1];
-    for (let j = 0; j < 50_000; j++) {
-      const u = replay() * total;
-      let lo = 0, hi = m - 1;
-      while (lo < hi) { const mid = (lo + hi) >>> 1; if (bg.cumulative[mid] > u) hi = mid; else lo = mid + 1; }
-      let x: number, y: number, z: number;
-      do { x = 2 * replay() - 1; y = 2 * replay() - 1; z = 2 * replay() - 1; } while (x * x + y * y + z * z > 1);
-      if (draws[3 * j] !== lo) expect(`draw ${j}: body ${draws[3 * j]}`).toBe(`draw ${j}: body ${lo}`);
+    // weight cap 8: weights 0 to 1; cap ∞: every weight 1, where the draw reads the body off u itself
+    for (const cap of [8, Infinity]) {
+      const bg = buildOutlierBackground(at, fake, cap);
+      const draws = drawFromBackground(bg, 50_000, seededRandom(25));
+      const replay = seededRandom(25);
+      const total = bg.cumulative[m - 1];
+      for (let j = 0; j < 50_000; j++) {
+        const u = replay() * total;
+        let lo = 0, hi = m - 1;
+        while (lo < hi) { const mid = (lo + hi) >>> 1; if (bg.cumulative[mid] > u) hi = mid; else lo = mid + 1; }
+        let x: number, y: number, z: number;
+        do { x = 2 * replay() - 1; y = 2 * replay() - 1; z = 2 * replay() - 1; } while (x * x + y * y + z * z > 1);
+        if (draws[3 * j] !== lo) expect(`cap ${cap}, draw ${j}: body ${draws[3 * j]}`).toBe(`cap ${cap}, draw ${j}: body ${lo}`);
+      }
     }
   });
 });

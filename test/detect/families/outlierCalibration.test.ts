@@ -7,7 +7,7 @@ import { countAtLeast } from '../../../src/detect/empiricalTail.js';
 import { scaledProperCoordinates } from '../../../src/detect/families/outlierMetric.js';
 import { DEFAULT_ISOLATION_OPTIONS, isolationScores } from '../../../src/detect/families/outlierScore.js';
 import { buildOutlierBackground, drawFromBackground } from '../../../src/detect/families/outlierBackground.js';
-import { calibrateIsolation, nullCataloguePlan, nullTailFractions, replicateSeeds } from '../../../src/detect/families/outlierCalibration.js';
+import { calibrateIsolation, nullCataloguePlan, nullCountsAtLeast, nullFalseAlarmProbs, nullTailFractions, replicateSeeds } from '../../../src/detect/families/outlierCalibration.js';
 import { calibratedIsolation, DEFAULT_PROPER_OUTLIER_OPTIONS, properOutliers } from '../../../src/detect/families/outliers.js';
 import { distinctProperElements } from './helpers/properElementsFixture.js';
 import { describeRate, nullRate } from './helpers/nullRate.js';
@@ -82,6 +82,20 @@ describe('null tail fractions of isolation scores', () => {
       console.log(`broken calibration: ${describeRate(r)}`);
       expect(r.within).toBe(false);
     }
+  });
+
+  it('from counts found once: the same tail fractions and false-alarm probabilities, bit for bit (counts of the wrong length refused)', () => {
+    // the definition checked: (1 + #{null ≥ s}) / (N + 1), the plus-one rule (Davison & Hinkley 1997, eq. 4.11)
+    const counts = nullCountsAtLeast(nullScores, calibration);
+    const sorted = calibration.nullScoresSorted;
+    for (const j of [0, 1, 17, n >> 1, n - 1]) expect(counts[j]).toBe(countAtLeast(sorted, nullScores[j]));
+    const bytes = (x: ArrayBufferView) => Buffer.from(x.buffer, x.byteOffset, x.byteLength);
+    expect(bytes(nullTailFractions(nullScores, calibration, counts)).equals(bytes(fractions))).toBe(true);
+    const once = nullFalseAlarmProbs(nullScores, calibration, counts), alone = nullFalseAlarmProbs(nullScores, calibration);
+    expect(bytes(once.p).equals(bytes(alone.p))).toBe(true);
+    expect(bytes(once.from).equals(bytes(alone.from))).toBe(true);
+    expect(() => nullTailFractions(nullScores, calibration, counts.subarray(1))).toThrow(RangeError);
+    expect(() => nullFalseAlarmProbs(nullScores, calibration, counts.subarray(1))).toThrow(RangeError);
   });
 
   it('are reproducible byte for byte from the seed, and the seed matters', () => {
