@@ -53,7 +53,7 @@ export interface ScanOptions {
   coorbitalPlanet?: PlanetName[]; // --coorbital-planet; default: COORBITAL_DEFAULTS.planets
   coorbitalYears?: number; // N-body window ± years
   coorbitalBudget?: number; // N-body budget, CPU-seconds (bodies at the nominal cost)
-  threads?: number; // worker threads for N-body work, co-orbital predictions and the families' QRL levels and neighbour searches
+  threads?: number; // worker threads for reading large plain orbit-export files, N-body work, co-orbital predictions and the families' QRL levels and neighbour searches
   families?: string; // --families FILE: a user's family membership list naming the clusters
   familyFap?: number; // --family-fap: false-alarm threshold of the family outliers
   familyFdr?: number; // --family-fdr: false-discovery level: family outliers with Benjamini–Hochberg q below it are candidates
@@ -173,7 +173,7 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
   progress?.start('reading');
   const notAfterJdUtc = opts.notAfter ?? endOfUtcDayJd(Date.now());
   const obsRead = opts.obs === undefined ? null : await readObsDir(opts.obs, opts.obscodes, notAfterJdUtc);
-  const loaded = await loadCatalogue(files, { format: opts.inputFormat, columns: opts.columns, csvKind: opts.csvKind });
+  const loaded = await loadCatalogue(files, { format: opts.inputFormat, columns: opts.columns, csvKind: opts.csvKind, threads: opts.threads ?? COORBITAL_DEFAULTS.threads });
   progress?.end();
   if (loaded.files.length > 0 && loaded.errors.length === loaded.files.length) {
     throw new NoInputReadError(loaded.errors.map(inputErrorLine), opts.out);
@@ -237,7 +237,7 @@ async function scanInto(stage: OutputStage, opts: ScanOptions, progress?: Progre
   timing.totalSeconds = seconds(tStart);
   const summary = opts.reproducible
     ? forReport
-    : { ...buildSummary({ ...base, timing, peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024) }), ...astrometry };
+    : { ...buildSummary({ ...base, timing, peakRssMb: Math.round(process.resourceUsage().maxRSS / 1024), twoThreadReadFiles: loaded.twoThreadFiles }), ...astrometry };
   await writeFileAtomic(stage.path('summary.json'), JSON.stringify(summary, null, 2) + '\n');
   return { summary, ranked, errors: loaded.errors.map(inputErrorLine), warnings, outDir: opts.out };
 }
@@ -291,7 +291,7 @@ export function registerScan(program: Command): void {
       COORBITAL_DEFAULTS.windowYears, String(COORBITAL_DEFAULTS.windowYears), parsePositiveInteger))
     .addOption(withDefault('--coorbital-budget <s>', 'CPU-seconds of N-body confirmation, as a body count at a fixed nominal cost (outputs do not depend on machine speed)',
       COORBITAL_DEFAULTS.budgetCpuSeconds, String(COORBITAL_DEFAULTS.budgetCpuSeconds), parseNonNegativeNumber))
-    .addOption(withDefault('--threads <n>', 'worker threads for co-orbital predictions, N-body work and the families\' QRL levels and neighbour searches (outputs identical for any number)',
+    .addOption(withDefault('--threads <n>', 'worker threads for reading large orbit-export files, co-orbital predictions, N-body work and the families\' QRL levels and neighbour searches (outputs identical for any number)',
       COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
     .option('--families <file>', 'family membership list (CSV/TSV: designation and family columns) whose labels name the families found')
     .addOption(withDefault('--family-fap <p>', 'family outliers: considered below this false-alarm probability',

@@ -26,6 +26,7 @@ export interface SummaryInput {
   options: Record<string, unknown>;
   timing?: Record<string, number>;
   peakRssMb?: number;
+  twoThreadReadFiles?: number; // input files parsed on two threads (depends on --threads and file size)
 }
 
 function qualityCounts(cat: Catalogue): Record<string, number> {
@@ -102,6 +103,8 @@ export function buildSummary(input: SummaryInput): ScanSummary {
     options: input.options,
   };
   if (input.timing) summary.timing = input.timing;
-  if (input.peakRssMb !== undefined) summary.resources = { peakRssMb: input.peakRssMb };
+  if (input.peakRssMb !== undefined) {
+    summary.resources = { peakRssMb: input.peakRssMb, ...(input.twoThreadReadFiles !== undefined ? { twoThreadReadFiles: input.twoThreadReadFiles } : {}) };
+  }
   return summary;
 }

@@ -45,5 +45,5 @@ export interface ScanSummary {
   detectors: Record<string, DetectorSummary>; // by id, in the order they ran
   options: Record<string, unknown>;
   timing?: Record<string, number>; // seconds per stage (omitted with --reproducible)
-  resources?: { peakRssMb: number }; // omitted with --reproducible
+  resources?: { peakRssMb: number; twoThreadReadFiles?: number }; // omitted with --reproducible; files parsed on two threads
 }

@@ -46,3 +46,29 @@ describe('loadCatalogue on two threads', () => {
     }
   }, 120_000);
 });
+
+describe('scan reading on two threads', () => {
+  it('the demo catalogue five times over: every output file byte-identical with --threads 1 and 2', async () => {
+    const { runCli } = await import('./cliHarness.js');
+    const { readdirSync } = await import('node:fs');
+    const demo = readFileSync(DEMO);
+    const file = join(dir, 'demo-x5-scan.txt');
+    writeFileSync(file, Buffer.concat([demo, demo, demo, demo, demo]));
+    const outs = ['1', '2'].map((n) => {
+      const out = join(dir, `scan-${n}`);
+      const r = runCli(['scan', file, '-d', 'tisserand', '--threads', n, '--reproducible', '--quiet', '--out', out]);
+      expect(r.status, r.stderr).toBe(0);
+      return out;
+    });
+    const names = readdirSync(outs[0]).sort();
+    expect(readdirSync(outs[1]).sort()).toEqual(names);
+    expect(names).toContain('candidates.csv');
+    for (const name of names) {
+      expect(readFileSync(join(outs[1], name)).equals(readFileSync(join(outs[0], name))), name).toBe(true);
+    }
+    // without --reproducible the summary says how many files were read on two threads
+    const timed = join(dir, 'scan-2-timed');
+    expect(runCli(['scan', file, '-d', 'tisserand', '--threads', '2', '--quiet', '--out', timed]).status).toBe(0);
+    expect(JSON.parse(readFileSync(join(timed, 'summary.json'), 'utf8')).resources.twoThreadReadFiles).toBe(1);
+  }, 120_000);
+});
