@@ -101,6 +101,8 @@ export interface TrialResult {
    * parameter and σ (NaN when it failed too or for null trials).
    */
   alone: { value: number; sigma: number } | null;
+  /** Gravity only failed from the truth elements and was fitted from the model's solution (modelFits.ts). */
+  gravityRestarted?: boolean;
 }
 
 export interface BinomialShare {
@@ -255,6 +257,7 @@ export function runTrial(kind: InjectionKind, injectedMagnitude: number, seed: n
     return {
       ...base, preferred: cmp.preferred as NongravModelId, failure: '',
       gravityChi2PerDof: g.chi2 / (g.nResiduals - 6), rejected: mf.inSet.filter((x) => !x).length, alone: null,
+      gravityRestarted: mf.gravityRestart !== null,
       models: models.map((id) => {
         const row = cmp.rows.find((x) => x.id === id);
         const fit = mf.fits.find((f) => f.id === id);
@@ -435,6 +438,8 @@ export function formatInjectionReport(run: InjectionRun): string {
     // 1.4826 × median absolute deviation: σ of a normal sample, robust to a few wild pulls (common practice).
     const mad = 1.4826 * median(pulls.map((p) => Math.abs(p - median(pulls))));
     out.push(`within 1σ over every converged trial: ${pct(binomialShare(k, n))}; pulls: mean ${m.toFixed(2)}, standard deviation ${sd.toFixed(2)}, 1.4826·MAD ${mad.toFixed(2)} (nominal 0, 1, 1)`);
+    const restarted = run.trials.filter((t) => t.kind === rows[0].kind && t.gravityRestarted === true).length;
+    out.push(`gravity only fitted from the model's solution (it failed from the truth elements): ${restarted} trial${restarted === 1 ? '' : 's'}`);
     out.push(`smallest injected value detected in ≥ 50 % of trials: ${Number.isNaN(thr) ? 'none on the grid' : thr.toExponential(1) + ' ' + unit}`
       + (Number.isNaN(half) ? '' : `; 50 % crossed at ${half.toExponential(1)} ${unit} (log-linear between grid values)`));
   };

@@ -46,6 +46,7 @@ export function checkJsonText(run: CheckRun): string {
     verdict: r.verdict, preferred: r.preferred, preferredRule: r.comparison.rule, preferredReason: r.comparison.reason,
     pValueNullHypothesis: r.comparison.nullHypothesis,
     comparisonSet: { from: r.comparisonSetFrom, rule: r.comparisonSetRule },
+    gravityRestart: r.gravityRestart,
     modelsRequested: run.models,
     models,
     guards: {

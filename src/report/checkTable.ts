@@ -33,5 +33,7 @@ export function checkTableRows(r: CheckResult): string[][] {
 export function checkTableText(r: CheckResult): string {
   return textTable(CHECK_TABLE_HEADER, checkTableRows(r), [false, false, true, true, true, true, true, true, true])
     + `\n* preferred (${r.comparison.rule}); kept/rejected on the comparison set, own = the model's own outlier rejections`
+    + (r.gravityRestart === null ? ''
+      : `\ngravity: fitted from the ${r.gravityRestart.from} solution on the observations ${r.gravityRestart.from} kept, no rejections of its own; from the start given it failed: ${r.gravityRestart.firstFailure}`)
     + r.failures.map((x) => `\n${x.id}: not compared, its fit failed: ${x.message}`).join('');
 }

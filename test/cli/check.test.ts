@@ -59,6 +59,8 @@ describe('check on the demo body (synthetic: radiation pressure planted)', () =>
     expect(j.models.srp.pValue).toBeLessThan(0.0027);
     expect(j.models.srp.deltaBic).toBeLessThan(0);
     expect(j.pValueNullHypothesis).toContain('gravity only');
+    // Gravity only converged from the elements row: no restart from a model's solution.
+    expect(j.gravityRestart).toBeNull();
     // Four stations, each with ≥ 5 % of the 480 (data/demo/check/README.md): four refits, the signal stays.
     expect(j.guards.leaveOneStationOut?.drops.map((d) => d.station)).toEqual(['703', 'F51', 'G96', 'W84']);
     expect(j.guards.leaveOneStationOut?.drops.every((d) => d.verdict === 'persists')).toBe(true);

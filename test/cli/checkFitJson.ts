@@ -9,7 +9,7 @@ export const SAMPLE = `${FIX}/astrometry-80col-sample.txt`;
 
 interface Param { value: number; sigma: number }
 export interface FitJson {
-  verdict: string; preferred: string; pValueNullHypothesis: string;
+  verdict: string; preferred: string; pValueNullHypothesis: string; gravityRestart: { from: string; firstFailure: string } | null;
   models: Record<string, { params: Record<string, Param & { assumedCR?: number }>; chi2: number; weightedRmsArcsec: number; kept: number; rejected: number; deltaChi2: number; pValue: number | null; deltaBic: number }>;
   guards: { leaveOneStationOut: { drops: { station: string; verdict: string }[] } | null; runsTest: unknown; stationMeans: unknown };
   plausibility: { srp: { judgement: { verdict: string } } | null };

@@ -3,16 +3,20 @@
  * gravity-only solution (its parameters solved for as the model catalogue says, starting at 0),
  * every fit with outlier rejection; then the comparison set (comparisonSet.ts) and every model
  * not already on it refitted there, without rejection, from its own solution. A model whose
- * fit fails is listed as failed and left out of the comparison; a failed gravity-only fit
- * fails the run (OrbitFitError, with its numbers). The fits are asked for in batches of
+ * fit fails is listed as failed and left out of the comparison. When gravity only fails from the
+ * start (a strong push can leave it rejecting most of the places it moved until the rest no longer
+ * fix the state), the models are fitted from that start instead and gravity only is fitted again
+ * from the converged one that rejected the fewest, on the observations that one kept and without
+ * rejection of its own (so its χ² there is what gravity alone can do); only when that fails too,
+ * or no model converges, does the run fail (OrbitFitError, with its numbers). The fits are asked for in batches of
  * independent ones (checkFitter.ts): here one after another, or on worker threads, with the same
  * result.
  */
 import type { ObservationSigma } from '../observationWeights.js';
-import type { OrbitFit, OrbitFitStart } from '../orbitFitTypes.js';
+import { OrbitFitError, type OrbitFit, type OrbitFitStart } from '../orbitFitTypes.js';
 import type { FitParameter } from '../trajectoryPartials.js';
 import { NONGRAV_MODELS, type NongravModel, type NongravModelId } from '../models/index.js';
-import { runStepsHere, runStepsOn, type CheckFitInputs, type CheckFitter, type FitSteps } from './checkFitter.js';
+import { runStepsHere, runStepsOn, type CheckFitInputs, type CheckFitter, type FitOutcome, type FitSteps } from './checkFitter.js';
 import { comparisonSetSource, indicesOutside, keepsExactly, keptMask, setStatistics } from './comparisonSet.js';
 import type { CheckModelFailure, CheckModelFit } from './types.js';
 
@@ -28,6 +32,14 @@ export interface ModelFits {
   comparisonSetFrom: NongravModelId;
   /** True per observation when it is in the comparison set. */
   inSet: boolean[];
+  /** Set when gravity only failed from the start given and was fitted from a model's solution. */
+  gravityRestart: GravityRestart | null;
+}
+
+export interface GravityRestart {
+  from: NongravModelId;
+  /** The failure from the start given. */
+  firstFailure: string;
 }
 
 /** fitOrbit's options for `model`. */
@@ -59,12 +71,37 @@ function* modelFitSteps(input: ModelFitsInput): FitSteps<ModelFits> {
   const failures: CheckModelFailure[] = [];
   say(`fitting gravity only (${input.observations.length} observations)`);
   const [g] = yield [{ start: input.start, options: {} }];
-  if (g.error !== undefined) throw g.error;
-  const gravity = g.fit;
-  say(`gravity only: χ² ${gravity.chi2.toFixed(1)}, ${gravity.kept} kept, ${gravity.rejected} rejected`);
+  let gravity: OrbitFit;
+  let outcomes: FitOutcome[];
+  let gravityRestart: GravityRestart | null = null;
+  if (g.error === undefined) {
+    gravity = g.fit;
+    say(`gravity only: χ² ${gravity.chi2.toFixed(1)}, ${gravity.kept} kept, ${gravity.rejected} rejected`);
+    for (const id of input.models) say(`fitting ${id} (${NONGRAV_MODELS[id].params.map((p) => p.name).join(', ')})`);
+    outcomes = yield input.models.map((id) => ({ start: startAt(gravity), options: fitOptionsOf(NONGRAV_MODELS[id]) }));
+  } else {
+    say(`gravity only: ${g.error.message}`);
+    if (input.models.length === 0) throw g.error;
+    for (const id of input.models) say(`fitting ${id} (${NONGRAV_MODELS[id].params.map((p) => p.name).join(', ')}) from the same start`);
+    outcomes = yield input.models.map((id) => ({ start: input.start, options: fitOptionsOf(NONGRAV_MODELS[id]) }));
+    let from = -1;
+    outcomes.forEach((o, k) => {
+      if (o.error === undefined && (from < 0 || o.fit.rejected < (outcomes[from].fit as OrbitFit).rejected)) from = k;
+    });
+    if (from < 0) throw g.error;
+    const base = outcomes[from].fit as OrbitFit;
+    say(`fitting gravity only again, from the ${input.models[from]} solution on the observations it kept`);
+    const [g2] = yield [{ start: startAt(base), options: { reject: false as const, exclude: indicesOutside(keptMask(base)) } }];
+    if (g2.error !== undefined) {
+      throw new OrbitFitError(g2.error.reason,
+        `gravity only from the start given (${g.error.message}) and from the ${input.models[from]} solution on the observations it kept`,
+        g2.error.iterations, g2.error.lastChi2, g2.error.condition);
+    }
+    gravity = g2.fit;
+    gravityRestart = { from: input.models[from], firstFailure: g.error.message };
+    say(`gravity only: χ² ${gravity.chi2.toFixed(1)}, ${gravity.kept} kept, ${gravity.rejected} rejected`);
+  }
   own.push({ id: 'gravity', fit: gravity, nParams: 6 });
-  for (const id of input.models) say(`fitting ${id} (${NONGRAV_MODELS[id].params.map((p) => p.name).join(', ')})`);
-  const outcomes = yield input.models.map((id) => ({ start: startAt(gravity), options: fitOptionsOf(NONGRAV_MODELS[id]) }));
   input.models.forEach((id, k) => {
     const o = outcomes[k];
     if (o.error !== undefined) {
@@ -75,8 +112,9 @@ function* modelFitSteps(input: ModelFitsInput): FitSteps<ModelFits> {
     say(`${id}: χ² ${o.fit.chi2.toFixed(1)}, ${o.fit.kept} kept, ${o.fit.rejected} rejected`);
     own.push({ id, fit: o.fit, nParams: 6 + NONGRAV_MODELS[id].params.length });
   });
-  yield* retryFailures(input, own, failures, say);
-  const source = comparisonSetSource(own);
+  const sourceOf = (): number => (gravityRestart === null ? comparisonSetSource(own) : own.findIndex((o) => o.id === gravityRestart?.from));
+  yield* retryFailures(input, own, failures, say, sourceOf);
+  const source = sourceOf();
   const inSet = keptMask(own[source].fit);
   const exclude = indicesOutside(inSet);
   const refit = own.filter((o) => !keepsExactly(o.fit, inSet));
@@ -95,16 +133,18 @@ function* modelFitSteps(input: ModelFitsInput): FitSteps<ModelFits> {
     }
     fits.push(summarise(o.id, NONGRAV_MODELS[o.id], r.fit, o.fit.rejected, input.sigmas, inSet));
   }
-  return { fits, failures, comparisonSetFrom: own[source].id, inSet };
+  return { fits, failures, comparisonSetFrom: own[source].id, inSet, gravityRestart };
 }
 
 /**
  * A model whose fit from the gravity-only solution failed (that solution may have rejected many
  * observations a non-gravitational force moved) is tried once more from the state of the fit
- * that rejected the fewest, its own parameters from 0; the failure stays listed when that fails too.
+ * that rejected the fewest (after a gravity restart, the model gravity was fitted from), its own
+ * parameters from 0; the failure stays listed when that fails too.
  */
-function* retryFailures(input: ModelFitsInput, own: Own[], failures: CheckModelFailure[], say: (message: string) => void): FitSteps<void> {
-  const best = own[comparisonSetSource(own)];
+function* retryFailures(input: ModelFitsInput, own: Own[], failures: CheckModelFailure[], say: (message: string) => void,
+  sourceOf: () => number): FitSteps<void> {
+  const best = own[sourceOf()];
   if (best.id === 'gravity' || failures.length === 0) return;
   const failed = [...failures];
   for (const f of failed) say(`fitting ${f.id} again, from the ${best.id} solution`);

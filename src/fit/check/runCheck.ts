@@ -56,6 +56,7 @@ function assemble(designation: string, observations: readonly AstrometryObservat
     designation, observations: [...observations],
     sigmaRaCosDecArcsec: Float64Array.from(sigmas, (s) => s.sigmaRaCosDecArcsec), sigmaDecArcsec: Float64Array.from(sigmas, (s) => s.sigmaDecArcsec),
     fits: mf.fits, failures: mf.failures, comparisonSetFrom: mf.comparisonSetFrom, comparisonSetRule: COMPARISON_SET_RULE,
+    gravityRestart: mf.gravityRestart,
     comparison, preferred, guards, plausibility, verdict,
   };
 }

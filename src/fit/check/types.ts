@@ -96,6 +96,8 @@ export interface CheckResult {
   /** Which fit's outliers define the comparison set, and the rule. */
   comparisonSetFrom: NongravModelId;
   comparisonSetRule: string;
+  /** Set when gravity only failed from the start given and was fitted from a model's solution. */
+  gravityRestart: { from: NongravModelId; firstFailure: string } | null;
   comparison: ModelComparison;
   preferred: NongravModelId;
   guards: CheckGuards;
