@@ -13,8 +13,9 @@ export function commandFiles(files: readonly string[]): string[] {
   return files.length > 0 ? [...files] : demoFiles().map((f) => relative(process.cwd(), f) || f);
 }
 
-export async function loadCommandCatalogue(files: string[], out: string): Promise<{ loaded: Awaited<ReturnType<typeof loadCatalogue>>; errors: string[] }> {
-  const loaded = await loadCatalogue(files);
+/** `threads` ≥ 2: a large plain orbit-export file is parsed on two threads (the same catalogue). */
+export async function loadCommandCatalogue(files: string[], out: string, threads = 1): Promise<{ loaded: Awaited<ReturnType<typeof loadCatalogue>>; errors: string[] }> {
+  const loaded = await loadCatalogue(files, { threads });
   const errors = loaded.errors.map(inputErrorLine);
   if (loaded.files.length > 0 && errors.length === loaded.files.length) throw new Error(`no input could be read; nothing written, ${out} left as it was`);
   return { loaded, errors };

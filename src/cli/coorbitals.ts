@@ -129,7 +129,7 @@ export async function runCoorbitals(opts: CoorbitalsOptions): Promise<Coorbitals
   const files = commandFiles(opts.files);
   const stage = await OutputStage.open(opts.out);
   try {
-    const { loaded, errors } = await loadCommandCatalogue(files, opts.out);
+    const { loaded, errors } = await loadCommandCatalogue(files, opts.out, opts.threads);
     const co: CoorbitalOptions = { ...COORBITAL_DEFAULTS, planets: opts.planet, windowYears: opts.years, confirm: 'all', budgetCpuSeconds: opts.budget, threads: opts.threads, series: true };
     const { results, notScreened, skipped } = await analyseCoorbitals(loaded.catalogue, co);
     sortRejectsInPlace(loaded.rejects, files);
@@ -172,7 +172,7 @@ export function registerCoorbitals(program: Command): void {
     .addOption(withDefault('--planet <names>', `${PLANETS.join(', ')}, a comma list, or all`, [...COORBITAL_DEFAULTS.planets], COORBITAL_DEFAULTS.planets.join(','), parsePlanetList))
     .addOption(withDefault('--years <n>', 'N-body window: the epoch ± n years', COORBITAL_DEFAULTS.windowYears, String(COORBITAL_DEFAULTS.windowYears), parsePositiveInteger))
     .addOption(withDefault('--budget <s>', 'CPU-seconds of N-body work, as a body count at a fixed nominal cost', 3600, '3600', parseNonNegativeNumber))
-    .addOption(withDefault('--threads <n>', 'worker threads (outputs identical for any number)', COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
+    .addOption(withDefault('--threads <n>', 'worker threads (also for reading a large orbit-export file; outputs identical for any number)', COORBITAL_DEFAULTS.threads, String(COORBITAL_DEFAULTS.threads), parsePositiveInteger))
     .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-coorbitals', 'wayward-coorbitals'))
     .action(async (files: string[], flags: Omit<CoorbitalsOptions, 'files'>) => {
       const r = await runCoorbitals({ files, ...flags });

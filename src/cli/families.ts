@@ -158,7 +158,7 @@ export async function runFamilies(opts: FamiliesCliOptions): Promise<FamiliesCli
   const files = commandFiles(opts.files);
   const stage = await OutputStage.open(opts.out);
   try {
-    const { loaded, errors } = await loadCommandCatalogue(files, opts.out);
+    const { loaded, errors } = await loadCommandCatalogue(files, opts.out, opts.threads ?? 1);
     const inputs = await readFamiliesInputs(opts.families);
     const options: FamiliesOptions = {
       ...FAMILIES_DEFAULTS, cutoffMPerS: opts.cutoff ?? null, minMembers: opts.min, fapThreshold: opts.fap, fdrLevel: opts.fdr,
@@ -217,7 +217,7 @@ export function registerFamilies(program: Command): void {
     .addOption(withDefault('--fdr <q>', 'outliers: marked as surviving the false-discovery control when their Benjamini–Hochberg q-value is below this', FAMILIES_DEFAULTS.fdrLevel, String(FAMILIES_DEFAULTS.fdrLevel), parseProbabilityLevel))
     .option('--cutoff <m/s>', "one HCM cutoff for every belt region (default: each region's quasi-random level)", parsePositiveNumber)
     .addOption(withDefault('--min <n>', 'fewest members of a family (N_min, ≥ 2)', FAMILIES_DEFAULTS.minMembers, String(FAMILIES_DEFAULTS.minMembers), parseMinMembers))
-    .addOption(withDefault('--threads <n>', "worker threads for the QRL levels and the outliers' neighbour searches (outputs identical for any number)", FAMILIES_THREADS_DEFAULT, String(FAMILIES_THREADS_DEFAULT), parsePositiveInteger))
+    .addOption(withDefault('--threads <n>', "worker threads for reading a large orbit-export file, the QRL levels and the outliers' neighbour searches (outputs identical for any number)", FAMILIES_THREADS_DEFAULT, String(FAMILIES_THREADS_DEFAULT), parsePositiveInteger))
     .addOption(withDefault('-o, --out <dir>', 'output directory', 'wayward-families', 'wayward-families'))
     .action(async (files: string[], flags: Omit<FamiliesCliOptions, 'files'>) => {
       const r = await runFamilies({ files, ...flags });
