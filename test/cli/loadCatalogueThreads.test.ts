@@ -6,12 +6,13 @@
  * duplicate whose reject carries its raw text, read back from the file on the worker's part.
  * Columns compared bit for bit, rejects and per-file accounts field by field.
  */
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { loadCatalogue } from '../../src/cli/loadCatalogue.js';
 import { PARALLEL_MIN_BYTES } from '../../src/io/orbitExportParts.js';
+import { runCli } from './cliHarness.js';
 
 const DEMO = new URL('../../data/demo/orbits.txt', import.meta.url);
 const dir = mkdtempSync(join(tmpdir(), 'wayward-load-threads-'));
@@ -49,8 +50,6 @@ describe('loadCatalogue on two threads', () => {
 
 describe('scan reading on two threads', () => {
   it('the demo catalogue five times over: every output file byte-identical with --threads 1 and 2', async () => {
-    const { runCli } = await import('./cliHarness.js');
-    const { readdirSync } = await import('node:fs');
     const demo = readFileSync(DEMO);
     const file = join(dir, 'demo-x5-scan.txt');
     writeFileSync(file, Buffer.concat([demo, demo, demo, demo, demo]));

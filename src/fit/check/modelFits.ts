@@ -8,9 +8,9 @@
  * fix the state), the models are fitted from that start instead and gravity only is fitted again
  * from the converged one that rejected the fewest, on the observations that one kept and without
  * rejection of its own (so its χ² there is what gravity alone can do); only when that fails too,
- * or no model converges, does the run fail (OrbitFitError, with its numbers). The fits are asked for in batches of
- * independent ones (checkFitter.ts): here one after another, or on worker threads, with the same
- * result.
+ * or no model converges, does the run fail (OrbitFitError, with its numbers). The fits are asked
+ * for in batches of independent ones (checkFitter.ts): here one after another, or on worker
+ * threads, with the same result.
  */
 import type { ObservationSigma } from '../observationWeights.js';
 import { OrbitFitError, type OrbitFit, type OrbitFitStart } from '../orbitFitTypes.js';
@@ -74,31 +74,34 @@ function* modelFitSteps(input: ModelFitsInput): FitSteps<ModelFits> {
   let gravity: OrbitFit;
   let outcomes: FitOutcome[];
   let gravityRestart: GravityRestart | null = null;
+  const sayFitting = (suffix: string): void => {
+    for (const id of input.models) say(`fitting ${id} (${NONGRAV_MODELS[id].params.map((p) => p.name).join(', ')})${suffix}`);
+  };
   if (g.error === undefined) {
     gravity = g.fit;
     say(`gravity only: χ² ${gravity.chi2.toFixed(1)}, ${gravity.kept} kept, ${gravity.rejected} rejected`);
-    for (const id of input.models) say(`fitting ${id} (${NONGRAV_MODELS[id].params.map((p) => p.name).join(', ')})`);
+    sayFitting('');
     outcomes = yield input.models.map((id) => ({ start: startAt(gravity), options: fitOptionsOf(NONGRAV_MODELS[id]) }));
   } else {
     say(`gravity only: ${g.error.message}`);
-    if (input.models.length === 0) throw g.error;
-    for (const id of input.models) say(`fitting ${id} (${NONGRAV_MODELS[id].params.map((p) => p.name).join(', ')}) from the same start`);
+    sayFitting(' from the same start');
     outcomes = yield input.models.map((id) => ({ start: input.start, options: fitOptionsOf(NONGRAV_MODELS[id]) }));
-    let from = -1;
-    outcomes.forEach((o, k) => {
-      if (o.error === undefined && (from < 0 || o.fit.rejected < (outcomes[from].fit as OrbitFit).rejected)) from = k;
+    const converged = input.models.flatMap((id, k) => {
+      const o = outcomes[k];
+      return o.error === undefined ? [{ id, fit: o.fit, nParams: 6 + NONGRAV_MODELS[id].params.length }] : [];
     });
-    if (from < 0) throw g.error;
-    const base = outcomes[from].fit as OrbitFit;
-    say(`fitting gravity only again, from the ${input.models[from]} solution on the observations it kept`);
-    const [g2] = yield [{ start: startAt(base), options: { reject: false as const, exclude: indicesOutside(keptMask(base)) } }];
+    if (converged.length === 0) throw g.error;
+    // The same rule as the comparison set's: the fit that rejected the fewest.
+    const base = converged[comparisonSetSource(converged)];
+    say(`fitting gravity only again, from the ${base.id} solution on the observations it kept`);
+    const [g2] = yield [{ start: startAt(base.fit), options: { reject: false as const, exclude: indicesOutside(keptMask(base.fit)) } }];
     if (g2.error !== undefined) {
       throw new OrbitFitError(g2.error.reason,
-        `gravity only from the start given (${g.error.message}) and from the ${input.models[from]} solution on the observations it kept`,
+        `gravity only from the start given (${g.error.message}) and from the ${base.id} solution on the observations it kept`,
         g2.error.iterations, g2.error.lastChi2, g2.error.condition);
     }
     gravity = g2.fit;
-    gravityRestart = { from: input.models[from], firstFailure: g.error.message };
+    gravityRestart = { from: base.id, firstFailure: g.error.message };
     say(`gravity only: χ² ${gravity.chi2.toFixed(1)}, ${gravity.kept} kept, ${gravity.rejected} rejected`);
   }
   own.push({ id: 'gravity', fit: gravity, nParams: 6 });
@@ -112,7 +115,10 @@ function* modelFitSteps(input: ModelFitsInput): FitSteps<ModelFits> {
     say(`${id}: χ² ${o.fit.chi2.toFixed(1)}, ${o.fit.kept} kept, ${o.fit.rejected} rejected`);
     own.push({ id, fit: o.fit, nParams: 6 + NONGRAV_MODELS[id].params.length });
   });
-  const sourceOf = (): number => (gravityRestart === null ? comparisonSetSource(own) : own.findIndex((o) => o.id === gravityRestart?.from));
+  // After a restart the gravity-only fit kept exactly the model's set (rejecting none of its own),
+  // so the set is the model's.
+  const restartFrom = gravityRestart?.from;
+  const sourceOf = (): number => (restartFrom === undefined ? comparisonSetSource(own) : own.findIndex((o) => o.id === restartFrom));
   yield* retryFailures(input, own, failures, say, sourceOf);
   const source = sourceOf();
   const inSet = keptMask(own[source].fit);
